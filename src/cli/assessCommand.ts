@@ -1,0 +1,85 @@
+import { Option, type Command } from 'commander';
+import { loadScenario } from '../scenario/loadScenario.js';
+import { assessColumn } from '../studies/columnAssessment.js';
+import { assessmentJson } from '../studies/assessmentJson.js';
+import { assessmentReportInput } from '../studies/assessmentReport.js';
+import { writeOutputs } from '../report/writeOutputs.js';
+import type { UnitSystem } from '../report/displayUnits.js';
+import type { Method } from '../scenario/types.js';
+import type { EndChoice } from '../studies/columnRestraint.js';
+import { readScenarioText } from './readScenarioText.js';
+import { formatAssessment } from './assessSummary.js';
+import { parseEnd, parseMethods, parseNonNegativeInteger, parsePositiveInteger } from './optionParsers.js';
+import { CAUTION } from './textTable.js';
+import { toolVersion } from './version.js';
+import { progressPrinter } from './progressPrinter.js';
+import { InterruptedError, withInterrupt } from './interrupt.js';
+
+export interface AssessCliOptions {
+  json?: boolean;
+  out?: string;
+  force?: boolean;
+  seed?: number;
+  methods?: Method[];
+  samples?: number;
+  workers?: number;
+  units?: UnitSystem;
+  end?: EndChoice;
+}
+
+export async function runAssess(file: string, opts: AssessCliOptions, argv: string[]): Promise<void> {
+  const { text, fileName } = readScenarioText(file);
+  const scenario = loadScenario(text, fileName);
+  const system = opts.units ?? scenario.displayUnits;
+  const progress = progressPrinter();
+  const a = await withInterrupt((signal) =>
+    assessColumn(scenario, {
+      text,
+      methods: opts.methods,
+      samples: opts.samples,
+      seed: opts.seed,
+      workers: opts.workers,
+      end: opts.end,
+      signal,
+      onProgress: progress.update,
+    }),
+  );
+  progress.done();
+  if (a.interrupted) {
+    const done = a.mc ? `${a.mc.samples} Monte Carlo samples` : a.is ? `${a.is.samples} importance samples` : 'part of the run';
+    throw new InterruptedError(`interrupted after ${done}; nothing was written`);
+  }
+  const meta = { version: toolVersion(), date: new Date().toISOString(), command: ['stanchion', ...argv].join(' ') };
+  const json = assessmentJson(a, meta);
+  if (opts.out) {
+    const input = assessmentReportInput(a, meta, json);
+    const written = await writeOutputs(opts.out, input, json, { force: opts.force, units: system });
+    process.stderr.write(`stanchion: report written to ${written.dir}/report.html (${written.files.length} files)\n`);
+  }
+  if (opts.json) {
+    process.stdout.write(JSON.stringify(json, null, 2) + '\n');
+    return;
+  }
+  process.stdout.write(formatAssessment(a, system));
+}
+
+export function registerAssess(program: Command, unitsOption: () => Option): void {
+  program
+    .command('assess')
+    .description('reliability, sensitivity, restraint study and report for one scenario')
+    .argument('<FILE>', 'scenario (.yaml, .yml, .json, or - for stdin)')
+    .option('--json', 'print one JSON document (SI units) on stdout')
+    .option('--out <DIR>', 'write the report (HTML, Markdown, JSON, CSV, charts) into DIR')
+    .option('--force', 'replace DIR when it exists')
+    .addOption(new Option('--seed <N>', 'seed of every random stream (default: the scenario\'s, else 1)').argParser(parseNonNegativeInteger))
+    .addOption(new Option('--methods <LIST>', 'comma-separated: form, sorm, is, mc, subset').argParser(parseMethods))
+    .addOption(new Option('--samples <N>', 'Monte Carlo samples (default: the scenario\'s, else 1e6)').argParser(parsePositiveInteger))
+    .addOption(new Option('--workers <N>', 'worker threads for Monte Carlo (same numbers whatever N)').argParser(parsePositiveInteger))
+    .addOption(new Option('--end <end>', 'ends for the restraint study: bottom, top or both').argParser(parseEnd))
+    .addOption(unitsOption())
+    .addHelpText(
+      'after',
+      `\nExamples:\n  stanchion assess scenarios/braced-base-plate.yaml\n  stanchion assess scenarios/braced-base-plate.yaml --out reports/braced-base-plate --force\n  stanchion assess scenarios/sway-canopy-post.yaml --methods form,sorm,mc --samples 2e6 --workers 2 --json\n\nExit codes: 0 done, 1 internal failure, 2 bad input or usage, 130 interrupted (Ctrl-C).\n\n${CAUTION}\n`,
+    )
+    .action((file: string, opts: AssessCliOptions) => runAssess(file, opts, process.argv.slice(2)));
+}

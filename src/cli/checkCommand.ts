@@ -1,0 +1,95 @@
+import { deterministicCheck, checkJson, type CheckResult } from '../limitState/deterministicCheck.js';
+import { buildColumnModel } from '../limitState/columnModel.js';
+import { loadScenario } from '../scenario/loadScenario.js';
+import type { End, Scenario } from '../scenario/types.js';
+import { formatQuantity, type UnitSystem } from '../report/displayUnits.js';
+import { readScenarioText } from './readScenarioText.js';
+import { CAUTION, textTable } from './textTable.js';
+
+export interface CheckOptions {
+  json?: boolean;
+  units?: UnitSystem;
+}
+
+function endLabel(end: End, system: UnitSystem): string {
+  switch (end.type) {
+    case 'pinned':
+      return 'pinned';
+    case 'fixed':
+      return 'fixed';
+    case 'rotation':
+      return end.k.kind === 'fixed'
+        ? `spring ${formatQuantity(end.k.value, 'rotationalStiffness', system)}`
+        : `spring, mean ${formatQuantity(end.k.spec.mean ?? NaN, 'rotationalStiffness', system)} (${end.k.spec.dist})`;
+    case 'ratio':
+      return `${end.from === 'fixity' ? 'fixity factor' : 'alignment-chart G'} given`;
+  }
+}
+
+function num(v: number | null, digits = 3): string {
+  if (v === null || !Number.isFinite(v)) return '∞';
+  return v.toPrecision(digits);
+}
+
+export function formatCheck(s: Scenario, c: CheckResult, system: UnitSystem): string {
+  const q = (v: number, kind: Parameters<typeof formatQuantity>[1]) => formatQuantity(v, kind, system);
+  const L = s.column.length;
+  const lines: string[] = [];
+  lines.push(`stanchion check: ${s.title}`);
+  lines.push(
+    `  ${s.column.frame} column, L = ${q(L, 'length')}, strength model ${s.strength}; every random variable at its mean`,
+  );
+  lines.push('');
+  lines.push(
+    textTable([
+      ['end', 'restraint', 'R = kL/EI', 'fixity X = R/(R+3)'],
+      ['bottom', endLabel(s.column.ends.bottom, system), num(c.restraint_ratio.bottom), c.fixity_factor.bottom.toFixed(3)],
+      ['top', endLabel(s.column.ends.top, system), num(c.restraint_ratio.top), c.fixity_factor.top.toFixed(3)],
+    ]),
+  );
+  if (c.lateral_ratio !== null) lines.push(`  lateral spring at the top: T = kT L³/EI = ${num(c.lateral_ratio)}`);
+  lines.push('');
+  const m1 = c.modes[0];
+  const rows: string[][] = [
+    ['critical load Pcr', q(c.critical_load, 'force')],
+    ['effective length factor K', `${c.effective_length_factor.toFixed(3)}  (K L = ${q(c.effective_length_factor * L, 'length')})`],
+  ];
+  if (m1) {
+    const infl = m1.inflection_points.length ? m1.inflection_points.map((x) => q(x, 'length')).join(', ') : 'none inside the column';
+    rows.push(['inflection points (above base)', infl]);
+    rows.push([
+      'distance between inflections',
+      m1.effective_length_from_inflections ? q(m1.effective_length, 'length') : `— (equivalent pinned length ${q(m1.effective_length, 'length')})`,
+    ]);
+  }
+  rows.push(['curvature factor c', c.curvature_factor.toFixed(3)]);
+  rows.push(['capacity', q(c.capacity, 'force')]);
+  rows.push(['demand (sum of loads)', q(c.demand, 'force')]);
+  rows.push(['utilization', `${c.utilization.toFixed(3)}  = demand / (model factor ${c.model_factor.toPrecision(3)} × capacity)`]);
+  lines.push(textTable(rows));
+  if (c.modes.length > 1) {
+    lines.push('');
+    lines.push('  higher modes:');
+    lines.push(
+      textTable(
+        c.modes.slice(1).map((m) => [`mode ${m.mode}`, q(m.critical_load, 'force'), `K = ${m.effective_length_factor.toFixed(3)}`]),
+        '    ',
+      ),
+    );
+  }
+  lines.push('');
+  lines.push(CAUTION);
+  return lines.join('\n') + '\n';
+}
+
+export function runCheck(file: string, opts: CheckOptions): void {
+  const { text, fileName } = readScenarioText(file);
+  const scenario = loadScenario(text, fileName);
+  const model = buildColumnModel(scenario);
+  const result = deterministicCheck(model);
+  if (opts.json) {
+    process.stdout.write(JSON.stringify({ check: checkJson(result) }, null, 2) + '\n');
+    return;
+  }
+  process.stdout.write(formatCheck(scenario, result, opts.units ?? scenario.displayUnits));
+}

@@ -1,0 +1,53 @@
+import { InvalidArgumentError } from 'commander';
+
+const METHODS = ['form', 'sorm', 'is', 'mc', 'subset'] as const;
+export type MethodName = (typeof METHODS)[number];
+
+export function parseNonNegativeInteger(value: string): number {
+  if (!/^\d+$/.test(value.trim()) || !Number.isSafeInteger(Number(value))) {
+    throw new InvalidArgumentError('expected a whole number ≥ 0.');
+  }
+  return Number(value);
+}
+
+export function parsePositiveInteger(value: string): number {
+  const v = value.trim();
+  // allow 1e6 style counts, but only when they denote a whole number
+  const n = Number(v);
+  if (!/^[0-9.eE+]+$/.test(v) || !Number.isSafeInteger(n) || n < 1) {
+    throw new InvalidArgumentError('expected a whole number ≥ 1 (e.g. 100000 or 1e6).');
+  }
+  return n;
+}
+
+export function parseMethods(value: string): MethodName[] {
+  const list = value.split(',').map((m) => m.trim().toLowerCase()).filter(Boolean);
+  if (list.length === 0) throw new InvalidArgumentError(`expected a comma-separated list of ${METHODS.join(', ')}.`);
+  for (const m of list) {
+    if (!(METHODS as readonly string[]).includes(m)) {
+      throw new InvalidArgumentError(`unknown method '${m}'; expected some of ${METHODS.join(', ')}.`);
+    }
+  }
+  return [...new Set(list)] as MethodName[];
+}
+
+export function parseUnits(value: string): 'si' | 'us' {
+  if (value !== 'si' && value !== 'us') throw new InvalidArgumentError("expected 'si' or 'us'.");
+  return value;
+}
+
+export function parseEnd(value: string): 'bottom' | 'top' | 'both' {
+  if (value !== 'bottom' && value !== 'top' && value !== 'both') throw new InvalidArgumentError("expected 'bottom', 'top' or 'both'.");
+  return value;
+}
+
+export function parseShard(value: string): { index: number; count: number } {
+  const m = /^(\d+)\/(\d+)$/.exec(value.trim());
+  if (!m) throw new InvalidArgumentError('expected I/N, e.g. 0/4 (shard I of N, counting from 0).');
+  const index = Number(m[1]);
+  const count = Number(m[2]);
+  if (count < 1 || index >= count) throw new InvalidArgumentError('expected 0 ≤ I < N.');
+  return { index, count };
+}
+
+export { METHODS };

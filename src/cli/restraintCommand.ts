@@ -1,0 +1,44 @@
+import { loadScenario } from '../scenario/loadScenario.js';
+import { columnRestraint, restraintJson, type EndChoice } from '../studies/columnRestraint.js';
+import { formatQuantity, type UnitSystem } from '../report/displayUnits.js';
+import { readScenarioText } from './readScenarioText.js';
+import { CAUTION, textTable } from './textTable.js';
+
+export interface RestraintOptions {
+  json?: boolean;
+  end?: EndChoice;
+  units?: UnitSystem;
+}
+
+export function runRestraint(file: string, opts: RestraintOptions): void {
+  const { text, fileName } = readScenarioText(file);
+  const scenario = loadScenario(text, fileName);
+  const system = opts.units ?? scenario.displayUnits;
+  const r = columnRestraint(scenario, { end: opts.end, units: system });
+  if (opts.json) {
+    process.stdout.write(JSON.stringify({ restraint: restraintJson(r) }, null, 2) + '\n');
+    return;
+  }
+  const ends = r.study.ends;
+  const rows: string[][] = [[...ends.map((e) => `${e} mean k`), 'FORM β', 'pf', '']];
+  for (const p of r.study.curve) {
+    rows.push([
+      ...ends.map((e) => (p.ideal === 'pinned' ? 'pinned' : p.ideal === 'fixed' ? 'fixed' : formatQuantity(p.stiffness[e], 'rotationalStiffness', system))),
+      Number.isFinite(p.beta) ? p.beta.toFixed(2) : String(p.beta),
+      p.pf.toExponential(2),
+      p.beta >= r.study.target ? '≥ target' : '',
+    ]);
+  }
+  const out = [
+    `stanchion restraint: ${scenario.title}`,
+    `  FORM β as the mean stiffness of the ${ends.join(' and ')} connection${ends.length > 1 ? 's' : ''} is scaled (coefficient of variation kept); target β = ${r.study.target}`,
+    '',
+    textTable(rows),
+    '',
+    `  ${r.sentence}`,
+    ...r.notes.map((n) => `  note: ${n}`),
+    '',
+    CAUTION,
+  ];
+  process.stdout.write(out.join('\n') + '\n');
+}

@@ -1,0 +1,165 @@
+/**
+ * The bridge from a scenario to numbers: which scenario values are random (and where each one
+ * sits in the vector x), and the column's capacity, demand and limit state at any x.
+ * g(x) = θ·capacity(x) − Σ loads (CONTRACT.md §3). Hot path: no allocation per call.
+ */
+import type { Distribution } from '../probability/distribution.js';
+import { makeDistribution } from '../probability/makeDistribution.js';
+import { columnCapacity } from '../mechanics/columnCapacity.js';
+import { makeFastCapacityFromRatio } from '../mechanics/fastColumn.js';
+import type { ColumnState } from '../mechanics/types.js';
+import type { End, Scalar, Scenario } from '../scenario/types.js';
+import { randomVariables } from '../scenario/variables.js';
+import { restraintRatio } from '../scenario/restraintRatio.js';
+
+/** Where a value comes from: x[index] when random, else the fixed value. */
+interface Slot {
+  readonly index: number;
+  readonly value: number;
+}
+
+export interface ColumnModel {
+  readonly scenario: Scenario;
+  /** contract paths of the random variables, in the order of x */
+  readonly names: string[];
+  readonly dists: Distribution[];
+  /** Pearson correlation of x (null when independent) */
+  readonly correlation: number[][] | null;
+  /** every random variable at its mean */
+  readonly mean: Float64Array;
+  capacity(x: Float64Array): number;
+  demand(x: Float64Array): number;
+  modelFactor(x: Float64Array): number;
+  /** θ·capacity − demand */
+  g(x: Float64Array): number;
+  /** demand / (θ·capacity), as in `check` when x is the mean */
+  utilization(x: Float64Array): number;
+  /** everything the mechanics needs at x (allocates: not for hot loops) */
+  state(x: Float64Array): ColumnState;
+}
+
+function slotOf(scalar: Scalar, path: string, names: readonly string[]): Slot {
+  if (scalar.kind === 'fixed') return { index: -1, value: scalar.value };
+  const index = names.indexOf(path);
+  if (index < 0) throw new Error(`random variable ${path} is missing from the variable list`);
+  return { index, value: NaN };
+}
+
+function read(slot: Slot, x: Float64Array): number {
+  return slot.index < 0 ? slot.value : x[slot.index];
+}
+
+/** An end as a function of (x, EI) → R = kL/EI. */
+type EndRatio = (x: Float64Array, EI: number) => number;
+
+function endRatio(end: End, path: string, names: readonly string[], s: Scenario): EndRatio {
+  const L = s.column.length;
+  switch (end.type) {
+    case 'pinned':
+      return () => 0;
+    case 'fixed':
+      return () => Infinity;
+    case 'rotation': {
+      const k = slotOf(end.k, `${path}.rotation`, names);
+      return (x, EI) => (read(k, x) * L) / EI;
+    }
+    case 'ratio': {
+      const input = slotOf(end.input, `${path}.${end.from}`, names);
+      const from = end.from;
+      const frame = s.column.frame;
+      if (input.index < 0) {
+        const R = end.R;
+        return () => R;
+      }
+      return (x) => restraintRatio(from, frame, x[input.index]);
+    }
+  }
+}
+
+function correlationMatrix(s: Scenario, names: readonly string[]): number[][] | null {
+  if (s.correlation.length === 0) return null;
+  const n = names.length;
+  const R: number[][] = Array.from({ length: n }, (_, i) => Array.from({ length: n }, (_, j) => (i === j ? 1 : 0)));
+  for (const { a, b, rho } of s.correlation) {
+    const i = names.indexOf(a);
+    const j = names.indexOf(b);
+    if (i < 0 || j < 0) throw new Error(`correlation names ${a} / ${b} which are not random variables`);
+    R[i][j] = rho;
+    R[j][i] = rho;
+  }
+  return R;
+}
+
+export function buildColumnModel(s: Scenario): ColumnModel {
+  const vars = randomVariables(s);
+  const names = vars.map((v) => v.path);
+  const dists = vars.map((v) => makeDistribution(v.spec));
+  const mean = Float64Array.from(dists, (d) => d.mean);
+  const c = s.column;
+  const L = c.length;
+  const A = slotOf(c.section.area, 'column.section.area', names);
+  const I = slotOf(c.section.inertia, 'column.section.inertia', names);
+  const S = slotOf(c.section.sectionModulus, 'column.section.section_modulus', names);
+  const E = slotOf(c.material.E, 'column.material.E', names);
+  const fy = slotOf(c.material.fy, 'column.material.fy', names);
+  const bow = slotOf(c.bow, 'column.imperfection.bow', names);
+  const theta = slotOf(s.modelFactor, 'model_factor', names);
+  const loads = s.loads.map((l) => slotOf(l.value, l.path, names));
+  const lateral = c.ends.lateral === null ? null : slotOf(c.ends.lateral, 'column.ends.lateral', names);
+  const bottom = endRatio(c.ends.bottom, 'column.ends.bottom', names, s);
+  const top = endRatio(c.ends.top, 'column.ends.top', names, s);
+  const frame = c.frame;
+  const strength = s.strength;
+  const fast = makeFastCapacityFromRatio(frame, strength);
+  // A lateral spring that is zero everywhere lets the tabulated fast path serve every sample.
+  const lateralAlwaysZero = lateral === null || (lateral.index < 0 && lateral.value === 0);
+
+  const state = (x: Float64Array): ColumnState => {
+    const EI = read(E, x) * read(I, x);
+    return {
+      E: read(E, x),
+      fy: read(fy, x),
+      A: read(A, x),
+      I: read(I, x),
+      S: read(S, x),
+      L,
+      bow: read(bow, x),
+      frame,
+      r: {
+        bottom: bottom(x, EI),
+        top: top(x, EI),
+        lateral: lateral === null ? 0 : (read(lateral, x) * L * L * L) / EI,
+      },
+    };
+  };
+
+  const capacity = (x: Float64Array): number => {
+    const e = read(E, x);
+    const i = read(I, x);
+    const EI = e * i;
+    if (lateralAlwaysZero) {
+      return fast(e, read(fy, x), read(A, x), i, read(S, x), L, read(bow, x), bottom(x, EI), top(x, EI));
+    }
+    return columnCapacity(strength, state(x)).capacity;
+  };
+  const demand = (x: Float64Array): number => {
+    let sum = 0;
+    for (let k = 0; k < loads.length; k++) sum += read(loads[k], x);
+    return sum;
+  };
+  const modelFactor = (x: Float64Array): number => read(theta, x);
+
+  return {
+    scenario: s,
+    names,
+    dists,
+    correlation: correlationMatrix(s, names),
+    mean,
+    capacity,
+    demand,
+    modelFactor,
+    g: (x) => modelFactor(x) * capacity(x) - demand(x),
+    utilization: (x) => demand(x) / (modelFactor(x) * capacity(x)),
+    state,
+  };
+}

@@ -1,0 +1,48 @@
+import type { QuantityKind } from '../report/reportInput.js';
+
+/** What a scenario value measures, by its contract path, so it can be shown in display units. */
+export function quantityKindOf(path: string): QuantityKind {
+  if (path.startsWith('loads.')) return 'force';
+  if (/^column\.ends\.(bottom|top)\.rotation$/.test(path)) return 'rotationalStiffness';
+  switch (path) {
+    case 'column.length':
+    case 'column.imperfection.bow':
+      return 'length';
+    case 'column.section.area':
+      return 'area';
+    case 'column.section.inertia':
+      return 'inertia';
+    case 'column.section.section_modulus':
+      return 'sectionModulus';
+    case 'column.material.E':
+    case 'column.material.fy':
+      return 'stress';
+    case 'column.ends.lateral':
+      return 'translationalStiffness';
+    default:
+      return 'dimensionless';
+  }
+}
+
+/** Plain words for a path, for tables people read. */
+export function describePath(path: string): string {
+  if (path.startsWith('loads.')) return `load: ${path.slice(6)}`;
+  const words: Record<string, string> = {
+    'column.length': 'column length',
+    'column.section.area': 'cross-section area',
+    'column.section.inertia': 'second moment of area',
+    'column.section.section_modulus': 'elastic section modulus',
+    'column.material.E': 'elastic modulus',
+    'column.material.fy': 'yield strength',
+    'column.ends.bottom.rotation': 'bottom connection rotational stiffness',
+    'column.ends.top.rotation': 'top connection rotational stiffness',
+    'column.ends.bottom.fixity': 'bottom fixity factor',
+    'column.ends.top.fixity': 'top fixity factor',
+    'column.ends.bottom.alignment_g': 'bottom alignment-chart G',
+    'column.ends.top.alignment_g': 'top alignment-chart G',
+    'column.ends.lateral': 'lateral spring at the top',
+    'column.imperfection.bow': 'bow imperfection',
+    model_factor: 'model factor',
+  };
+  return words[path] ?? path;
+}

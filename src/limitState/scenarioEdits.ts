@@ -1,0 +1,101 @@
+/**
+ * Copies of a scenario with one value changed, by its contract path. The studies use these to ask
+ * "what if": a variable known exactly (conditional β), a shifted mean (elasticities), a stiffer
+ * connection (restraint study), a swept quantity.
+ */
+import type { DistSpec } from '../probability/distribution.js';
+import type { End, Scalar, Scenario } from '../scenario/types.js';
+import { restraintRatio } from '../scenario/restraintRatio.js';
+
+type Mutable<T> = { -readonly [K in keyof T]: Mutable<T[K]> };
+
+function clone(s: Scenario): Mutable<Scenario> {
+  return structuredClone(s) as Mutable<Scenario>;
+}
+
+function setEndScalar(end: Mutable<End>, leaf: string, scalar: Scalar, s: Scenario, path: string): void {
+  if (leaf === 'rotation' && end.type === 'rotation') {
+    end.k = scalar;
+    return;
+  }
+  if (end.type === 'ratio' && leaf === end.from) {
+    end.input = scalar;
+    const v = scalar.kind === 'fixed' ? scalar.value : (scalar.spec.mean ?? NaN);
+    end.R = restraintRatio(end.from, s.column.frame, v);
+    return;
+  }
+  throw new Error(`${path} is not a value of this scenario`);
+}
+
+/** The scenario with the scalar at `path` replaced. Correlations of a variable made fixed are dropped. */
+export function withScalar(s: Scenario, path: string, scalar: Scalar): Scenario {
+  const out = clone(s);
+  const c = out.column;
+  const endMatch = /^column\.ends\.(bottom|top)\.(rotation|fixity|alignment_g)$/.exec(path);
+  if (endMatch) {
+    setEndScalar(c.ends[endMatch[1] as 'bottom' | 'top'], endMatch[2], scalar, s, path);
+  } else if (path.startsWith('loads.')) {
+    const load = out.loads.find((l) => l.path === path);
+    if (!load) throw new Error(`${path} is not a load of this scenario`);
+    load.value = scalar;
+  } else {
+    switch (path) {
+      case 'column.section.area': c.section.area = scalar; break;
+      case 'column.section.inertia': c.section.inertia = scalar; break;
+      case 'column.section.section_modulus': c.section.sectionModulus = scalar; break;
+      case 'column.material.E': c.material.E = scalar; break;
+      case 'column.material.fy': c.material.fy = scalar; break;
+      case 'column.ends.lateral':
+        if (c.ends.lateral === null) throw new Error(`${path}: a braced column has no lateral spring`);
+        c.ends.lateral = scalar;
+        break;
+      case 'column.imperfection.bow': c.bow = scalar; break;
+      case 'model_factor': out.modelFactor = scalar; break;
+      default:
+        throw new Error(`${path} is not a value of this scenario`);
+    }
+  }
+  if (scalar.kind === 'fixed') out.correlation = out.correlation.filter((r) => r.a !== path && r.b !== path);
+  return out as Scenario;
+}
+
+/** A distribution with its mean and standard deviation moved (coefficient of variation recomputed). */
+export function withMoments(spec: DistSpec, mean: number, sd: number): DistSpec {
+  const out: DistSpec = { ...spec, mean };
+  if (spec.dist === 'uniform') {
+    const half = Math.sqrt(3) * sd;
+    return { dist: 'uniform', min: mean - half, max: mean + half };
+  }
+  delete out.cov;
+  out.sd = sd;
+  return out;
+}
+
+/** Every length-like parameter of a distribution multiplied by `factor` (its coefficient of variation kept). */
+export function scaleSpec(spec: DistSpec, factor: number): DistSpec {
+  const out: DistSpec = { ...spec };
+  for (const key of ['mean', 'sd', 'min', 'max'] as const) if (out[key] !== undefined) out[key] = (out[key] as number) * factor;
+  return out;
+}
+
+/** A scalar multiplied by `factor`: a fixed value, or a random one with its CoV kept. */
+export function scaleScalar(v: Scalar, factor: number): Scalar {
+  return v.kind === 'fixed' ? { kind: 'fixed', value: v.value * factor } : { kind: 'random', spec: scaleSpec(v.spec, factor) };
+}
+
+/**
+ * The scenario with the rotational spring of `end` set from its base stiffness times `factor`:
+ * 0 → pinned, Infinity → fixed.
+ */
+export function withEndStiffness(s: Scenario, end: 'bottom' | 'top', base: Scalar, factor: number): Scenario {
+  const out = clone(s);
+  const replaced: End =
+    factor === 0 ? { type: 'pinned' } : factor === Infinity ? { type: 'fixed' } : { type: 'rotation', k: scaleScalar(base, factor) };
+  out.column.ends[end] = replaced as Mutable<End>;
+  // a correlation survives only while its variable does (a random spring keeps the path `.rotation`)
+  const prefix = `column.ends.${end}.`;
+  const kept = replaced.type === 'rotation' && replaced.k.kind === 'random' ? `${prefix}rotation` : null;
+  const gone = (p: string) => p.startsWith(prefix) && p !== kept;
+  out.correlation = out.correlation.filter((r) => !gone(r.a) && !gone(r.b));
+  return out as Scenario;
+}

@@ -1,0 +1,33 @@
+import { aiscCapacity } from './aisc360.js';
+import { criticalLoad } from './criticalLoad.js';
+import { EN_IMPERFECTION, enCapacity, type EnCurve } from './en1993.js';
+import { firstYieldCapacity } from './firstYield.js';
+import { modeShape } from './modeShape.js';
+import type { CapacityResult, ColumnState, StrengthModel } from './types.js';
+
+/** Capacity from Pcr and c for a strength model (shared by the exact and the fast path). */
+export function capacityFromPcr(model: StrengthModel, A: number, S: number, fy: number, bow: number, Pcr: number, c: number): number {
+  switch (model) {
+    case 'first-yield':
+      return firstYieldCapacity(A, S, fy, Pcr, bow, c);
+    case 'aisc360-e3':
+      return aiscCapacity(A, fy, Pcr);
+    default:
+      return enCapacity(EN_IMPERFECTION[model.slice(7) as EnCurve], A, fy, Pcr);
+  }
+}
+
+export function isStrengthModel(s: string): s is StrengthModel {
+  return s === 'first-yield' || s === 'aisc360-e3' || (s.startsWith('en1993-') && s.slice(7) in EN_IMPERFECTION);
+}
+
+/**
+ * Axial capacity of the restrained column (CONTRACT §3), exact path: critical load from the
+ * characteristic equation, c from the closed-form first mode. A mechanism gives capacity 0.
+ */
+export function columnCapacity(model: StrengthModel, s: ColumnState): CapacityResult {
+  if (!isStrengthModel(model)) throw new RangeError(`unknown strength model '${String(model)}'`);
+  const { Pcr, phi, K } = criticalLoad(s.E * s.I, s.L, s.frame, s.r);
+  const c = modeShape(s.frame, s.r, phi).curvatureFactor;
+  return { capacity: capacityFromPcr(model, s.A, s.S, s.fy, s.bow, Pcr, c), Pcr, K, c };
+}

@@ -1,0 +1,99 @@
+/** Types shared by the column mechanics. SI units throughout (N, m, Pa, N·m/rad). */
+
+export type Frame = 'braced' | 'sway';
+
+/**
+ * End restraint of the column, dimensionless.
+ * bottom/top: R = k L / (E I) of the rotational spring (0 pinned, Infinity fixed).
+ * lateral: T = kT L³ / (E I) of a translational spring at the top (sway frames only; default 0).
+ */
+export interface EndRestraint {
+  bottom: number;
+  top: number;
+  lateral?: number;
+}
+
+export interface CriticalLoadResult {
+  /** elastic critical load (N); 0 for a mechanism */
+  Pcr: number;
+  /** φ = L √(Pcr / EI) */
+  phi: number;
+  /** effective length factor K = π / φ; Infinity for a mechanism */
+  K: number;
+}
+
+/** Buckled shape w(ξ) = A sin φξ + B cos φξ + C ξ + D, ξ = x/L, normalised to max|w| = 1. */
+export interface ModeShape {
+  readonly frame: Frame;
+  readonly phi: number;
+  /** coefficients of the normalised shape: w = A sin(φξ) + B cos(φξ) + C ξ + D */
+  readonly A: number;
+  readonly B: number;
+  readonly C: number;
+  readonly D: number;
+  /** w(ξ), ξ ∈ [0, 1]; max|w| = 1 (braced: from the chord; sway: from the vertical through the base) */
+  sample(xi: number): number;
+  /** d²w/dξ² */
+  curvature(xi: number): number;
+  /** ξ where |w| is largest (the value there is +1) */
+  readonly maxDeflectionAt: number;
+  /** max |d²w/dξ²| over [0, 1] for the normalised shape */
+  readonly maxCurvature: number;
+  /** ξ where |w''| is largest */
+  readonly maxCurvatureAt: number;
+  /** c = EI max|w''| / (Pcr max|w|) (CONTRACT §3); 0 for a mechanism (no curvature) */
+  readonly curvatureFactor: number;
+  /** zeros of w'' strictly inside (0, 1), increasing */
+  readonly inflectionPoints: readonly number[];
+  /** zeros of w'' in the closed interval [0, 1] (includes pinned ends) */
+  readonly curvatureZeros: readonly number[];
+  /**
+   * Effective length / L: distance between consecutive zeros of w'' in [0, 1] when there are two;
+   * otherwise the spacing π/φ of the zeros of the continued sinusoid (the equivalent pinned column,
+   * e.g. 2 for a flagpole); Infinity for a mechanism.
+   */
+  readonly effectiveLength: number;
+  /** true when effectiveLength was measured between two zeros of w'' inside the column */
+  readonly effectiveLengthFromInflections: boolean;
+}
+
+export type StrengthModel =
+  | 'first-yield'
+  | 'aisc360-e3'
+  | 'en1993-a0'
+  | 'en1993-a'
+  | 'en1993-b'
+  | 'en1993-c'
+  | 'en1993-d';
+
+export const STRENGTH_MODELS: readonly StrengthModel[] = [
+  'first-yield',
+  'aisc360-e3',
+  'en1993-a0',
+  'en1993-a',
+  'en1993-b',
+  'en1993-c',
+  'en1993-d',
+];
+
+/** Everything the strength models need (SI). bow = e0, either sign (|e0| is used). */
+export interface ColumnState {
+  E: number;
+  fy: number;
+  A: number;
+  I: number;
+  S: number;
+  L: number;
+  bow: number;
+  frame: Frame;
+  r: EndRestraint;
+}
+
+export interface CapacityResult {
+  /** axial resistance (N); 0 for a mechanism */
+  capacity: number;
+  Pcr: number;
+  K: number;
+  /** curvature factor of the first mode (0 for a mechanism) */
+  c: number;
+}

@@ -1,0 +1,42 @@
+/**
+ * Cholesky factor of a symmetric positive-definite matrix, R = L Lᵀ with L lower triangular,
+ * stored row-major in a Float64Array (n × n, upper part zero). Returns null when the matrix
+ * is not positive definite (a pivot ≤ tolerance · diagonal), leaving the message to callers.
+ */
+export function choleskyLower(matrix: ArrayLike<ArrayLike<number>>, relativePivotTolerance = 1e-12): Float64Array | null {
+  const n = matrix.length;
+  const L = new Float64Array(n * n);
+  for (let i = 0; i < n; i++) {
+    for (let j = 0; j <= i; j++) {
+      let sum = matrix[i][j];
+      for (let k = 0; k < j; k++) sum -= L[i * n + k] * L[j * n + k];
+      if (i === j) {
+        if (!(sum > relativePivotTolerance * Math.abs(matrix[i][i]))) return null;
+        L[i * n + i] = Math.sqrt(sum);
+      } else {
+        L[i * n + j] = sum / L[j * n + j];
+      }
+    }
+  }
+  return L;
+}
+
+/** y = L x for row-major lower-triangular L (y may not alias x). */
+export function lowerTimes(L: Float64Array, n: number, x: ArrayLike<number>, y: Float64Array): void {
+  for (let i = 0; i < n; i++) {
+    let sum = 0;
+    const row = i * n;
+    for (let k = 0; k <= i; k++) sum += L[row + k] * x[k];
+    y[i] = sum;
+  }
+}
+
+/** Solve L x = b by forward substitution (x may alias b). */
+export function lowerSolve(L: Float64Array, n: number, b: ArrayLike<number>, x: Float64Array): void {
+  for (let i = 0; i < n; i++) {
+    let sum = b[i];
+    const row = i * n;
+    for (let k = 0; k < i; k++) sum -= L[row + k] * x[k];
+    x[i] = sum / L[row + i];
+  }
+}

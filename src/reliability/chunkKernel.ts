@@ -1,0 +1,116 @@
+/**
+ * The sampling work of one chunk, shared verbatim by the in-process path and the worker
+ * threads so that both give bit-identical sums. Chunk i draws from stream streamBase + i only.
+ *
+ * 'mc': u ~ N(0, I), counts g <= 0.
+ * 'is': u = c + z, z ~ N(0, I) (standard normal shifted to the centre c, usually the FORM
+ *       design point); weight φ(u)/φ(u − c) = exp(−z·c − c·c/2); sums the weighted indicator
+ *       and its square.
+ */
+import { normalStream } from '../probability/rng.js';
+import type { ReliabilityProblem } from './types.js';
+import { describeThrown, isFiniteNumber } from './limitStateError.js';
+
+export interface SamplingSpec {
+  kind: 'mc' | 'is';
+  seed: number;
+  streamBase: number;
+  /** Sampling centre in u-space ('is' only). */
+  centre?: number[];
+}
+
+export interface ChunkJob {
+  index: number;
+  /** Global index of the chunk's first sample (for error reports). */
+  firstSample: number;
+  count: number;
+}
+
+export interface ChunkFault {
+  x: number[];
+  value: number | null; // null when g threw
+  cause?: string;
+  sampleIndex: number;
+}
+
+export interface ChunkOutcome {
+  index: number;
+  count: number;
+  failures: number;
+  /** Σ weight·1[g <= 0] (MC: = failures). */
+  sumW: number;
+  /** Σ weight²·1[g <= 0] (MC: = failures). */
+  sumW2: number;
+  fault?: ChunkFault;
+}
+
+export type ChunkKernel = (job: ChunkJob) => ChunkOutcome;
+
+export function makeChunkKernel(problem: ReliabilityProblem, spec: SamplingSpec): ChunkKernel {
+  const n = problem.transform.n;
+  const u = new Float64Array(n);
+  const x = new Float64Array(n);
+  const g = problem.g;
+  const transform = problem.transform;
+  if (spec.kind === 'mc') {
+    return (job) => {
+      const normal = normalStream(spec.seed, spec.streamBase + job.index);
+      let failures = 0;
+      let s = 0;
+      let v = 0;
+      try {
+        for (; s < job.count; s++) {
+          for (let i = 0; i < n; i++) u[i] = normal();
+          transform.toPhysical(u, x);
+          v = g(x);
+          if (!isFiniteNumber(v)) return faulted(job, x, v, undefined, s);
+          if (v <= 0) failures++;
+        }
+      } catch (e) {
+        return faulted(job, x, null, describeThrown(e), s);
+      }
+      return { index: job.index, count: job.count, failures, sumW: failures, sumW2: failures };
+    };
+  }
+  const c = Float64Array.from(spec.centre ?? []);
+  if (c.length !== n) throw new Error(`importance sampling centre has ${c.length} components, problem has ${n}`);
+  let cc = 0;
+  for (let i = 0; i < n; i++) cc += c[i] * c[i];
+  const halfCc = cc / 2;
+  return (job) => {
+    const normal = normalStream(spec.seed, spec.streamBase + job.index);
+    let failures = 0;
+    let sumW = 0;
+    let sumW2 = 0;
+    let s = 0;
+    let v = 0;
+    try {
+      for (; s < job.count; s++) {
+        let zc = 0;
+        for (let i = 0; i < n; i++) {
+          const z = normal();
+          zc += z * c[i];
+          u[i] = c[i] + z;
+        }
+        transform.toPhysical(u, x);
+        v = g(x);
+        if (!isFiniteNumber(v)) return faulted(job, x, v, undefined, s);
+        if (v <= 0) {
+          const w = Math.exp(-zc - halfCc);
+          failures++;
+          sumW += w;
+          sumW2 += w * w;
+        }
+      }
+    } catch (e) {
+      return faulted(job, x, null, describeThrown(e), s);
+    }
+    return { index: job.index, count: job.count, failures, sumW, sumW2 };
+  };
+}
+
+function faulted(job: ChunkJob, x: Float64Array, value: number | null, cause: string | undefined, s: number): ChunkOutcome {
+  const fault: ChunkFault = { x: Array.from(x), value, sampleIndex: job.firstSample + s };
+  if (cause !== undefined) fault.cause = cause;
+  return { index: job.index, count: s, failures: 0, sumW: 0, sumW2: 0, fault };
+}

@@ -1,0 +1,8 @@
+/**
+ * Stream indices of the seeded generators, one range per method so that MC, IS and subset
+ * simulation run with the same seed never share random numbers. Chunk i of a method always
+ * uses stream base + i, whatever the number of workers.
+ */
+export const MC_STREAM_BASE = 0;
+export const IS_STREAM_BASE = 2 ** 32;
+export const SUBSET_STREAM_BASE = 2 ** 33;

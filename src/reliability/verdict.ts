@@ -1,0 +1,161 @@
+/**
+ * Do the estimates that ran agree, and which one should the engineer trust?
+ *
+ * Simulation estimates carry a CoV δ, i.e. a log-scale standard deviation s = sqrt(ln(1 + δ²)).
+ * Two simulations agree when |ln p1 − ln p2| <= k·sqrt(s1² + s2²) (k = 3 by default).
+ * FORM and SORM carry no uncertainty of their own: they agree with the reference simulation
+ * (the one with the smallest CoV) when |ln p − ln p_ref| <= max(k·s_ref, ln 1.1), i.e. within
+ * the simulation's noise or within 10 %, whichever is wider. Monte Carlo with no failure gives
+ * only an upper bound (its Wilson limit): the others agree with it when they lie below it.
+ */
+import type { FormResult, IsResult, McResult, SormResult, SubsetResult } from './types.js';
+
+export type MethodName = 'form' | 'sorm' | 'is' | 'mc' | 'subset';
+
+export interface VerdictInput {
+  form?: FormResult;
+  sorm?: SormResult;
+  is?: IsResult;
+  mc?: McResult;
+  subset?: SubsetResult;
+}
+
+export interface MethodComparison {
+  method: MethodName;
+  pf: number;
+  /** Simulation CoV; null for FORM/SORM. */
+  cov: number | null;
+  /** Agrees with the reference (null when there is nothing to compare with). */
+  consistent: boolean | null;
+  /** pf / reference pf − 1 (null without a reference). */
+  difference: number | null;
+}
+
+export interface Verdict {
+  agree: boolean;
+  trust: MethodName | null;
+  reason: string;
+  /** The simulation the others were compared with. */
+  reference: MethodName | null;
+  comparisons: MethodComparison[];
+}
+
+export interface VerdictOptions {
+  /** Standard deviations allowed (default 3). */
+  sigmas?: number;
+  /** A simulation with a larger CoV is too noisy to settle anything (default 0.3). */
+  maxUsefulCov?: number;
+}
+
+const RELATIVE_FLOOR = Math.log(1.1);
+const LABEL: Record<MethodName, string> = { form: 'FORM', sorm: 'SORM', is: 'IS', mc: 'MC', subset: 'subset simulation' };
+
+interface Sim { method: MethodName; pf: number; cov: number; s: number }
+
+function logSd(cov: number): number {
+  return Math.sqrt(Math.log1p(cov * cov));
+}
+
+function pct(ratio: number): string {
+  const v = Math.abs(ratio) * 100;
+  return `${v >= 10 ? v.toFixed(0) : v.toPrecision(2)} %`;
+}
+
+export function verdict(input: VerdictInput, opts: VerdictOptions = {}): Verdict {
+  const k = opts.sigmas ?? 3;
+  const maxUsefulCov = opts.maxUsefulCov ?? 0.3;
+  const sims: Sim[] = [];
+  const { form, sorm, is, mc, subset } = input;
+  if (mc && mc.failures > 0) sims.push({ method: 'mc', pf: mc.pf, cov: mc.cov, s: logSd(mc.cov) });
+  if (is && is.failures > 0 && Number.isFinite(is.cov)) sims.push({ method: 'is', pf: is.pf, cov: is.cov, s: logSd(is.cov) });
+  if (subset && subset.pf > 0 && subset.converged && Number.isFinite(subset.cov)) {
+    sims.push({ method: 'subset', pf: subset.pf, cov: subset.cov, s: logSd(subset.cov) });
+  }
+  const ref = sims.length > 0 ? sims.reduce((a, b) => (b.cov < a.cov ? b : a)) : null;
+  const mcBound = mc && mc.failures === 0 ? mc.ci95[1] : null;
+
+  const comparisons: MethodComparison[] = [];
+  const compare = (method: MethodName, pf: number, cov: number | null): MethodComparison => {
+    let consistent: boolean | null = null;
+    let difference: number | null = null;
+    if (ref && ref.method !== method) {
+      difference = pf / ref.pf - 1;
+      const gap = Math.abs(Math.log(pf / ref.pf));
+      const allowed = cov === null ? Math.max(k * ref.s, RELATIVE_FLOOR) : k * Math.hypot(ref.s, logSd(cov));
+      consistent = gap <= allowed;
+    } else if (ref && ref.method === method) {
+      consistent = true;
+    }
+    if (mcBound !== null && method !== 'mc') consistent = (consistent ?? true) && pf <= mcBound;
+    const c: MethodComparison = { method, pf, cov, consistent, difference };
+    comparisons.push(c);
+    return c;
+  };
+  const cForm = form ? compare('form', form.pf, null) : null;
+  const cSorm = sorm ? compare('sorm', sorm.pf, null) : null;
+  for (const s of sims) compare(s.method, s.pf, s.cov);
+  if (mc && mc.failures === 0) {
+    comparisons.push({ method: 'mc', pf: 0, cov: null, consistent: null, difference: null });
+  }
+  if (is && !sims.some((s) => s.method === 'is')) comparisons.push({ method: 'is', pf: is.pf, cov: null, consistent: null, difference: null });
+  if (subset && !sims.some((s) => s.method === 'subset')) comparisons.push({ method: 'subset', pf: subset.pf, cov: null, consistent: null, difference: null });
+
+  const agree = comparisons.every((c) => c.consistent !== false);
+  const base = { agree, reference: ref ? ref.method : null, comparisons };
+  const formOk = form !== undefined && form.converged;
+  const approx: MethodName | null = sorm && sorm.used !== 'form' ? 'sorm' : formOk ? 'form' : null;
+
+  // No usable simulation.
+  if (!ref || ref.cov > maxUsefulCov) {
+    const noisy = ref ? `${LABEL[ref.method]} is too noisy (CoV ${pct(ref.cov)}) to settle it` : '';
+    if (mcBound !== null && mc) {
+      const head = `MC has 0 failures in ${mc.samples} samples: its pf is only an upper bound (≤ ${mcBound.toExponential(2)})`;
+      if (approx) {
+        const p = approx === 'sorm' ? sorm!.pf : form!.pf;
+        return { ...base, trust: approx, reason: `${head}; ${LABEL[approx]} ${p <= mcBound ? 'lies below it' : 'exceeds it, so one of them is wrong'}.` };
+      }
+      return { ...base, trust: 'mc', reason: `${head}.` };
+    }
+    if (form && sorm && approx) {
+      const d = sorm.pf / form.pf - 1;
+      const extra = noisy ? `; ${noisy}` : '';
+      if (Math.abs(Math.log(sorm.pf / form.pf)) > RELATIVE_FLOOR) {
+        return { ...base, agree: false, trust: approx, reason: `FORM and SORM differ by ${pct(d)}: curvature matters, trust SORM (better, confirm with IS)${extra}.` };
+      }
+      return { ...base, trust: approx, reason: `FORM and SORM agree within ${pct(d)}: the limit state is nearly flat at the design point${extra}.` };
+    }
+    if (approx) return { ...base, trust: approx, reason: `Only ${LABEL[approx]} gave a usable estimate; its error is unknown without a simulation${noisy ? ` (${noisy})` : ''}.` };
+    if (ref) return { ...base, trust: ref.method, reason: `${LABEL[ref.method]} is the only estimate, and a noisy one (CoV ${pct(ref.cov)}).` };
+    return { ...base, trust: null, reason: 'No method produced a usable estimate.' };
+  }
+
+  // Simulations among themselves.
+  const disagreeingSims = sims.filter((s) => s !== ref && comparisons.find((c) => c.method === s.method)?.consistent === false);
+  if (disagreeingSims.length > 0) {
+    const other = disagreeingSims[0];
+    const mcSim = sims.find((s) => s.method === 'mc');
+    const trust = mcSim ?? ref;
+    const suspect = trust === ref ? other : ref;
+    const why = suspect.method === 'is' ? 'IS may have missed a failure region away from the design point'
+      : suspect.method === 'subset' ? 'subset simulation may be stuck in one failure region'
+        : 'the simulations sample different regions';
+    return { ...base, trust: trust.method, reason: `${LABEL[ref.method]} and ${LABEL[other.method]} differ by ${pct(other.pf / ref.pf - 1)}, beyond their uncertainty: ${why}; trust ${LABEL[trust.method]}.` };
+  }
+  const refText = `${LABEL[ref.method]} (CoV ${pct(ref.cov)})`;
+  if (cForm && cForm.consistent === false && cSorm && cSorm.consistent !== false) {
+    return { ...base, trust: ref.method, reason: `FORM differs from ${refText} by ${pct(cForm.difference ?? 0)} but SORM agrees: curvature matters, trust SORM or ${LABEL[ref.method]}.` };
+  }
+  if (cForm && cForm.consistent === false && cSorm && cSorm.consistent === false) {
+    return { ...base, trust: ref.method, reason: `FORM and SORM differ from ${refText} by ${pct(cForm.difference ?? 0)} and ${pct(cSorm.difference ?? 0)}: the limit state is too nonlinear (or has several design points) for them; trust ${LABEL[ref.method]}.` };
+  }
+  if (cForm && cForm.consistent === false) {
+    return { ...base, trust: ref.method, reason: `FORM differs from ${refText} by ${pct(cForm.difference ?? 0)}: trust ${LABEL[ref.method]}.` };
+  }
+  if (cSorm && cSorm.consistent === false) {
+    return { ...base, trust: ref.method, reason: `SORM differs from ${refText} by ${pct(cSorm.difference ?? 0)} while FORM does not: the curvature estimate is unreliable; trust ${LABEL[ref.method]}.` };
+  }
+  if (mcBound !== null && mc && comparisons.some((c) => c.consistent === false)) {
+    return { ...base, trust: ref.method, reason: `An estimate exceeds the upper bound ${mcBound.toExponential(2)} from MC with 0 failures in ${mc.samples} samples; trust ${LABEL[ref.method]}.` };
+  }
+  return { ...base, trust: ref.method, reason: `All estimates agree within their uncertainty; ${refText} has the smallest uncertainty.` };
+}

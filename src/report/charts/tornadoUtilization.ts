@@ -1,0 +1,21 @@
+/** Tornado of the utilization (CONTRACT §4 `tornado`): which variable moves the check most. */
+import type { ReportInput } from '../reportInput.js';
+import { formatNumber } from '../displayUnits.js';
+import type { ChartSpec } from './chartSpec.js';
+import { tornadoSpec } from './tornadoBars.js';
+
+export function tornadoUtilizationChart(input: ReportInput): ChartSpec {
+  const t = input.sensitivity.utilization;
+  const title = 'Tornado: utilization';
+  return {
+    name: 'tornado-utilization',
+    title,
+    spec: tornadoSpec({
+      title,
+      subtitle: ['Each variable at its 5 % and 95 % quantile, the others at their means.', `Dark line: all variables at their means (${formatNumber(t.baseline)}).`],
+      valueTitle: 'utilization = demand / (θ × capacity)',
+      baseline: t.baseline,
+      rows: t.rows,
+    }),
+  };
+}

@@ -1,0 +1,73 @@
+/** The CSV files of the report: SI base units, one header row, RFC 4180 quoting. */
+import type { ReportInput } from './reportInput.js';
+import { sampleQuantile } from './charts/histogramBins.js';
+
+type Cell = string | number | null | undefined;
+
+function cell(v: Cell): string {
+  if (v === null || v === undefined) return '';
+  if (typeof v === 'number') {
+    if (Number.isNaN(v)) return '';
+    if (!Number.isFinite(v)) return v > 0 ? 'inf' : '-inf';
+    return String(v);
+  }
+  return /[",\n\r]/.test(v) ? `"${v.replace(/"/g, '""')}"` : v;
+}
+
+export function toCsv(head: string[], rows: Cell[][]): string {
+  return [head, ...rows].map((r) => r.map(cell).join(',')).join('\n') + '\n';
+}
+
+function stats(values: number[]) {
+  const n = values.length;
+  const mean = values.reduce((a, b) => a + b, 0) / n;
+  const sd = Math.sqrt(values.reduce((a, b) => a + (b - mean) * (b - mean), 0) / Math.max(1, n - 1));
+  let min = Infinity;
+  let max = -Infinity;
+  for (const v of values) {
+    if (v < min) min = v;
+    if (v > max) max = v;
+  }
+  return { n, mean, sd, p05: sampleQuantile(values, 0.05), p50: sampleQuantile(values, 0.5), p95: sampleQuantile(values, 0.95), min, max };
+}
+
+/** File name → CSV text, for every table this input has data for. */
+export function csvTables(input: ReportInput): Record<string, string> {
+  const out: Record<string, string> = {};
+  const s = input.samples;
+  if (s && s.resistance.length > 0 && s.demand.length > 0) {
+    const n = Math.max(s.resistance.length, s.demand.length);
+    out['samples.csv'] = toCsv(
+      ['index', 'resistance_N', 'demand_N'],
+      Array.from({ length: n }, (_, i) => [i, s.resistance[i], s.demand[i]]),
+    );
+    const head = ['quantity', 'unit', 'count', 'mean', 'sd', 'p05', 'p50', 'p95', 'min', 'max', 'design_point', 'drawn_from_samples'];
+    const row = (name: string, v: number[], dp: number): Cell[] => {
+      const t = stats(v);
+      return [name, 'N', t.n, t.mean, t.sd, t.p05, t.p50, t.p95, t.min, t.max, dp, s.totalSamples];
+    };
+    out['samples-summary.csv'] = toCsv(head, [row('resistance', s.resistance, s.designPoint.resistance), row('demand', s.demand, s.designPoint.demand)]);
+  }
+  const t = input.sensitivity;
+  const tornadoRows: Cell[][] = [
+    ...t.utilization.rows.map((r) => ['utilization', '1', r.variable, t.utilization.baseline, r.low, r.high, Math.abs(r.high - r.low)]),
+    ...t.capacity.rows.map((r) => ['capacity', 'N', r.variable, t.capacity.baseline, r.low, r.high, Math.abs(r.high - r.low)]),
+    ...t.conditionalBeta.rows.map((r) => ['conditional_beta', '1', r.variable, t.conditionalBeta.baseline, r.low, r.high, Math.abs(r.high - r.low)]),
+  ];
+  out['tornado.csv'] = toCsv(['quantity', 'unit', 'variable', 'baseline', 'low_at_q05', 'high_at_q95', 'swing'], tornadoRows);
+  if (input.restraint) {
+    const st = input.restraint;
+    out['restraint-curve.csv'] = toCsv(
+      ['factor', 'bottom_stiffness_N_m_per_rad', 'top_stiffness_N_m_per_rad', 'beta_form', 'pf', 'ideal'],
+      st.curve.map((p) => [p.factor, p.stiffness.bottom, p.stiffness.top, p.beta, p.pf, p.ideal ?? '']),
+    );
+  }
+  if (input.sweep) {
+    const sw = input.sweep;
+    out['sweep.csv'] = toCsv(
+      [...sw.varied.map((v) => `${v.path}_SI`), `beta_${sw.method}`, 'pf', 'utilization'],
+      sw.rows.map((r) => [...sw.varied.map((v) => r.values[v.path]), r.beta, r.pf, r.utilization]),
+    );
+  }
+  return out;
+}

@@ -1,0 +1,261 @@
+/**
+ * Everything the report shows, as one plain data structure.
+ *
+ * The report only READS this: it computes nothing of its own beyond unit conversion,
+ * formatting and simple comparisons. Every number is in SI base units
+ * (N, m, m², m⁴, m³, Pa, N·m/rad, N/m) unless its comment says otherwise; the report
+ * converts to the display system chosen at write time. Variable names are the scenario
+ * paths of CONTRACT.md §2 (`column.material.E`, `loads.dead`, `model_factor` ...).
+ */
+
+/** What a number measures, so the report can pick a display unit. */
+export type QuantityKind =
+  | 'length' // m
+  | 'area' // m²
+  | 'inertia' // m⁴ (second moment of area)
+  | 'sectionModulus' // m³
+  | 'stress' // Pa (also E, fy)
+  | 'force' // N
+  | 'rotationalStiffness' // N·m/rad
+  | 'translationalStiffness' // N/m
+  | 'dimensionless';
+
+export type DistributionName = 'normal' | 'lognormal' | 'gumbel' | 'uniform' | 'truncnormal' | 'weibull' | 'beta';
+export type MethodName = 'form' | 'sorm' | 'is' | 'mc' | 'subset';
+export type EndName = 'bottom' | 'top';
+export type TargetSource = 'EN 1990 Annex B' | 'EN 1990 Annex C' | 'ISO 2394' | 'ISO 13822';
+export type StrengthModelName =
+  | 'first-yield'
+  | 'aisc360-e3'
+  | 'en1993-a0'
+  | 'en1993-a'
+  | 'en1993-b'
+  | 'en1993-c'
+  | 'en1993-d';
+
+export interface ReportMeta {
+  toolVersion: string; // package version, e.g. '0.1.0'
+  seed: number;
+  scenarioSha256: string; // hex digest of the scenario file's bytes
+  date: string; // ISO 8601, e.g. '2026-12-01T18:40:00Z'
+  commandLine: string; // as typed, e.g. 'stanchion assess m4.yaml --out reports/m4'
+  scenarioTitle: string;
+  scenarioFile: string; // file name as given ('-' for stdin)
+}
+
+/** The distribution parameters of one input, SI numbers in the row's kind (cov is a plain ratio). */
+export interface InputParameters {
+  value?: number; // fixed inputs only
+  mean?: number;
+  sd?: number;
+  cov?: number;
+  min?: number;
+  max?: number;
+}
+
+export interface InputRow {
+  path: string; // 'column.material.E'
+  description: string; // 'Young's modulus'
+  kind: QuantityKind;
+  distribution: DistributionName | 'fixed';
+  parameters: InputParameters;
+  asWritten?: string; // what the user wrote, e.g. 'L/1500' or '2.5 MN m/rad'
+}
+
+export interface CorrelationEntry {
+  a: string; // variable path
+  b: string;
+  rho: number; // Pearson correlation of the physical variables
+}
+
+export type EndType = 'pinned' | 'fixed' | 'spring';
+
+export interface EndDescription {
+  type: EndType;
+  stiffness?: number; // mean rotational stiffness k, N·m/rad (spring ends)
+  R?: number; // restraint ratio k L / (E I) at the means
+  fixity?: number; // fixity factor R / (R + 3) at the means
+  random?: boolean; // true when k is a random variable
+}
+
+export interface ColumnDescription {
+  length: number; // m
+  frame: 'braced' | 'sway';
+  ends: { bottom: EndDescription; top: EndDescription };
+  lateralStiffness?: number; // N/m, sway frames only (translational spring at the top)
+  section: { area: number; inertia: number; sectionModulus: number }; // m², m⁴, m³
+  strengthModel: StrengthModelName;
+}
+
+/** One buckled mode, ξ = x/L from the bottom (0) to the top (1), w normalised to max |w| = 1. */
+export interface ModeShapeData {
+  mode: number; // 1, 2, 3
+  criticalLoad: number; // N
+  points: { xi: number; w: number }[]; // in increasing ξ, e.g. 101 points
+  inflectionPoints: number[]; // ξ values where the curvature changes sign (pinned ends included)
+  effectiveLength: number | null; // m; distance between inflection points, null if undefined
+}
+
+/** The deterministic check with every random variable at its mean (CONTRACT.md §4 `check`). */
+export interface CheckResult {
+  criticalLoad: number; // Pcr, N
+  effectiveLengthFactor: number; // K
+  restraintRatio: { bottom: number | null; top: number | null }; // R; null = fixed (infinite)
+  fixityFactor: { bottom: number; top: number }; // R/(R+3); 1 for fixed
+  capacity: number; // N
+  demand: number; // N, sum of mean loads
+  utilization: number; // demand / (mean model_factor × capacity)
+  modeShapes: ModeShapeData[]; // first 2–3 modes
+}
+
+export interface FormResult {
+  beta: number;
+  pf: number; // Φ(−β)
+  converged: boolean;
+  iterations: number;
+  calls: number; // limit-state evaluations, gradients included
+  designPoint: Record<string, number>; // physical units (SI), by variable path
+  importance: Record<string, number>; // α² by variable path (sum 1)
+  history: { iteration: number; beta: number; g: number }[];
+}
+
+export interface SormResult {
+  beta: number; // generalised index −Φ⁻¹(pf)
+  pf: number; // Breitung
+  calls: number; // extra calls beyond FORM
+  curvatures?: number[];
+}
+
+export interface ImportanceSamplingResult {
+  beta: number; // −Φ⁻¹(pf)
+  pf: number;
+  cov: number; // coefficient of variation of the estimator
+  calls: number;
+}
+
+export interface MonteCarloResult {
+  beta: number; // −Φ⁻¹(pf); Infinity when there were no failures
+  pf: number;
+  cov: number;
+  samples: number;
+  failures: number;
+  ci95: [number, number]; // on pf
+  convergence: { samples: number; pf: number; lo: number; hi: number }[]; // increasing samples
+}
+
+export interface SubsetResult {
+  beta: number; // −Φ⁻¹(pf)
+  pf: number;
+  cov: number; // approximate, including correlation of the chains
+  calls: number;
+  levels?: number;
+}
+
+export interface ReliabilityResults {
+  form?: FormResult;
+  sorm?: SormResult;
+  is?: ImportanceSamplingResult;
+  mc?: MonteCarloResult;
+  subset?: SubsetResult;
+  /** The estimate compared with the target (normally SORM or the best sampling estimate). */
+  governing: { method: MethodName; beta: number; pf: number };
+  /** Whether the methods agree within their uncertainty, in one or two sentences. */
+  agreement: { consistent: boolean; text: string };
+  target: { beta: number; source: TargetSource; note?: string }; // note e.g. 'RC2, 50-year reference period'
+}
+
+/** Value with one variable at its 5 % and 95 % quantile, others at their means. */
+export interface TornadoRow {
+  variable: string;
+  low: number; // at the 5 % quantile
+  high: number; // at the 95 % quantile
+}
+
+export interface SobolRow {
+  variable: string;
+  first: number;
+  firstCi95: [number, number];
+  total: number;
+  totalCi95: [number, number];
+}
+
+export interface SensitivityResults {
+  /** Sorted by swing, largest first. `baseline` is the all-means value. */
+  utilization: { baseline: number; rows: TornadoRow[] }; // dimensionless
+  capacity: { baseline: number; rows: TornadoRow[] }; // N
+  /** β with one variable fixed at its 5 % / 95 % quantile and the rest random; baseline = governing β. */
+  conditionalBeta: { baseline: number; rows: TornadoRow[] };
+  /** FORM α² with the sign of α (negative α: a resistance-type variable). */
+  importance: { variable: string; alphaSquared: number; alpha: number }[];
+  /** FORM elasticities of β: (∂β/∂μ)·μ/β and (∂β/∂σ)·σ/β. */
+  elasticities: { variable: string; mean: number; sd: number }[];
+  sobol?: { samples: number; rows: SobolRow[] };
+}
+
+export interface RestraintCurvePoint {
+  factor: number; // the common multiplier on the mean stiffness of the studied ends
+  stiffness: { bottom?: number; top?: number }; // mean k of each studied end, N·m/rad
+  beta: number; // FORM
+  pf: number;
+  ideal?: 'pinned' | 'fixed'; // the limiting cases (k = 0, k = ∞); their stiffness entries are ignored
+}
+
+export interface RestraintStudy {
+  ends: EndName[]; // the studied ends
+  targetBeta: number;
+  curve: RestraintCurvePoint[]; // increasing stiffness; the ideal cases may be included
+  /** Mean stiffness of each studied end at which β = target; null when even rigid ends fall short. */
+  required: { bottom?: number | null; top?: number | null };
+  fixityFactor: { bottom?: number; top?: number }; // R/(R+3) at the required stiffness
+  effectiveLengthFactor: number | null; // K at the required stiffness (means)
+  /** The K an engineer would need in a deterministic check to reproduce the required-stiffness capacity. */
+  equivalentK: number | null;
+  sentence: string; // the justification sentence, ready to quote
+}
+
+/**
+ * Implied partial factor of one variable at the FORM design point: the factor a
+ * semi-probabilistic check would need on this variable to reproduce this β.
+ */
+export interface PartialFactorRow {
+  variable: string;
+  kind: QuantityKind;
+  role: 'resistance' | 'load' | 'model' | 'imperfection';
+  adverse: 'low' | 'high'; // which direction hurts: low for strengths/stiffnesses, high for loads/bow
+  basis: 'characteristic' | 'mean'; // what referenceValue is
+  referenceValue: number; // the characteristic or mean value (SI)
+  designValue: number; // the FORM design-point value (SI)
+  /** reference/design when adverse = 'low', design/reference when adverse = 'high' (> 1 means the design value is harsher). */
+  factor: number;
+  note?: string; // e.g. 'characteristic = 5 % fractile'
+}
+
+/** Samples for the histogram; the report never needs more than about 5000 of each. */
+export interface SamplesSummary {
+  resistance: number[]; // model_factor × capacity, N
+  demand: number[]; // sum of loads, N
+  totalSamples: number; // size of the run these were drawn from
+  designPoint: { resistance: number; demand: number }; // N, from FORM (equal at g = 0)
+}
+
+export interface SweepResults {
+  varied: { path: string; kind: QuantityKind }[]; // 1 or 2 paths
+  rows: { values: Record<string, number>; beta: number; pf: number; utilization: number }[];
+  method: MethodName; // which method produced β
+}
+
+export interface ReportInput {
+  meta: ReportMeta;
+  inputs: InputRow[];
+  correlation: CorrelationEntry[];
+  column: ColumnDescription;
+  check: CheckResult;
+  reliability: ReliabilityResults;
+  sensitivity: SensitivityResults;
+  restraint?: RestraintStudy; // absent when no end has a rotational spring
+  partialFactors: PartialFactorRow[];
+  samples?: SamplesSummary; // absent when no sampling method ran
+  sweep?: SweepResults;
+  /** Specific cautions for this run (the standing disclaimers are always added by the report). */
+  cautions: string[];
+}

@@ -1,0 +1,140 @@
+/**
+ * `--out DIR`: render every report file in memory, write them into a hidden sibling
+ * folder, then rename it into place. DIR is either complete or untouched: never half.
+ */
+import { promises as fsp } from 'node:fs';
+import { basename, dirname, join, resolve } from 'node:path';
+import { InputError } from '../scenario/inputError.js';
+import type { ReportInput } from './reportInput.js';
+import type { UnitSystem } from './displayUnits.js';
+import { buildCharts } from './charts/allCharts.js';
+import { chartToSvg, svgToPng } from './renderChart.js';
+import { columnSketchSvg } from './columnSketch.js';
+import { buildReportDocument } from './reportSections.js';
+import { renderHtml } from './htmlReport.js';
+import { renderMarkdown } from './markdownReport.js';
+import { csvTables } from './csvTables.js';
+
+export interface WriteOutputsOptions {
+  force?: boolean; // replace an existing DIR whole
+  units?: UnitSystem; // display units of HTML, Markdown and charts (default 'si'); JSON and CSV stay SI
+  png?: boolean; // also write charts/*.png (default true)
+  pngScale?: number; // PNG pixel density (default 2)
+  /** How one file is written; default fs.promises.writeFile. A seam for tests to inject failures. */
+  writeFile?: (path: string, data: string | Uint8Array) => Promise<void>;
+}
+
+export interface WrittenOutputs {
+  dir: string; // absolute path of DIR
+  files: string[]; // paths relative to DIR, sorted
+}
+
+/** Every output file as relative path → content, rendered in memory (nothing touches disk). */
+export async function renderReportFiles(
+  input: ReportInput,
+  resultJson: unknown,
+  options: Pick<WriteOutputsOptions, 'units' | 'png' | 'pngScale'> = {},
+): Promise<Map<string, string | Uint8Array>> {
+  if (resultJson === null || typeof resultJson !== 'object') throw new Error('writeOutputs: resultJson must be the contract JSON object');
+  const system = options.units ?? 'si';
+  const files = new Map<string, string | Uint8Array>();
+  const charts = buildCharts(input, system);
+  const svgs: Record<string, string> = {};
+  for (const c of charts) svgs[c.name] = await chartToSvg(c.spec);
+  const sketchSvg = columnSketchSvg(input.column, input.check.demand, input.check.modeShapes[0], system);
+  const doc = buildReportDocument(input, system, charts);
+
+  files.set('report.html', renderHtml(doc, { charts: svgs, sketchSvg }));
+  files.set('result.json', JSON.stringify(resultJson, null, 2) + '\n');
+  files.set('summary.md', renderMarkdown(doc));
+  for (const [name, text] of Object.entries(csvTables(input))) files.set(name, text);
+  const allSvgs: Record<string, string> = { ...svgs, 'column-sketch': sketchSvg };
+  for (const [name, svg] of Object.entries(allSvgs)) {
+    files.set(`charts/${name}.svg`, svg);
+    if (options.png ?? true) files.set(`charts/${name}.png`, svgToPng(svg, { scale: options.pngScale ?? 2 }));
+  }
+  return files;
+}
+
+async function exists(path: string): Promise<boolean> {
+  try {
+    await fsp.lstat(path);
+    return true;
+  } catch {
+    return false;
+  }
+}
+
+function refuseExisting(dir: string): InputError {
+  return new InputError('--out', `${dir} already exists; choose a new folder or pass --force to replace it`);
+}
+
+function isErrno(e: unknown, ...codes: string[]): boolean {
+  return e instanceof Error && codes.includes((e as NodeJS.ErrnoException).code ?? '');
+}
+
+/** Fail before the slow rendering when DIR cannot be created at all. */
+async function requireParentFolder(dir: string): Promise<void> {
+  const parent = dirname(dir);
+  const stat = await fsp.stat(parent).catch(() => null);
+  if (stat === null || !stat.isDirectory()) throw new InputError('--out', `the parent folder of ${dir} does not exist`);
+}
+
+let sequence = 0;
+function siblingName(dir: string, tag: string): string {
+  return join(dirname(dir), `.${basename(dir)}.${tag}-${process.pid}-${Date.now()}-${sequence++}`);
+}
+
+/**
+ * Write the report into `outDir`. Throws InputError (field '--out') when outDir exists and
+ * `force` is not set, or when its parent folder is missing or not writable; on any failure
+ * nothing is left behind and an existing outDir is untouched.
+ */
+export async function writeOutputs(
+  outDir: string,
+  input: ReportInput,
+  resultJson: unknown,
+  options: WriteOutputsOptions = {},
+): Promise<WrittenOutputs> {
+  const dir = resolve(outDir);
+  if (!options.force && (await exists(dir))) throw refuseExisting(dir);
+  await requireParentFolder(dir);
+  const files = await renderReportFiles(input, resultJson, options);
+  const write = options.writeFile ?? ((p: string, d: string | Uint8Array) => fsp.writeFile(p, d));
+
+  const temp = siblingName(dir, 'partial');
+  try {
+    await fsp.mkdir(temp);
+  } catch (e) {
+    if (isErrno(e, 'ENOENT', 'ENOTDIR')) throw new InputError('--out', `the parent folder of ${dir} does not exist`);
+    if (isErrno(e, 'EACCES', 'EPERM', 'EROFS')) throw new InputError('--out', `cannot write next to ${dir}: ${(e as Error).message}`);
+    throw e;
+  }
+  try {
+    await fsp.mkdir(join(temp, 'charts'));
+    for (const [rel, data] of files) await write(join(temp, rel), data);
+    await moveIntoPlace(temp, dir, options.force ?? false);
+  } catch (e) {
+    await fsp.rm(temp, { recursive: true, force: true });
+    throw e;
+  }
+  return { dir, files: [...files.keys()].sort() };
+}
+
+/** Rename the finished folder to `dir`; with force, swap out an existing one and restore it on failure. */
+async function moveIntoPlace(temp: string, dir: string, force: boolean): Promise<void> {
+  if (!(await exists(dir))) {
+    await fsp.rename(temp, dir);
+    return;
+  }
+  if (!force) throw refuseExisting(dir); // appeared while we were rendering
+  const old = siblingName(dir, 'replaced');
+  await fsp.rename(dir, old);
+  try {
+    await fsp.rename(temp, dir);
+  } catch (e) {
+    await fsp.rename(old, dir);
+    throw e;
+  }
+  await fsp.rm(old, { recursive: true, force: true });
+}

@@ -1,0 +1,67 @@
+/**
+ * A quantity string (`200 GPa`, `2.5 MN m/rad`, or for lengths an expression such as
+ * `L/1000 + 2 mm`) turned into an SI number of the kind the field expects. Converting to the
+ * field's own SI unit is what turns a slip (`E: 4 m`) into an error instead of a wrong number.
+ */
+import { KINDS, describeDimensions, sameDimensions, type QuantityKind } from './dimensions.js';
+import { evaluateQuantity, ExpressionError } from './quantityExpression.js';
+
+/** The unit the user wrote, kept so reports can echo inputs as given. */
+export interface DisplayUnit {
+  /** As written, e.g. `kN`, `MN m/rad`; '' for a pure number. */
+  readonly unit: string;
+  /** SI value of one `unit` (divide an SI value by it to display). */
+  readonly factor: number;
+}
+
+export const PURE_NUMBER_UNIT: DisplayUnit = { unit: '', factor: 1 };
+
+export interface Quantity {
+  readonly value: number;
+  readonly display: DisplayUnit;
+}
+
+const LEADING_NUMBER = /^\s*[-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?\s*/;
+
+/**
+ * Reads `text` as a quantity of `kind`; `columnLength` (m) enables the symbol L.
+ * Throws ExpressionError with a message meant for the user (the caller adds the path).
+ */
+export function readQuantity(text: string, kind: QuantityKind, columnLength?: number): Quantity {
+  const info = KINDS[kind];
+  const expected = `expected ${info.noun} (e.g. ${info.example})`;
+  let evaluated;
+  try {
+    evaluated = evaluateQuantity(text, columnLength === undefined ? {} : { columnLength });
+  } catch (e) {
+    if (e instanceof ExpressionError) throw new ExpressionError(`${expected}: '${text}' ${e.message}`);
+    throw e;
+  }
+  if (!evaluated.hasUnit) {
+    throw new ExpressionError(`${expected}, got a bare number (${text.trim()}): give a unit`);
+  }
+  if (!sameDimensions(evaluated.dimensions, info.dimensions)) {
+    throw new ExpressionError(`${expected}, got ${describeDimensions(evaluated.dimensions)} (${text.trim()})`);
+  }
+  return { value: evaluated.value, display: displayUnitOf(text, kind) };
+}
+
+/** `420 kN` → kN; an expression such as `L/1500` → the kind's default display unit. */
+function displayUnitOf(text: string, kind: QuantityKind): DisplayUnit {
+  const info = KINDS[kind];
+  const match = LEADING_NUMBER.exec(text);
+  if (match !== null) {
+    const rest = text.slice(match[0].length).trim();
+    if (rest !== '') {
+      try {
+        const unit = evaluateQuantity(rest);
+        if (unit.hasUnit && unit.value > 0 && sameDimensions(unit.dimensions, info.dimensions)) {
+          return { unit: rest, factor: unit.value };
+        }
+      } catch {
+        // not a plain unit (e.g. `2 mm + L/1000`): fall through to the default
+      }
+    }
+  }
+  return info.defaultDisplay;
+}

@@ -1,0 +1,64 @@
+/** The `column.ends` block → End values, with the sway-mechanism and braced-lateral rules. */
+import type { PathSegment } from './rawTree.js';
+import { fail, readScalar, type ReadContext, type RawScalar } from './readScalar.js';
+import { restraintRatio } from './restraintRatio.js';
+import { meanOf } from './readScalar.js';
+import type { End, Frame, Scalar } from './types.js';
+
+export type RawEndValue = 'pinned' | 'fixed' | { rotation: RawScalar } | { fixity: RawScalar } | { alignment_g: RawScalar };
+
+export function readEnd(raw: RawEndValue, frame: Frame, path: PathSegment[], ctx: ReadContext): End {
+  if (raw === 'pinned') return { type: 'pinned' };
+  if (raw === 'fixed') return { type: 'fixed' };
+  if ('rotation' in raw) {
+    return { type: 'rotation', k: readScalar(raw.rotation, { kind: 'rotationalStiffness', domain: 'nonnegative' }, [...path, 'rotation'], ctx) };
+  }
+  const from = 'fixity' in raw ? 'fixity' : 'alignment_g';
+  const given = 'fixity' in raw ? raw.fixity : raw.alignment_g;
+  const input = readScalar(given, { kind: 'number', domain: from === 'fixity' ? 'fixity' : 'alignment' }, [...path, from], ctx);
+  if (input.kind === 'fixed' && from === 'alignment_g' && input.value === 0) return { type: 'fixed' }; // G = 0: rigid
+  return { type: 'ratio', from, input, R: restraintRatio(from, frame, meanOf(input)) };
+}
+
+/** True when the end certainly gives no rotational restraint. */
+function isFree(end: End): boolean {
+  if (end.type === 'pinned') return true;
+  if (end.type === 'rotation') return end.k.kind === 'fixed' && end.k.value === 0;
+  if (end.type === 'ratio') return end.input.kind === 'fixed' && end.R === 0;
+  return false;
+}
+
+function isZero(s: Scalar | null): boolean {
+  return s === null || (s.kind === 'fixed' && s.value === 0);
+}
+
+export interface RawEnds {
+  bottom: RawEndValue;
+  top: RawEndValue;
+  lateral?: RawScalar | undefined;
+}
+
+export function readEnds(raw: RawEnds, frame: Frame, ctx: ReadContext): { bottom: End; top: End; lateral: Scalar | null } {
+  const base: PathSegment[] = ['column', 'ends'];
+  const bottom = readEnd(raw.bottom, frame, [...base, 'bottom'], ctx);
+  const top = readEnd(raw.top, frame, [...base, 'top'], ctx);
+  if (frame === 'braced') {
+    // A zero spring is harmless (CONTRACT.md §2's own example writes `lateral: 0 kN/m` on a
+    // braced column); any other value would silently mean nothing, so it is refused.
+    if (raw.lateral !== undefined) {
+      const lateral = readScalar(raw.lateral, { kind: 'translationalStiffness', domain: 'nonnegative' }, [...base, 'lateral'], ctx);
+      if (!isZero(lateral)) {
+        fail(ctx, [...base, 'lateral'], 'a lateral spring only applies to a sway frame (a braced column does not move sideways); remove it or set frame: sway');
+      }
+    }
+    return { bottom, top, lateral: null };
+  }
+  const lateral =
+    raw.lateral === undefined
+      ? ({ kind: 'fixed', value: 0 } as const)
+      : readScalar(raw.lateral, { kind: 'translationalStiffness', domain: 'nonnegative' }, [...base, 'lateral'], ctx);
+  if (isFree(bottom) && isFree(top) && isZero(lateral)) {
+    fail(ctx, base, 'a sway column with pinned ends and no lateral spring is a mechanism (it has no stiffness against sway); give a rotational or lateral restraint');
+  }
+  return { bottom, top, lateral };
+}

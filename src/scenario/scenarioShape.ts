@@ -1,0 +1,283 @@
+/**
+ * The shape of a scenario file as a zod schema: the one description of the format, used both
+ * to validate (with messages meant for engineers) and to generate the JSON Schema for
+ * editors. Units, dimensions, expressions and cross-field rules are checked afterwards
+ * (buildScenario.ts), because a schema cannot express them.
+ */
+import * as z from 'zod';
+import { DIST_NAMES, type DistName } from '../probability/distribution.js';
+import { KINDS, type QuantityKind } from './dimensions.js';
+import { didYouMean } from './nearestName.js';
+
+export const FRAMES = ['braced', 'sway'] as const;
+export const STRENGTH_MODELS = ['first-yield', 'aisc360-e3', 'en1993-a0', 'en1993-a', 'en1993-b', 'en1993-c', 'en1993-d'] as const;
+export const METHODS = ['form', 'sorm', 'is', 'mc', 'subset'] as const;
+export const DISPLAY_UNITS = ['si', 'us'] as const;
+export const END_TYPES = ['pinned', 'fixed'] as const;
+export const END_KEYS = ['rotation', 'fixity', 'alignment_g'] as const;
+
+/** How a bad value looks in a message. */
+export function describeInput(input: unknown): string {
+  if (input === undefined) return 'nothing';
+  if (input === null) return 'an empty value';
+  if (typeof input === 'number') return Number.isFinite(input) ? `a bare number (${input})` : `${input}, which is not a finite number`;
+  if (typeof input === 'string') return `'${input.length > 60 ? `${input.slice(0, 57)}...` : input}'`;
+  if (typeof input === 'boolean') return `${input}`;
+  if (Array.isArray(input)) return 'a list';
+  return 'a mapping';
+}
+
+const NUMBER_AND_UNIT = /^\s*[-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?\s*[A-Za-zµΩ°(]/;
+
+function quantityMessage(kind: QuantityKind, input: unknown, lengthExpression: boolean): string {
+  const info = KINDS[kind];
+  if (input === undefined) return `is missing: give ${info.noun} (e.g. ${info.example})`;
+  if (typeof input === 'string' && /nan|inf/i.test(input)) return `'${input}' is not a finite ${info.noun.replace(/^an? /, '')}`;
+  const what = lengthExpression ? `${info.noun} (e.g. ${info.example}, or an expression of L such as L/1000)` : `${info.noun} (e.g. ${info.example})`;
+  const hint = typeof input === 'number' ? ': give a unit' : '';
+  return `expected ${what}, got ${describeInput(input)}${hint}`;
+}
+
+/** One schema object per argument list, so the JSON Schema can share it as a definition. */
+function memo<A extends unknown[], R>(make: (...args: A) => R): (...args: A) => R {
+  const cache = new Map<string, R>();
+  return (...args: A) => {
+    const key = JSON.stringify(args);
+    let made = cache.get(key);
+    if (made === undefined) {
+      made = make(...args);
+      cache.set(key, made);
+    }
+    return made;
+  };
+}
+
+/** A quantity string of the given kind; lengths may be expressions of L. */
+export const quantitySchema = memo(makeQuantitySchema);
+function makeQuantitySchema(kind: QuantityKind, lengthExpression = false) {
+  const info = KINDS[kind];
+  const base = z.string({ error: (iss) => quantityMessage(kind, iss.input, lengthExpression) });
+  const description = lengthExpression
+    ? `${info.noun}: a number and a unit (e.g. ${info.example}) or an expression of L, the column length (e.g. L/1000 + 2 mm); converted to ${info.siUnit}`
+    : `${info.noun}: a number and a unit, e.g. ${info.example}; any unit of this dimension is converted to ${info.siUnit}`;
+  const checked = lengthExpression
+    ? base.min(1, { error: () => quantityMessage(kind, '', true) })
+    : base.regex(NUMBER_AND_UNIT, { error: (iss) => quantityMessage(kind, iss.input, false) });
+  return checked.meta({ description, examples: [info.example] });
+}
+
+/** A plain number without unit. */
+export const pureNumberSchema = memo(makePureNumberSchema);
+function makePureNumberSchema(description: string) {
+  return z
+    .number({
+      error: (iss) =>
+        iss.input === undefined
+          ? `is missing: give ${description}`
+          : `expected ${description} (a plain number, no unit), got ${describeInput(iss.input)}`,
+    })
+    .meta({ description });
+}
+
+type ValueSchema = ReturnType<typeof quantitySchema> | ReturnType<typeof pureNumberSchema>;
+
+function strict<T extends z.core.$ZodLooseShape>(shape: T, what: string) {
+  const keys = Object.keys(shape);
+  return z.strictObject(shape, {
+    error: (iss) => {
+      if (iss.code === 'unrecognized_keys') {
+        const unknown = iss.keys;
+        const suggestion = unknown.length === 1 ? didYouMean(unknown[0]!, keys) : '';
+        return `unknown key${unknown.length > 1 ? 's' : ''} ${unknown.map((k) => `'${k}'`).join(', ')}${suggestion}; ${what} takes ${keys.join(', ')}`;
+      }
+      if (iss.input === undefined) return `is missing: give ${what}`;
+      return `expected ${what} (a mapping of ${keys.join(', ')}), got ${describeInput(iss.input)}`;
+    },
+  });
+}
+
+const covSchema = pureNumberSchema('a coefficient of variation (sd / mean), e.g. 0.1');
+
+/** `{dist: NAME, ...}` with the parameters CONTRACT.md §2 gives each distribution. */
+export function randomVariableSchema(value: () => ValueSchema) {
+  const meanSdCov = <const D extends DistName>(dist: D) =>
+    strict({ dist: z.literal(dist), mean: value(), sd: value().optional(), cov: covSchema.optional() }, `a ${dist} variable (mean and one of sd, cov)`);
+  return z
+    .discriminatedUnion(
+      'dist',
+      [
+        meanSdCov('normal'),
+        meanSdCov('lognormal'),
+        meanSdCov('gumbel'),
+        strict({ dist: z.literal('uniform'), min: value(), max: value() }, 'a uniform variable (min, max)'),
+        strict(
+          { dist: z.literal('truncnormal'), mean: value(), sd: value(), min: value().optional(), max: value().optional() },
+          'a truncnormal variable (mean and sd of the parent normal; min and/or max)',
+        ),
+        meanSdCov('weibull'),
+        strict({ dist: z.literal('beta'), min: value(), max: value(), mean: value(), sd: value() }, 'a beta variable (min, max, mean, sd)'),
+      ],
+      {
+        error: (iss) => {
+          const dist = (iss.input as { dist?: unknown } | undefined)?.dist;
+          if (typeof dist === 'string') return `unknown distribution '${dist}'${didYouMean(dist, DIST_NAMES)}: use one of ${DIST_NAMES.join(', ')}`;
+          if (dist === undefined) return `a random variable needs dist: one of ${DIST_NAMES.join(', ')}`;
+          return `expected a random variable {dist: NAME, ...}, got ${describeInput(iss.input)}`;
+        },
+      },
+    )
+    .meta({ description: `a random variable: {dist: ${DIST_NAMES.join(' | ')}, ...parameters}` });
+}
+
+/** A value that may be fixed or random. */
+export function scalarSchema(value: () => ValueSchema, describeFixed: (input: unknown) => string) {
+  return z.union([value(), randomVariableSchema(value)], {
+    error: (iss) => (iss.input === undefined ? describeFixed(undefined) : `${describeFixed(iss.input)}, or a random variable {dist: NAME, ...}`),
+  });
+}
+
+export const quantityScalar = memo(makeQuantityScalar);
+function makeQuantityScalar(kind: QuantityKind, lengthExpression = false) {
+  return scalarSchema(
+    () => quantitySchema(kind, lengthExpression),
+    (input) => quantityMessage(kind, input, lengthExpression),
+  );
+}
+
+export const numberScalar = memo(makeNumberScalar);
+function makeNumberScalar(description: string) {
+  return scalarSchema(
+    () => pureNumberSchema(description),
+    (input) => (input === undefined ? `is missing: give ${description}` : `expected ${description} (a plain number), got ${describeInput(input)}`),
+  );
+}
+
+function choice<const T extends readonly [string, ...string[]]>(values: T, what: string) {
+  return z.enum(values, {
+    error: (iss) => {
+      if (iss.input === undefined) return `is missing: give ${what} (${values.join(' | ')})`;
+      const suggestion = typeof iss.input === 'string' ? didYouMean(iss.input, values) : '';
+      return `expected ${what}, one of ${values.join(', ')}; got ${describeInput(iss.input)}${suggestion}`;
+    },
+  });
+}
+
+const endSchema = z
+  .union(
+    [
+      choice(END_TYPES, 'an end condition'),
+      strict({ rotation: quantityScalar('rotationalStiffness') }, 'a rotational spring {rotation: Q}'),
+      strict({ fixity: numberScalar('a fixity factor X = R/(R+3) in [0, 1)') }, 'a fixity factor {fixity: X}'),
+      strict({ alignment_g: numberScalar('an alignment-chart G factor (>= 0)') }, 'an alignment-chart factor {alignment_g: G}'),
+    ],
+    {
+      error: (iss) => {
+        const options = 'pinned, fixed, {rotation: Q}, {fixity: X} or {alignment_g: G}';
+        const input = iss.input;
+        if (input === undefined) return `is missing: give ${options}`;
+        if (typeof input === 'string') return `unknown end condition '${input}'${didYouMean(input, END_TYPES)}: use ${options}`;
+        if (input !== null && typeof input === 'object' && !Array.isArray(input)) {
+          const keys = Object.keys(input);
+          const known = keys.filter((k) => (END_KEYS as readonly string[]).includes(k));
+          if (known.length > 1) return `give only one of ${known.join(', ')}`;
+          const unknown = keys.find((k) => !(END_KEYS as readonly string[]).includes(k));
+          if (unknown !== undefined) return `unknown key '${unknown}'${didYouMean(unknown, END_KEYS)}: use ${options}`;
+          return `is empty: use ${options}`;
+        }
+        return `expected ${options}, got ${describeInput(input)}`;
+      },
+    },
+  )
+  .meta({ description: 'end condition: pinned | fixed | {rotation: Q (moment per radian)} | {fixity: X in [0,1)} | {alignment_g: G >= 0}' });
+
+const integer = (what: string, minimum: number) =>
+  z
+    .int({ error: (iss) => `expected ${what} (a whole number >= ${minimum}), got ${describeInput(iss.input)}` })
+    .min(minimum, { error: (iss) => `expected ${what} (a whole number >= ${minimum}), got ${describeInput(iss.input)}` })
+    .meta({ description: what });
+
+const correlationEntry = z
+  .tuple([z.string(), z.string(), z.number()], {
+    error: (iss) =>
+      `expected [variable, variable, rho], e.g. [column.material.E, column.material.fy, 0.2]; got ${describeInput(iss.input)}`,
+  })
+  .meta({ description: '[path of a random variable, path of another, Pearson correlation rho with |rho| < 1]' });
+
+export const scenarioShape = strict(
+  {
+    $schema: z.string().optional().meta({ description: 'ignored: lets an editor find this schema' }),
+    stanchion: z.literal(1, { error: (iss) => (iss.input === undefined ? 'is missing: start the file with `stanchion: 1` (the format version)' : `must be 1 (the format version), got ${describeInput(iss.input)}`) }).meta({ description: 'format version: 1' }),
+    title: z.string({ error: (iss) => `expected a text, got ${describeInput(iss.input)}` }).optional().meta({ description: 'a name for the reports' }),
+    column: strict(
+      {
+        length: z
+          .string({
+            error: (iss) =>
+              iss.input !== null && typeof iss.input === 'object' && !Array.isArray(iss.input)
+                ? 'must be a fixed quantity (e.g. 4.2 m), not a random variable: the length defines the model geometry and L in expressions; put the uncertainty in the ends, the bow or the loads'
+                : quantityMessage('length', iss.input, false),
+          })
+          .regex(NUMBER_AND_UNIT, { error: (iss) => quantityMessage('length', iss.input, false) })
+          .meta({ description: 'column length L: a fixed quantity, e.g. 4.2 m (it defines the geometry and L in expressions)', examples: ['4.2 m'] }),
+        frame: choice(FRAMES, 'a frame type').meta({ description: 'braced: the ends do not move sideways; sway: the top may move, resisted only by `lateral`' }),
+        section: strict(
+          {
+            area: quantityScalar('area'),
+            inertia: quantityScalar('inertia'),
+            section_modulus: quantityScalar('sectionModulus'),
+          },
+          'the section (area, inertia, section_modulus about the buckling axis)',
+        ),
+        material: strict({ E: quantityScalar('stress'), fy: quantityScalar('stress') }, 'the material (E, fy)'),
+        ends: strict(
+          {
+            bottom: endSchema,
+            top: endSchema,
+            lateral: quantityScalar('translationalStiffness').optional().meta({ description: 'sway frames only: translational spring at the top (default 0)' }),
+          },
+          'the end conditions (bottom, top, and for sway frames lateral)',
+        ),
+        imperfection: strict(
+          { bow: quantityScalar('length', true).optional().meta({ description: 'bow amplitude e0 of the initial shape (affine to the first mode), e.g. L/1000' }) },
+          'the imperfection (bow)',
+        ).optional(),
+      },
+      'the column (length, frame, section, material, ends, imperfection)',
+    ),
+    loads: z
+      .record(z.string(), quantityScalar('force'), {
+        error: (iss) => (iss.input === undefined ? 'is missing: give at least one axial load, e.g. dead: 420 kN' : `expected a mapping of load names to forces, got ${describeInput(iss.input)}`),
+      })
+      .meta({ description: 'axial compressive loads by name, summed; each a force or a random variable' }),
+    model_factor: numberScalar('a model factor (plain number, e.g. 1.0)').optional(),
+    strength: choice(STRENGTH_MODELS, 'a strength model'),
+    target_beta: pureNumberSchema('a target reliability index, e.g. 3.8').optional(),
+    target_source: z
+      .string({ error: (iss) => `expected a text, got ${describeInput(iss.input)}` })
+      .optional()
+      .meta({ description: "where the target comes from, e.g. 'EN 1990 Annex B', 'EN 1990 Annex C', 'ISO 2394', 'ISO 13822' (free text)", examples: ['EN 1990 Annex C', 'ISO 2394', 'ISO 13822', 'EN 1990 Annex B'] }),
+    correlation: z
+      .array(correlationEntry, { error: (iss) => `expected a list of [variable, variable, rho], got ${describeInput(iss.input)}` })
+      .optional(),
+    analysis: strict(
+      {
+        seed: integer('a random seed', 0).optional(),
+        methods: z
+          .array(choice(METHODS, 'a method'), { error: (iss) => `expected a list of methods (${METHODS.join(', ')}), got ${describeInput(iss.input)}` })
+          .min(1, { error: 'needs at least one method' })
+          .optional(),
+        mc_samples: integer('a number of Monte Carlo samples', 1).optional(),
+        is_samples: integer('a number of importance-sampling samples', 1).optional(),
+        subset_samples: integer('a number of samples per subset level', 1).optional(),
+        workers: integer('a number of worker threads', 1).optional(),
+      },
+      'the analysis options (seed, methods, mc_samples, is_samples, subset_samples, workers)',
+    ).optional(),
+    display_units: choice(DISPLAY_UNITS, 'a unit system for reports').optional(),
+  },
+  'a scenario',
+);
+
+export type ScenarioShape = z.infer<typeof scenarioShape>;
+export type RawScalar = ScenarioShape['loads'][string];
+export type RawEnd = ScenarioShape['column']['ends']['bottom'];

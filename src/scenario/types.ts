@@ -1,0 +1,91 @@
+/**
+ * A validated scenario: every number in SI (N, m, Pa, N·m/rad, N/m), every scalar either
+ * fixed or a random variable, named everywhere by its path in the file (CONTRACT.md §2).
+ */
+import type { DistSpec } from '../probability/distribution.js';
+import type { DisplayUnit } from './quantity.js';
+
+export type { DisplayUnit } from './quantity.js';
+
+/** Same literals as mechanics/ (docs/interfaces.md). */
+export type Frame = 'braced' | 'sway';
+export type StrengthModel = 'first-yield' | 'aisc360-e3' | 'en1993-a0' | 'en1993-a' | 'en1993-b' | 'en1993-c' | 'en1993-d';
+export type Method = 'form' | 'sorm' | 'is' | 'mc' | 'subset';
+
+export type Scalar = { readonly kind: 'fixed'; readonly value: number } | { readonly kind: 'random'; readonly spec: DistSpec };
+
+/**
+ * An end condition. `ratio` ends are given as a fixity factor X (R = 3X/(1−X)) or an
+ * alignment-chart factor G (R = 2/G braced, 6/G sway). The variable is `input`; `R` is the
+ * restraint ratio k L/(E I) at the input's value (its mean when random): map sampled inputs
+ * with restraintRatio() in restraintRatio.ts.
+ */
+export type End =
+  | { readonly type: 'pinned' }
+  | { readonly type: 'fixed' }
+  | { readonly type: 'rotation'; readonly k: Scalar }
+  | { readonly type: 'ratio'; readonly from: 'fixity' | 'alignment_g'; readonly input: Scalar; readonly R: number };
+
+export interface Load {
+  readonly name: string;
+  /** `loads.<name>` */
+  readonly path: string;
+  readonly value: Scalar;
+}
+
+export interface Correlation {
+  readonly a: string;
+  readonly b: string;
+  readonly rho: number;
+}
+
+export interface AnalysisOptions {
+  /** Undefined: the command's default applies. */
+  readonly seed?: number;
+  readonly methods?: readonly Method[];
+  readonly mcSamples?: number;
+  readonly isSamples?: number;
+  readonly subsetSamples?: number;
+  readonly workers?: number;
+}
+
+export interface Scenario {
+  readonly version: 1;
+  readonly title: string;
+  readonly fileName: string;
+  readonly format: 'yaml' | 'json';
+  /** SHA-256 (hex) of the scenario text exactly as read. */
+  readonly sha256: string;
+  readonly column: {
+    /** m; always fixed (it defines the geometry and the meaning of L in expressions). */
+    readonly length: number;
+    readonly frame: Frame;
+    readonly section: { readonly area: Scalar; readonly inertia: Scalar; readonly sectionModulus: Scalar };
+    readonly material: { readonly E: Scalar; readonly fy: Scalar };
+    readonly ends: {
+      readonly bottom: End;
+      readonly top: End;
+      /** N/m translational spring at the top: sway frames only (fixed 0 when not given); null when braced. */
+      readonly lateral: Scalar | null;
+    };
+    /** m; fixed 0 when not given (allowed only for the code strength curves, which ignore it). */
+    readonly bow: Scalar;
+  };
+  /** In file order. */
+  readonly loads: readonly Load[];
+  readonly modelFactor: Scalar;
+  readonly strength: StrengthModel;
+  readonly targetBeta: number;
+  readonly targetSource?: string;
+  readonly correlation: readonly Correlation[];
+  readonly analysis: AnalysisOptions;
+  readonly displayUnits: 'si' | 'us';
+  /** The unit the user wrote for each field path (`column.material.E` → MPa), for echoing inputs. */
+  readonly units: Readonly<Record<string, DisplayUnit>>;
+}
+
+export interface RandomVariable {
+  /** Contract path, e.g. `column.material.E`, `column.ends.bottom.rotation`, `loads.dead`. */
+  readonly path: string;
+  readonly spec: DistSpec;
+}

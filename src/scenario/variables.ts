@@ -1,0 +1,48 @@
+/**
+ * Every value of a scenario by its contract path (CONTRACT.md §2), in one stable order:
+ * section, material, ends (bottom, top, lateral), bow, loads in file order, model factor.
+ */
+import type { End, RandomVariable, Scalar, Scenario } from './types.js';
+
+export interface NamedScalar {
+  readonly path: string;
+  readonly scalar: Scalar;
+}
+
+function endScalar(end: End, path: string): NamedScalar[] {
+  if (end.type === 'rotation') return [{ path: `${path}.rotation`, scalar: end.k }];
+  if (end.type === 'ratio') return [{ path: `${path}.${end.from}`, scalar: end.input }];
+  return [];
+}
+
+/** Every scalar (fixed or random), column length included as a fixed value. */
+export function listScalars(s: Omit<Scenario, 'correlation'>): NamedScalar[] {
+  const c = s.column;
+  const list: NamedScalar[] = [
+    { path: 'column.length', scalar: { kind: 'fixed', value: c.length } },
+    { path: 'column.section.area', scalar: c.section.area },
+    { path: 'column.section.inertia', scalar: c.section.inertia },
+    { path: 'column.section.section_modulus', scalar: c.section.sectionModulus },
+    { path: 'column.material.E', scalar: c.material.E },
+    { path: 'column.material.fy', scalar: c.material.fy },
+    ...endScalar(c.ends.bottom, 'column.ends.bottom'),
+    ...endScalar(c.ends.top, 'column.ends.top'),
+  ];
+  if (c.ends.lateral !== null) list.push({ path: 'column.ends.lateral', scalar: c.ends.lateral });
+  list.push({ path: 'column.imperfection.bow', scalar: c.bow });
+  for (const load of s.loads) list.push({ path: load.path, scalar: load.value });
+  list.push({ path: 'model_factor', scalar: s.modelFactor });
+  return list;
+}
+
+/** The random variables by path, in the order of listScalars. */
+export function randomVariables(s: Omit<Scenario, 'correlation'>): RandomVariable[] {
+  const out: RandomVariable[] = [];
+  for (const { path, scalar } of listScalars(s)) if (scalar.kind === 'random') out.push({ path, spec: scalar.spec });
+  return out;
+}
+
+/** The scalar at a contract path, or undefined. */
+export function scalarAt(s: Omit<Scenario, 'correlation'>, path: string): Scalar | undefined {
+  return listScalars(s).find((n) => n.path === path)?.scalar;
+}

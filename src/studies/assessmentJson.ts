@@ -1,0 +1,142 @@
+/**
+ * The contract JSON of `stanchion assess` (CONTRACT.md §4): contract keys first, extensions after.
+ * JSON has no Infinity: a non-finite number is written as null.
+ */
+import { checkJson } from '../limitState/deterministicCheck.js';
+import type { Assessment } from './columnAssessment.js';
+import { restraintJson } from './columnRestraint.js';
+
+export interface RunMeta {
+  version: string;
+  date: string;
+  command: string;
+}
+
+/** Replace every non-finite number by null, deeply. */
+export function jsonSafe(v: unknown): unknown {
+  if (typeof v === 'number') return Number.isFinite(v) ? v : null;
+  if (Array.isArray(v)) return v.map(jsonSafe);
+  if (v && typeof v === 'object') {
+    const out: Record<string, unknown> = {};
+    for (const [k, x] of Object.entries(v)) if (x !== undefined) out[k] = jsonSafe(x);
+    return out;
+  }
+  return v;
+}
+
+function byName(names: readonly string[], values: readonly number[]): Record<string, number> {
+  const out: Record<string, number> = {};
+  names.forEach((n, i) => (out[n] = values[i]));
+  return out;
+}
+
+export function reliabilityJson(a: Assessment): Record<string, unknown> {
+  const r: Record<string, unknown> = {};
+  const f = a.form;
+  if (a.methods.includes('form')) {
+    r.form = {
+      beta: f.beta,
+      pf: f.pf,
+      converged: f.converged,
+      design_point: byName(f.names, f.designPointX),
+      importance: byName(f.names, f.importance),
+      alpha: byName(f.names, f.alpha),
+      gamma: byName(f.names, f.gamma),
+      iterations: f.iterations,
+      calls: f.calls,
+      multiple_design_points: f.multipleDesignPoints,
+      origin_fails: f.originFails,
+      reason: f.reason,
+    };
+  }
+  if (a.sorm) {
+    r.sorm = {
+      beta: a.sorm.beta,
+      pf: a.sorm.pf,
+      formula: a.sorm.used,
+      breitung: a.sorm.breitung,
+      hohenbichler_rackwitz: a.sorm.hohenbichlerRackwitz,
+      tvedt: a.sorm.tvedt,
+      curvatures: a.sorm.curvatures,
+      calls: a.sorm.calls,
+    };
+  }
+  if (a.is) r.is = { pf: a.is.pf, cov: a.is.cov, calls: a.is.calls, beta: a.is.beta, samples: a.is.samples, failures: a.is.failures };
+  if (a.mc) {
+    r.mc = {
+      pf: a.mc.pf,
+      cov: a.mc.cov,
+      samples: a.mc.samples,
+      failures: a.mc.failures,
+      ci95: a.mc.ci95,
+      beta: a.mc.beta,
+      calls: a.mc.calls,
+      workers: a.mc.workers,
+      stopped_early: a.mc.stoppedEarly,
+    };
+  }
+  if (a.subset) {
+    r.subset = {
+      pf: a.subset.pf,
+      cov: a.subset.cov,
+      calls: a.subset.calls,
+      beta: a.subset.beta,
+      levels: a.subset.levels.length,
+      converged: a.subset.converged,
+    };
+  }
+  r.verdict = { agree: a.verdict.agree, trust: a.verdict.trust, reason: a.verdict.reason };
+  r.governing = a.governing;
+  r.target_beta = a.scenario.targetBeta;
+  r.meets_target = a.governing.beta >= a.scenario.targetBeta;
+  return r;
+}
+
+function sensitivityJson(a: Assessment): Record<string, unknown> {
+  const f = a.form;
+  const out: Record<string, unknown> = {};
+  const s = a.sensitivity;
+  if (s) {
+    out.tornado = s.utilization.rows.map((t) => ({ variable: t.variable, low: t.low, high: t.high }));
+    out.capacity_tornado = s.capacity.rows.map((t) => ({ variable: t.variable, low: t.low, high: t.high }));
+    out.conditional_beta = s.conditionalBeta.rows.map((c) => ({
+      variable: c.variable,
+      low_value: c.lowValue,
+      high_value: c.highValue,
+      beta_low: c.betaLow,
+      beta_high: c.betaHigh,
+    }));
+    out.elasticities = s.elasticities.entries.map((e) => ({
+      variable: e.variable,
+      d_beta_d_mean: e.dBetaDMean,
+      d_beta_d_sd: e.dBetaDSd,
+      mean_elasticity: e.meanElasticity,
+      sd_elasticity: e.sdElasticity,
+    }));
+    const sobol = (r: typeof s.sobolG) =>
+      r.first.map((fi, i) => ({ variable: fi.name, first: fi.value, first_ci95: [fi.lo, fi.hi], total: r.total[i].value, total_ci95: [r.total[i].lo, r.total[i].hi] }));
+    out.sobol = { samples: s.sobolG.n, capacity: sobol(s.sobolCapacity), limit_state: sobol(s.sobolG) };
+  }
+  out.importance = byName(f.names, f.importance);
+  return out;
+}
+
+export function assessmentJson(a: Assessment, meta: RunMeta): unknown {
+  const doc: Record<string, unknown> = {
+    check: checkJson(a.check),
+    reliability: reliabilityJson(a),
+    sensitivity: sensitivityJson(a),
+    meta: {
+      version: meta.version,
+      seed: a.seed,
+      scenario_sha256: a.scenario.sha256,
+      date: meta.date,
+      command: meta.command,
+      methods: a.methods,
+      interrupted: a.interrupted,
+    },
+  };
+  if (a.restraint) doc.restraint = restraintJson(a.restraint);
+  doc.warnings = a.warnings;
+  return jsonSafe(doc);
+}

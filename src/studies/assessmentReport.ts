@@ -1,0 +1,222 @@
+/**
+ * The report's input (report/reportInput.ts) filled from an assessment: the report computes
+ * nothing, so every number it shows is put here.
+ */
+import { quantityKindOf, describePath } from '../limitState/quantityKind.js';
+import { listScalars } from '../scenario/variables.js';
+import type { End, Scenario } from '../scenario/types.js';
+import type {
+  EndDescription,
+  InputRow,
+  PartialFactorRow,
+  ReportInput,
+  TargetSource,
+  TornadoRow,
+} from '../report/reportInput.js';
+import { fixityFactor } from '../mechanics/restraint.js';
+import type { Assessment } from './columnAssessment.js';
+import type { RunMeta } from './assessmentJson.js';
+
+const TARGET_SOURCES: readonly TargetSource[] = ['EN 1990 Annex B', 'EN 1990 Annex C', 'ISO 2394', 'ISO 13822'];
+
+function inputRows(s: Scenario): InputRow[] {
+  return listScalars(s).map(({ path, scalar }) => {
+    const kind = quantityKindOf(path);
+    if (scalar.kind === 'fixed') {
+      return { path, description: describePath(path), kind, distribution: 'fixed', parameters: { value: scalar.value } };
+    }
+    const { dist, ...params } = scalar.spec;
+    return { path, description: describePath(path), kind, distribution: dist, parameters: params };
+  });
+}
+
+function endDescription(end: End, R: number | null, mean: (path: string) => number, path: string): EndDescription {
+  if (end.type === 'pinned') return { type: 'pinned', R: 0, fixity: 0 };
+  if (end.type === 'fixed') return { type: 'fixed', fixity: 1 };
+  const Rv = R ?? Infinity;
+  const stiffness = end.type === 'rotation' ? mean(`${path}.rotation`) : undefined;
+  const random = end.type === 'rotation' ? end.k.kind === 'random' : end.input.kind === 'random';
+  return { type: 'spring', stiffness, R: Number.isFinite(Rv) ? Rv : undefined, fixity: fixityFactor(Rv), random };
+}
+
+function tornadoRows(rows: { variable: string; low: number; high: number }[]): TornadoRow[] {
+  return rows.map((r) => ({ variable: r.variable, low: r.low, high: r.high }));
+}
+
+function partialFactors(a: Assessment): PartialFactorRow[] {
+  const f = a.form;
+  const out: PartialFactorRow[] = [];
+  f.names.forEach((path, i) => {
+    const mean = a.model.dists[i].mean;
+    const design = f.designPointX[i];
+    const role: PartialFactorRow['role'] = path.startsWith('loads.')
+      ? 'load'
+      : path === 'model_factor'
+        ? 'model'
+        : path === 'column.imperfection.bow'
+          ? 'imperfection'
+          : 'resistance';
+    const adverse: 'low' | 'high' = f.alpha[i] > 0 ? 'high' : 'low';
+    const factor = adverse === 'low' ? mean / design : design / mean;
+    if (!Number.isFinite(factor)) return;
+    out.push({ variable: path, kind: quantityKindOf(path), role, adverse, basis: 'mean', referenceValue: mean, designValue: design, factor });
+  });
+  return out;
+}
+
+export function assessmentReportInput(a: Assessment, meta: RunMeta, resultJson: unknown): ReportInput {
+  void resultJson;
+  const s = a.scenario;
+  const model = a.model;
+  const meanOf = (path: string): number => {
+    const i = model.names.indexOf(path);
+    if (i >= 0) return model.dists[i].mean;
+    const sc = listScalars(s).find((n) => n.path === path)?.scalar;
+    return sc && sc.kind === 'fixed' ? sc.value : NaN;
+  };
+  const st = model.state(model.mean);
+  const c = a.check;
+  const f = a.form;
+  const rel: ReportInput['reliability'] = {
+    governing: a.governing,
+    agreement: { consistent: a.verdict.agree, text: a.verdict.reason },
+    target: {
+      beta: s.targetBeta,
+      source: (TARGET_SOURCES as readonly string[]).includes(s.targetSource ?? '') ? (s.targetSource as TargetSource) : 'EN 1990 Annex B',
+      note: s.targetSource && !(TARGET_SOURCES as readonly string[]).includes(s.targetSource) ? s.targetSource : undefined,
+    },
+  };
+  if (a.methods.includes('form')) {
+    const byName = (v: number[]) => Object.fromEntries(f.names.map((n, i) => [n, v[i]]));
+    rel.form = {
+      beta: f.beta,
+      pf: f.pf,
+      converged: f.converged,
+      iterations: f.iterations,
+      calls: f.calls,
+      designPoint: byName(f.designPointX),
+      importance: byName(f.importance),
+      history: f.history.map((h) => ({ iteration: h.iteration, beta: h.beta, g: h.g })),
+    };
+  }
+  if (a.sorm) rel.sorm = { beta: a.sorm.beta, pf: a.sorm.pf, calls: a.sorm.calls, curvatures: a.sorm.curvatures };
+  if (a.is) rel.is = { beta: a.is.beta, pf: a.is.pf, cov: a.is.cov, calls: a.is.calls };
+  if (a.mc) {
+    rel.mc = {
+      beta: a.mc.beta,
+      pf: a.mc.pf,
+      cov: a.mc.cov,
+      samples: a.mc.samples,
+      failures: a.mc.failures,
+      ci95: a.mc.ci95,
+      convergence: a.mc.trace,
+    };
+  }
+  if (a.subset) rel.subset = { beta: a.subset.beta, pf: a.subset.pf, cov: a.subset.cov, calls: a.subset.calls, levels: a.subset.levels.length };
+
+  const sens = a.sensitivity;
+  const sensitivity: ReportInput['sensitivity'] = {
+    utilization: { baseline: sens?.utilization.baseline ?? c.utilization, rows: tornadoRows(sens?.utilization.rows ?? []) },
+    capacity: { baseline: sens?.capacity.baseline ?? c.capacity, rows: tornadoRows(sens?.capacity.rows ?? []) },
+    conditionalBeta: {
+      baseline: sens?.conditionalBeta.baseline ?? f.beta,
+      rows: (sens?.conditionalBeta.rows ?? []).map((r) => ({ variable: r.variable, low: r.betaLow, high: r.betaHigh })),
+    },
+    importance: f.names.map((n, i) => ({ variable: n, alphaSquared: f.importance[i], alpha: f.alpha[i] })),
+    elasticities: (sens?.elasticities.entries ?? []).map((e) => ({ variable: e.variable, mean: e.meanElasticity, sd: e.sdElasticity })),
+  };
+  if (sens) {
+    sensitivity.sobol = {
+      samples: sens.sobolG.n,
+      rows: sens.sobolG.first.map((fi, i) => ({
+        variable: fi.name,
+        first: fi.value,
+        firstCi95: [fi.lo, fi.hi] as [number, number],
+        total: sens.sobolG.total[i].value,
+        totalCi95: [sens.sobolG.total[i].lo, sens.sobolG.total[i].hi] as [number, number],
+      })),
+    };
+  }
+
+  let restraint: ReportInput['restraint'];
+  if (a.restraint) {
+    const r = a.restraint;
+    const pick = (rec: Record<string, number | null>) => ({ bottom: rec.bottom ?? undefined, top: rec.top ?? undefined });
+    const required: { bottom?: number | null; top?: number | null } = {};
+    for (const e of r.study.ends) {
+      const v = r.study.required[e];
+      (required as Record<string, number | null>)[e] = v === null || v === undefined || !Number.isFinite(v) ? null : v;
+    }
+    restraint = {
+      ends: r.study.ends as ('bottom' | 'top')[],
+      targetBeta: r.study.target,
+      curve: r.study.curve.map((p) => ({
+        factor: p.factor,
+        stiffness: { bottom: p.stiffness.bottom, top: p.stiffness.top },
+        beta: p.beta,
+        pf: p.pf,
+        ideal: p.ideal,
+      })),
+      required,
+      fixityFactor: pick(r.fixityAtRequired) as { bottom?: number; top?: number },
+      effectiveLengthFactor: r.kAtRequired,
+      equivalentK: r.kAtCharacteristic,
+      sentence: r.sentence,
+    };
+  }
+
+  const cautions = [...a.warnings, ...(sens?.notes ?? []), ...(a.restraint?.notes ?? [])];
+  if (a.interrupted) cautions.unshift('The run was interrupted: the simulation estimates cover only the samples done.');
+
+  return {
+    meta: {
+      toolVersion: meta.version,
+      seed: a.seed,
+      scenarioSha256: s.sha256,
+      date: meta.date,
+      commandLine: meta.command,
+      scenarioTitle: s.title,
+      scenarioFile: s.fileName,
+    },
+    inputs: inputRows(s),
+    correlation: s.correlation.map((r) => ({ a: r.a, b: r.b, rho: r.rho })),
+    column: {
+      length: s.column.length,
+      frame: s.column.frame,
+      ends: {
+        bottom: endDescription(s.column.ends.bottom, c.restraint_ratio.bottom, meanOf, 'column.ends.bottom'),
+        top: endDescription(s.column.ends.top, c.restraint_ratio.top, meanOf, 'column.ends.top'),
+      },
+      lateralStiffness: s.column.ends.lateral === null ? undefined : meanOf('column.ends.lateral'),
+      section: { area: st.A, inertia: st.I, sectionModulus: st.S },
+      strengthModel: s.strength,
+    },
+    check: {
+      criticalLoad: c.critical_load,
+      effectiveLengthFactor: c.effective_length_factor,
+      restraintRatio: c.restraint_ratio,
+      fixityFactor: c.fixity_factor,
+      capacity: c.capacity,
+      demand: c.demand,
+      utilization: c.utilization,
+      modeShapes: c.modes.map((m) => ({
+        mode: m.mode,
+        criticalLoad: m.critical_load,
+        points: m.shape,
+        inflectionPoints: m.inflection_points.map((x) => x / s.column.length),
+        effectiveLength: m.effective_length_from_inflections ? m.effective_length : null,
+      })),
+    },
+    reliability: rel,
+    sensitivity,
+    restraint,
+    partialFactors: partialFactors(a),
+    samples: {
+      resistance: a.samples.resistance,
+      demand: a.samples.demand,
+      totalSamples: a.samples.resistance.length,
+      designPoint: a.samples.designPoint,
+    },
+    cautions,
+  };
+}

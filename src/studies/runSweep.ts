@@ -1,0 +1,153 @@
+/**
+ * Run (or resume) a sweep shard. Cases already in the shard's journal are skipped; each new
+ * case is journalled as soon as it finishes. With workers > 1 the cases go to worker
+ * threads that rebuild the case runner from its recipe; each case carries its own seed, so
+ * results do not depend on the number of workers or on which worker ran a case.
+ */
+import { Worker } from 'node:worker_threads';
+import { loadCaseRunner, runOneCase, type CaseRunner, type CaseRunnerRecipe } from './caseRunner.js';
+import { compiledTwin } from './compiledTwin.js';
+import { sweepFingerprint } from './sweepFingerprint.js';
+import { SweepJournal } from './sweepJournal.js';
+import type { CaseResult, CaseTable, Shard, SweepCase, SweepRecord } from './sweepTypes.js';
+
+export interface RunSweepOptions {
+  table: CaseTable;
+  /** A function runs in this thread (workers must be 1); a recipe may run in workers. */
+  runCase: CaseRunner | CaseRunnerRecipe;
+  /** Worker threads (default 1: run in this thread). */
+  workers?: number;
+  /** Folder of the journal; reuse it to resume. */
+  stateDir: string;
+  shard?: Shard;
+  /** Extra identity folded into the fingerprint (methods, scenario hash, ...). */
+  identity?: unknown;
+  onCaseDone?: (record: SweepRecord, finished: number, total: number) => void;
+}
+
+export interface RunSweepResult {
+  journal: string;
+  fingerprint: string;
+  /** Cases of this shard, finished now or before. */
+  shardCases: number;
+  /** Cases run now. */
+  ran: number;
+  /** Cases found finished in the journal. */
+  skipped: number;
+  /** Cases run now whose runner threw (recorded with their message). */
+  errors: number;
+}
+
+export function shardCases(cases: SweepCase[], shard: Shard): SweepCase[] {
+  if (!(Number.isInteger(shard.count) && shard.count >= 1 && Number.isInteger(shard.index) && shard.index >= 0 && shard.index < shard.count)) {
+    throw new Error(`bad shard ${shard.index}/${shard.count}`);
+  }
+  return cases.filter((c) => c.index % shard.count === shard.index);
+}
+
+type Finish = (c: SweepCase, done: { result: CaseResult; error?: string }) => void;
+
+async function runInThread(runner: CaseRunner, todo: SweepCase[], finish: Finish): Promise<void> {
+  for (const c of todo) finish(c, await runOneCase(runner, c));
+}
+
+interface WorkerReply {
+  ready?: boolean;
+  index: number;
+  result: CaseResult;
+  error?: string;
+}
+
+function runInWorkers(recipe: CaseRunnerRecipe, todo: SweepCase[], workers: number, finish: Finish): Promise<void> {
+  // under vitest this file is .ts: the worker must be the compiled twin
+  const ext = import.meta.url.endsWith('.ts') ? '.ts' : '.js';
+  const workerUrl = compiledTwin(new URL(`./sweepWorker${ext}`, import.meta.url).href);
+  const byIndex = new Map(todo.map((c) => [c.index, c]));
+  const queue = [...todo];
+  const count = Math.min(workers, queue.length);
+  return new Promise((resolve, reject) => {
+    const pool: Worker[] = [];
+    let running = count;
+    let unfinished = todo.length;
+    let failed = false;
+    const fail = (error: unknown): void => {
+      if (failed) return;
+      failed = true;
+      for (const w of pool) void w.terminate();
+      reject(error instanceof Error ? error : new Error(String(error)));
+    };
+    const feed = (w: Worker): void => {
+      const next = queue.shift();
+      if (next) w.postMessage({ case: next });
+      else void w.terminate();
+    };
+    for (let k = 0; k < count; k++) {
+      const w = new Worker(workerUrl, { workerData: recipe });
+      pool.push(w);
+      w.on('message', (reply: WorkerReply) => {
+        if (failed) return;
+        if (!reply.ready) {
+          const c = byIndex.get(reply.index);
+          if (!c) return fail(new Error(`worker answered an unknown case ${reply.index}`));
+          try {
+            byIndex.delete(reply.index);
+            unfinished -= 1;
+            finish(c, reply);
+          } catch (error) {
+            return fail(error);
+          }
+        }
+        feed(w);
+      });
+      w.on('error', fail);
+      w.on('exit', () => {
+        running -= 1;
+        if (running === 0 && !failed) {
+          // a worker that exits by itself (process.exit in a runner) leaves its case unfinished
+          if (unfinished > 0) fail(new Error('workers stopped before the sweep finished'));
+          else resolve();
+        }
+      });
+    }
+    if (count === 0) resolve();
+  });
+}
+
+export async function runSweep(opts: RunSweepOptions): Promise<RunSweepResult> {
+  const shard = opts.shard ?? { index: 0, count: 1 };
+  const workers = opts.workers ?? 1;
+  if (!(Number.isInteger(workers) && workers >= 1)) throw new Error(`workers must be a whole number >= 1, got ${workers}`);
+  const mine = shardCases(opts.table.cases, shard);
+  const fingerprint = sweepFingerprint(opts.table, opts.identity);
+  const journal = SweepJournal.open(opts.stateDir, {
+    stanchion_sweep_journal: 1,
+    fingerprint,
+    varied: opts.table.varied,
+    cases: opts.table.cases.length,
+    shard,
+  });
+  try {
+    const todo = mine.filter((c) => !journal.done.has(c.index));
+    let errors = 0;
+    const finish: Finish = (c, done) => {
+      const record: SweepRecord = { case: c.index, seed: c.seed, values: c.values, result: done.result };
+      if (done.error !== undefined) {
+        record.error = done.error;
+        errors += 1;
+      }
+      journal.record(record);
+      opts.onCaseDone?.(record, journal.done.size, mine.length);
+    };
+    if (typeof opts.runCase === 'function') {
+      if (workers > 1) throw new Error('runSweep: a case-runner function cannot cross threads; pass a recipe for workers > 1');
+      await runInThread(opts.runCase, todo, finish);
+    } else if (workers === 1) {
+      await runInThread(await loadCaseRunner(opts.runCase), todo, finish);
+    } else {
+      await runInWorkers(opts.runCase, todo, workers, finish);
+    }
+    return { journal: journal.file, fingerprint, shardCases: mine.length, ran: todo.length, skipped: mine.length - todo.length, errors };
+  } finally {
+    journal.close();
+  }
+}

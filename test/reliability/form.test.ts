@@ -1,0 +1,213 @@
+import { describe, expect, it } from 'vitest';
+import { form } from '../../src/reliability/form.js';
+import { LimitStateError } from '../../src/reliability/limitStateError.js';
+import {
+  eulerColumn, linearSum, misbehaving, resistanceMinusLoad, resistanceModelLoad, shortColumn, steelBeam,
+} from '../../src/reliability/testProblems.js';
+import { normalSf } from '../../src/probability/normal.js';
+import type { ReliabilityProblem } from '../../src/reliability/types.js';
+
+/** |a − e| within half a unit of the last of `digits` significant digits of e. */
+function expectDigits(actual: number, expected: number, digits = 6): void {
+  const unit = 10 ** (Math.floor(Math.log10(Math.abs(expected))) - (digits - 1));
+  expect(Math.abs(actual - expected), `${actual} vs ${expected}`).toBeLessThanOrEqual(0.5 * unit * 1.0001);
+}
+
+const R_A = { dist: 'normal', mean: 200, sd: 20 } as const;
+const S_A = { dist: 'normal', mean: 100, sd: 25 } as const;
+const R_B = { dist: 'lognormal', mean: 200, cov: 0.1 } as const;
+const S_B = { dist: 'lognormal', mean: 100, cov: 0.25 } as const;
+
+describe('FORM on closed-form oracles', () => {
+  it('§1a R − S normal: β, pf, design point, α', () => {
+    const r = form(resistanceMinusLoad({ r: R_A, s: S_A }));
+    // source: Cornell 1969; Hasofer & Lind 1974 — references/reliability.md §1a
+    expectDigits(r.beta, 3.12348);
+    expectDigits(r.pf, 8.93645e-4);
+    expectDigits(r.designPointX[0], 160.976);
+    expectDigits(r.designPointX[1], 160.976);
+    expectDigits(r.alpha[0], -0.624695);
+    expectDigits(r.alpha[1], 0.780869);
+    expect(r.converged).toBe(true);
+    expect(r.importance[0] + r.importance[1]).toBeCloseTo(1, 12);
+    expect(r.gamma[0]).toBeCloseTo(r.alpha[0], 6); // common practice: γ = α for independent variables
+    expect(r.multipleDesignPoints).toBe(false);
+    expect(r.originFails).toBe(false);
+    expect(r.g0).toBeCloseTo(100, 9);
+    expect(r.history[0]).toEqual({ iteration: 0, beta: 0, g: r.g0, step: 0 });
+    expect(r.history.length).toBe(r.iterations + 1);
+    expect(r.calls).toBeGreaterThan(0);
+  });
+
+  it('§1b R − S lognormal: β 2.70453, design point and α', () => {
+    // source: Melchers 1999 ch. 3 lognormal safety margin (from memory) — references/reliability.md §1b
+    const r = form(resistanceMinusLoad({ r: R_B, s: S_B }));
+    expectDigits(r.beta, 2.70453);
+    expectDigits(r.pf, 3.42004e-3);
+    expectDigits(r.designPointX[0], 179.836);
+    expectDigits(r.alpha[0], -0.375486);
+    expectDigits(r.alpha[1], 0.926828);
+  });
+
+  it('§1e R·θ − S lognormal: β 2.65330', () => {
+    // source: Nowak & Collins 2000 ch. 5 (from memory) — references/reliability.md §1e
+    const r = form(resistanceModelLoad({ r: R_B, theta: { dist: 'lognormal', mean: 1, cov: 0.05 }, s: S_B }));
+    expectDigits(r.beta, 2.6533);
+    expectDigits(r.designPointX[0], 180.49);
+    expectDigits(r.designPointX[1], 0.974572);
+    expectDigits(r.designPointX[2], 175.9);
+    expectDigits(r.alpha[0], -0.369015);
+    expectDigits(r.alpha[1], -0.184852);
+    expectDigits(r.alpha[2], 0.910856);
+  });
+
+  it('§1f correlated normal pairs: β 4.36436 (ρ = +0.5) and 2.56074 (ρ = −0.5)', () => {
+    // source: Hasofer & Lind 1974 second-moment theory — references/reliability.md §1f1, §1f2
+    expectDigits(form(resistanceMinusLoad({ r: R_A, s: S_A, rho: 0.5 })).beta, 4.36436);
+    expectDigits(form(resistanceMinusLoad({ r: R_A, s: S_A, rho: -0.5 })).beta, 2.56074);
+  });
+
+  it('§1f3/f4 correlated lognormals through Nataf: β 3.35983 and 2.32214', () => {
+    // source: Liu & Der Kiureghian 1986 (from memory) — references/reliability.md §1f3, §1f4
+    expectDigits(form(resistanceMinusLoad({ r: R_B, s: S_B, rho: 0.5 })).beta, 3.35983);
+    expectDigits(form(resistanceMinusLoad({ r: R_B, s: S_B, rho: -0.5 })).beta, 2.32214);
+  });
+
+  it('§1g Euler column with uncertain K: β 3.40057, design point and α', () => {
+    // source: references/reliability.md §1g (exact: ln(Pcr/P) linear in the log-variables)
+    const r = form(eulerColumn({ length: 5 }));
+    expectDigits(r.beta, 3.40057);
+    expectDigits(r.pf, 3.36223e-4);
+    const alpha = [-0.0829564, -0.110589, 0.82514, 0.547752];
+    alpha.forEach((a, i) => expectDigits(r.alpha[i], a));
+    expectDigits(r.designPointX[0], 208.137e9);
+    expectDigits(r.designPointX[1], 1.97153e-5);
+    expectDigits(r.designPointX[2], 1.27751);
+    expectDigits(r.designPointX[3], 992.63e3);
+  });
+
+  it('§1c linear in 100 normals: β = 3.5, u*_i = 0.35', () => {
+    // source: references/reliability.md §1c1
+    const r = form(linearSum({ n: 100, beta: 3.5 }), { restarts: 0 });
+    expect(r.beta).toBeCloseTo(3.5, 7);
+    for (const u of r.designPointU) expect(u).toBeCloseTo(0.35, 7);
+  });
+});
+
+describe('FORM on textbook examples', () => {
+  it('§2a Haldar & Mahadevan steel beam: 4.261 (normals), 5.151 (lognormal Fy)', () => {
+    const z = { dist: 'normal', mean: 54, cov: 0.05 } as const;
+    const normal = form(steelBeam({ fy: { dist: 'normal', mean: 38, cov: 0.1 }, z }));
+    // from memory: Haldar & Mahadevan 2000 ch. 7, published 4.261; computed 4.26135 (references §2a)
+    expectDigits(normal.beta, 4.261, 4);
+    expectDigits(normal.beta, 4.26135);
+    expectDigits(normal.designPointX[0], 22.5655);
+    expectDigits(normal.designPointX[1], 50.5195);
+    const logFy = form(steelBeam({ fy: { dist: 'lognormal', mean: 38, cov: 0.1 }, z }));
+    // from memory: Haldar & Mahadevan 2000 ch. 7, published 5.151; computed 5.15079 (references §2a)
+    expectDigits(logFy.beta, 5.151, 4);
+    expectDigits(logFy.beta, 5.15079);
+    expectDigits(logFy.alpha[0], -0.866876);
+    expectDigits(logFy.alpha[1], -0.498524);
+  });
+
+  it('§2b Der Kiureghian 2005 short column: β 2.46602, design point, α, γ', () => {
+    const r = form(shortColumn({}));
+    // from memory: Der Kiureghian 2005 ch. 14 publishes 2.47; computed 2.46602 (references §2b)
+    expectDigits(r.beta, 2.46602);
+    expectDigits(r.pf, 6.83116e-3);
+    [340.726e3, 170.363e3, 3222.41e3, 31.7692e6].forEach((x, i) => expectDigits(r.designPointX[i], x));
+    // α and γ to 5 digits: they move with the Nataf ρ0 quadrature at the 1e-7 level
+    [0.490537, 0.283211, 0.381173, -0.730665].forEach((a, i) => expectDigits(r.alpha[i], a, 5));
+    [0.268429, 0.268429, 0.45114, -0.807691].forEach((g, i) => expectDigits(r.gamma[i], g, 5));
+    expect(r.gamma[0]).toBeCloseTo(r.gamma[1], 7); // M1/S1 and M2/S2 are exchangeable
+  });
+
+  it('§2b permuting the variables leaves β and γ unchanged, but not α', () => {
+    // source: Der Kiureghian 2005 ch. 14 (γ is order-free; from memory) — references §2b
+    const base = form(shortColumn({}));
+    const order = [3, 2, 1, 0];
+    const permuted = form(shortColumn({ order }));
+    expect(permuted.beta).toBeCloseTo(base.beta, 7);
+    order.forEach((k, i) => {
+      expect(permuted.gamma[i]).toBeCloseTo(base.gamma[k], 6);
+      expect(permuted.designPointX[i] / base.designPointX[k]).toBeCloseTo(1, 6);
+    });
+    const alphaMoved = order.some((k, i) => Math.abs(permuted.alpha[i] - base.alpha[k]) > 1e-3);
+    expect(alphaMoved).toBe(true);
+  });
+});
+
+describe('FORM special cases', () => {
+  it('reports a failing origin with a negative β and pf > ½', () => {
+    // common practice: β = −‖u*‖ when g(0) < 0; here g = R − S with mean R < mean S, exact normal result
+    const r = form(resistanceMinusLoad({ r: S_A, s: R_A }));
+    expect(r.originFails).toBe(true);
+    expect(r.beta).toBeCloseTo(-3.12348, 5);
+    expect(r.pf).toBeCloseTo(1 - 8.93645e-4, 8);
+    expect(r.warnings.join(' ')).toMatch(/already fails/);
+    expect(r.alpha[0] ** 2 + r.alpha[1] ** 2).toBeCloseTo(1, 10);
+  });
+
+  it('flags two design points of a series system (g = 3 − |u1|)', () => {
+    // common practice: symmetric series system, design points at u1 = ±3, exact pf = 2Φ(−3)
+    const problem: ReliabilityProblem = {
+      names: ['a', 'b'],
+      transform: { n: 2, toPhysical: (u, x) => x.set(u), toStandard: (x, u) => u.set(x) },
+      g: (x) => 3 - Math.abs(x[0] + 0.1) + 0.01 * x[1] * x[1],
+    };
+    const r = form(problem);
+    expect(r.converged).toBe(true);
+    expect(r.multipleDesignPoints).toBe(true);
+    expect(r.otherDesignPoints.length).toBe(1);
+    expect(Math.sign(r.otherDesignPoints[0].designPointU[0])).toBe(-Math.sign(r.designPointU[0]));
+    // the nearer point (u1 = +2.9) is the one reported
+    expect(r.beta).toBeCloseTo(2.9, 6);
+    expect(r.otherDesignPoints[0].beta).toBeCloseTo(3.1, 6);
+    expect(r.pf).toBeCloseTo(normalSf(2.9), 12);
+  });
+
+  it('a gradient vanishing at the origin is rescued by the restarts (g = 2 − u1²)', () => {
+    // common practice: design points at u1 = ±√2, found from starting points off the origin
+    const problem: ReliabilityProblem = {
+      names: ['a', 'b'],
+      transform: { n: 2, toPhysical: (u, x) => x.set(u), toStandard: (x, u) => u.set(x) },
+      g: (x) => 2 - x[0] * x[0],
+    };
+    const r = form(problem);
+    expect(r.converged).toBe(true);
+    expect(r.beta).toBeCloseTo(Math.SQRT2, 7);
+    expect(r.multipleDesignPoints).toBe(true);
+    expect(r.warnings.join(' ')).toMatch(/gradient of g vanished.*a restart converged/);
+  });
+
+  it('says when it did not converge', () => {
+    // common practice: a strongly nonlinear g needs more than one iteration
+    const r = form(resistanceMinusLoad({ r: R_B, s: S_B }), { maxIterations: 1 });
+    expect(r.converged).toBe(false);
+    expect(r.reason).toMatch(/no convergence in 1 iterations/);
+    expect(r.warnings.join(' ')).toMatch(/did not converge/);
+  });
+
+  it('forward differences reach the same β', () => {
+    // source: references/reliability.md §1b
+    const r = form(resistanceMinusLoad({ r: R_B, s: S_B }), { differences: 'forward' });
+    expect(r.beta).toBeCloseTo(2.70453, 4);
+  });
+
+  it('throws LimitStateError naming the variables when g returns NaN', () => {
+    // common practice: a NaN limit state must never be swallowed
+    const p = misbehaving({ mode: 'nan', above: 120 });
+    let caught: unknown;
+    try {
+      form(p);
+    } catch (e) {
+      caught = e;
+    }
+    expect(caught).toBeInstanceOf(LimitStateError);
+    const e = caught as LimitStateError;
+    expect(e.names).toEqual(['R', 'S']);
+    expect(e.x[1]).toBeGreaterThan(120);
+    expect(e.message).toMatch(/FORM: limit state returned NaN .*S = /);
+  });
+});

@@ -1,0 +1,87 @@
+import { describe, expect, it } from 'vitest';
+import { verdict } from '../../src/reliability/verdict.js';
+import { form } from '../../src/reliability/form.js';
+import { sorm } from '../../src/reliability/sorm.js';
+import { monteCarlo } from '../../src/reliability/monteCarlo.js';
+import { importanceSampling, importanceSamplingAtDesignPoint } from '../../src/reliability/importanceSampling.js';
+import { subsetSimulation } from '../../src/reliability/subsetSimulation.js';
+import { linearSum, paraboloid, resistanceMinusLoad } from '../../src/reliability/testProblems.js';
+import type { ReliabilityProblem } from '../../src/reliability/types.js';
+
+describe('verdict', () => {
+  it('§1a: everything agrees and the least uncertain simulation is trusted', async () => {
+    // source: references/reliability.md §1a (linear in normals: FORM is exact)
+    const p = resistanceMinusLoad({ r: { dist: 'normal', mean: 200, sd: 20 }, s: { dist: 'normal', mean: 100, sd: 25 } });
+    const f = form(p);
+    const s = sorm(p, f);
+    const is = await importanceSamplingAtDesignPoint(p, f, { samples: 4000, seed: 1 });
+    const mc = await monteCarlo(p, { samples: 100_000, seed: 1 });
+    const v = verdict({ form: f, sorm: s, is, mc });
+    expect(v.agree).toBe(true);
+    expect(v.trust).toBe('is');
+    expect(v.reference).toBe('is');
+    expect(v.reason).toMatch(/^All estimates agree/);
+    expect(v.comparisons.map((c) => c.method)).toEqual(['form', 'sorm', 'mc', 'is']);
+  });
+
+  it('§1d n = 10: FORM is off but SORM agrees with IS', async () => {
+    // source: references/reliability.md §1d (FORM 1.35e-3, Tvedt 3.48e-4, exact 3.53e-4)
+    const p = paraboloid({ n: 10, beta: 3, kappa: 0.1 });
+    const f = form(p);
+    const is = await importanceSamplingAtDesignPoint(p, f, { samples: 20_000, seed: 2 });
+    const v = verdict({ form: f, sorm: sorm(p, f), is });
+    expect(v.agree).toBe(false);
+    expect(v.trust).toBe('is');
+    expect(v.comparisons.find((c) => c.method === 'sorm')?.consistent).toBe(true);
+    expect(v.reason).toMatch(/FORM differs from IS .* but SORM agrees: curvature matters/);
+  });
+
+  it('§1d n = 100: FORM and SORM both fail, subset simulation is trusted', () => {
+    // source: references/reliability.md §1d last row (all asymptotic formulas fail; exact 1.07966e-5)
+    const p = paraboloid({ n: 100, beta: 2, kappa: 0.05 });
+    const f = form(p, { restarts: 0 });
+    const sub = subsetSimulation(p, { seed: 3, samplesPerLevel: 4000 });
+    expect(sub.cov).toBeLessThan(0.3);
+    const v = verdict({ form: f, sorm: sorm(p, f), subset: sub });
+    expect(v.agree).toBe(false);
+    expect(v.trust).toBe('subset');
+    expect(v.reason).toMatch(/FORM and SORM differ from subset simulation/);
+  });
+
+  it('MC without failures is only an upper bound', async () => {
+    // source: references/reliability.md §1c2 (pf 2.87e-7, far below what 20 000 samples can see)
+    const p = linearSum({ n: 3, beta: 5 });
+    const f = form(p);
+    const mc = await monteCarlo(p, { samples: 20_000, seed: 1 });
+    expect(mc.failures).toBe(0);
+    const v = verdict({ form: f, sorm: sorm(p, f), mc });
+    expect(v.trust).toBe('sorm');
+    expect(v.agree).toBe(true);
+    expect(v.reason).toMatch(/MC has 0 failures in 20000 samples: its pf is only an upper bound .*SORM lies below it/);
+  });
+
+  it('FORM and SORM alone: a large difference means curvature matters', () => {
+    // source: references/reliability.md §1d row n = 10 (FORM 1.35e-3 vs SORM 3.5e-4)
+    const p = paraboloid({ n: 10, beta: 3, kappa: 0.1 });
+    const f = form(p);
+    const v = verdict({ form: f, sorm: sorm(p, f) });
+    expect(v.agree).toBe(false);
+    expect(v.trust).toBe('sorm');
+    expect(v.reason).toMatch(/FORM and SORM differ by \d+ %: curvature matters, trust SORM/);
+  });
+
+  it('IS centred on one of two design points disagrees with MC: trust MC', async () => {
+    // common practice: a symmetric series system has pf = 2Φ(−3); IS at one point sees half of it
+    const p: ReliabilityProblem = {
+      names: ['a', 'b'],
+      transform: { n: 2, toPhysical: (u, x) => x.set(u), toStandard: (x, u) => u.set(x) },
+      g: (x) => 3 - Math.abs(x[0]),
+    };
+    const mc = await monteCarlo(p, { samples: 200_000, seed: 5 });
+    const is = await importanceSampling(p, [3, 0], { samples: 20_000, seed: 5 });
+    const v = verdict({ mc, is });
+    expect(v.agree).toBe(false);
+    expect(v.trust).toBe('mc');
+    expect(v.reason).toMatch(/IS may have missed a failure region/);
+  });
+});

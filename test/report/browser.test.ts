@@ -1,0 +1,90 @@
+// End-to-end: the fixture report opens in a real browser (Debian chromium) without errors,
+// shows its charts, prints, and is saved as a screenshot for people to look at.
+// common practice: headless browser check of a self-contained HTML file.
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { existsSync, mkdirSync, mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { dirname, join, resolve } from 'node:path';
+import { fileURLToPath, pathToFileURL } from 'node:url';
+import { chromium, type Browser, type Page } from 'playwright-core';
+import { writeOutputs } from '../../src/report/writeOutputs.js';
+import { SECTION_TITLES } from '../../src/report/reportDocument.js';
+import { buildCharts } from '../../src/report/charts/allCharts.js';
+import { demoReportInput, demoResultJson } from './fixture.js';
+
+const CHROMIUM = '/usr/bin/chromium';
+const SKIP = process.env.STANCHION_SKIP_BROWSER === '1';
+const HERE = dirname(fileURLToPath(import.meta.url));
+const SCREENSHOT = resolve(HERE, '../../reports/screenshots/report-fixture.png');
+const ARGS = ['--headless', '--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run', '--disable-quic'];
+
+describe.skipIf(SKIP)('report.html in Chromium', () => {
+  const input = demoReportInput();
+  const problems: string[] = [];
+  let root = '';
+  let browser: Browser | undefined;
+  let page: Page;
+
+  beforeAll(async () => {
+    if (!existsSync(CHROMIUM)) {
+      throw new Error(
+        `Chromium not found at ${CHROMIUM}. Install it with 'apt-get install -y --no-install-recommends chromium', or set STANCHION_SKIP_BROWSER=1 to skip the browser test.`,
+      );
+    }
+    root = mkdtempSync(join(tmpdir(), 'stanchion-report-browser-'));
+    await writeOutputs(join(root, 'report'), input, demoResultJson(input), { png: false });
+    browser = await chromium.launch({ executablePath: CHROMIUM, args: ARGS });
+    page = await browser.newPage({ viewport: { width: 1100, height: 900 } });
+    page.on('console', (m) => {
+      if (m.type() === 'error' || m.type() === 'warning') problems.push(`console ${m.type()}: ${m.text()}`);
+    });
+    page.on('pageerror', (e) => problems.push(`page error: ${e.message}`));
+    page.on('request', (r) => {
+      if (!r.url().startsWith('file:') && !r.url().startsWith('data:')) problems.push(`external request: ${r.url()}`);
+    });
+    await page.goto(pathToFileURL(join(root, 'report', 'report.html')).href, { waitUntil: 'load' });
+  });
+
+  afterAll(async () => {
+    await browser?.close();
+    if (root) rmSync(root, { recursive: true, force: true });
+  });
+
+  it('loads without console errors or network requests', () => {
+    expect(problems).toEqual([]);
+  });
+
+  it('shows every section and every chart with its title', async () => {
+    const headings = await page.locator('h2').allTextContents();
+    expect(headings).toEqual(Object.values(SECTION_TITLES));
+    const charts = buildCharts(input, 'si');
+    expect(await page.locator('figure.chart svg').count()).toBe(charts.length);
+    for (const c of charts) {
+      const fig = page.locator(`figure[data-chart="${c.name}"]`);
+      expect(await fig.locator('svg text', { hasText: c.title }).count()).toBeGreaterThan(0);
+      const box = await fig.locator('svg').boundingBox();
+      expect(box && box.width > 200 && box.height > 100).toBe(true);
+    }
+    expect(await page.locator('figure.sketch svg').count()).toBe(1);
+  });
+
+  it('prints: the print stylesheet applies and A4 and Letter PDFs are produced', async () => {
+    await page.emulateMedia({ media: 'print' });
+    expect(await page.locator('nav.toc').evaluate((el) => getComputedStyle(el).display)).toBe('none');
+    for (const format of ['A4', 'Letter'] as const) {
+      const pdf = await page.pdf({ format, printBackground: true });
+      expect(pdf.subarray(0, 5).toString('latin1')).toBe('%PDF-');
+      const pages = (pdf.toString('latin1').match(/\/Type\s*\/Page\b/g) ?? []).length;
+      expect(pages).toBeGreaterThan(3);
+    }
+    await page.emulateMedia({ media: 'screen' });
+    expect(await page.locator('nav.toc').evaluate((el) => getComputedStyle(el).display)).not.toBe('none');
+  });
+
+  it('saves a screenshot', async () => {
+    mkdirSync(dirname(SCREENSHOT), { recursive: true });
+    const png = await page.screenshot({ path: SCREENSHOT, fullPage: true });
+    expect(png.length).toBeGreaterThan(50_000);
+    expect(existsSync(SCREENSHOT)).toBe(true);
+  });
+});

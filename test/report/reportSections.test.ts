@@ -1,0 +1,122 @@
+// The words of the report follow the numbers they are given. common practice: check the verdicts both ways.
+import { describe, expect, it } from 'vitest';
+import { buildReportDocument } from '../../src/report/reportSections.js';
+import { SECTION_TITLES, type Block, type ReportDocument } from '../../src/report/reportDocument.js';
+import { renderMarkdown } from '../../src/report/markdownReport.js';
+import { buildCharts } from '../../src/report/charts/allCharts.js';
+import { STANDING_CAUTIONS } from '../../src/report/standingCautions.js';
+import { csvTables, toCsv } from '../../src/report/csvTables.js';
+import type { ReportInput } from '../../src/report/reportInput.js';
+import { demoReportInput } from './fixture.js';
+
+function doc(input: ReportInput, system: 'si' | 'us' = 'si'): ReportDocument {
+  return buildReportDocument(input, system, buildCharts(input, system));
+}
+
+function sectionText(d: ReportDocument, id: keyof typeof SECTION_TITLES): string {
+  const s = d.sections.find((x) => x.id === id);
+  if (!s) return '';
+  const text = (b: Block): string =>
+    b.kind === 'table' ? [b.caption ?? '', ...b.head, ...b.rows.flat()].join(' ') : b.kind === 'list' ? b.items.join(' ') : 'text' in b ? b.text : b.kind;
+  return s.blocks.map(text).join('\n');
+}
+
+describe('report document', () => {
+  it('has the sections in order, the sweep only when a sweep ran', () => {
+    const full = doc(demoReportInput());
+    expect(full.sections.map((s) => s.title)).toEqual(Object.values(SECTION_TITLES));
+    const noSweep = doc({ ...demoReportInput(), sweep: undefined });
+    expect(noSweep.sections.map((s) => s.id)).not.toContain('sweep');
+  });
+
+  it('says the column falls short when β < target, and by how much', () => {
+    const t = sectionText(doc(demoReportInput()), 'target');
+    expect(t).toContain('FALLS SHORT OF');
+    expect(t).toContain('Δβ = 0.61'); // 3.80 − 3.194 from the fixture
+    expect(t).toContain('EN 1990 Annex C');
+  });
+
+  it('says the column meets the target when β ≥ target', () => {
+    const input = demoReportInput();
+    input.reliability.governing = { method: 'form', beta: 4.1, pf: 2.07e-5 };
+    input.reliability.target = { beta: 3.8, source: 'ISO 13822' };
+    const t = sectionText(doc(input), 'target');
+    expect(t).toContain('MEETS');
+    expect(t).not.toContain('FALLS SHORT');
+    expect(t).toContain('ISO 13822');
+  });
+
+  it('carries the standing cautions and this run’s cautions', () => {
+    const input = demoReportInput();
+    const t = sectionText(doc(input), 'cautions');
+    for (const c of STANDING_CAUTIONS) expect(t).toContain(c);
+    for (const c of input.cautions) expect(t).toContain(c);
+    expect(t).toContain('licensed engineer');
+  });
+
+  it('shows the reproducibility facts', () => {
+    const input = demoReportInput();
+    const t = sectionText(doc(input), 'reproducibility');
+    expect(t).toContain(input.meta.scenarioSha256);
+    expect(t).toContain(String(input.meta.seed));
+    expect(t).toContain(input.meta.toolVersion);
+    expect(t).toContain(input.meta.date);
+    expect(t).toContain(input.meta.commandLine);
+  });
+
+  it('converts displayed values to US customary units on request', () => {
+    const us = sectionText(doc(demoReportInput(), 'us'), 'inputs');
+    // 760 kN / 4.4482216152605 kN per kip = 170.9 kip (NIST SP 811 factor, see displayUnits.test.ts)
+    expect(us).toContain('171 kip');
+    // 310 MPa / 6.894757 MPa per ksi = 44.96 ksi
+    expect(us).toContain('45 ksi');
+    const si = sectionText(doc(demoReportInput(), 'si'), 'inputs');
+    expect(si).toContain('760 kN');
+    expect(si).toContain('310 MPa');
+  });
+
+  it('drops input columns that no variable uses', () => {
+    const inputs = doc(demoReportInput()).sections.find((s) => s.id === 'inputs');
+    const table = inputs?.blocks.find((b) => b.kind === 'table');
+    expect(table && table.kind === 'table' ? table.head : []).toEqual(['variable', 'description', 'distribution', 'mean or value', 'sd', 'CoV']);
+  });
+
+  it('says so when there is no restraint study', () => {
+    const t = sectionText(doc({ ...demoReportInput(), restraint: undefined }), 'restraint');
+    expect(t).toContain('no restraint study');
+  });
+
+  it('renders compact Markdown with linked PNG charts', () => {
+    const md = renderMarkdown(doc(demoReportInput()));
+    expect(md).toContain('![Column sketch](charts/column-sketch.png)');
+    expect(md).toContain('![Tornado: utilization](charts/tornado-utilization.png)');
+    expect(md).toMatch(/\| method \| β \| pf \|/);
+  });
+});
+
+describe('CSV tables', () => {
+  it('quotes per RFC 4180 and writes infinities readably', () => {
+    // source: RFC 4180 §2 (fields with commas, quotes or line breaks are quoted; quotes doubled)
+    expect(toCsv(['a', 'b'], [['x,y', 'say "hi"'], [Infinity, null]])).toBe('a,b\n"x,y","say ""hi"""\ninf,\n');
+  });
+
+  it('writes one row per sample, tornado entry and curve point', () => {
+    const input = demoReportInput();
+    const t = csvTables(input);
+    const lines = (s: string) => s.trimEnd().split('\n').length - 1;
+    expect(lines(t['samples.csv'])).toBe(5000);
+    expect(lines(t['samples-summary.csv'])).toBe(2);
+    expect(lines(t['tornado.csv'])).toBe(3 * 7);
+    expect(lines(t['restraint-curve.csv'])).toBe(input.restraint!.curve.length);
+    expect(lines(t['sweep.csv'])).toBe(input.sweep!.rows.length);
+    expect(t['restraint-curve.csv']).toContain('inf');
+  });
+
+  it('summarises the samples: the mean of the demand matches the data', () => {
+    const input = demoReportInput();
+    const row = csvTables(input)['samples-summary.csv'].split('\n')[2].split(',');
+    const mean = input.samples!.demand.reduce((a, b) => a + b, 0) / input.samples!.demand.length;
+    expect(row[0]).toBe('demand');
+    expect(Number(row[3])).toBeCloseTo(mean, 6);
+  });
+});

@@ -1,0 +1,95 @@
+import { describe, expect, it } from 'vitest';
+import { brentRoot } from '../../src/studies/brentRoot.js';
+import { restraintStudy, type BetaPoint } from '../../src/studies/restraintStudy.js';
+import { restraintSentence } from '../../src/studies/restraintSentence.js';
+
+// A synthetic monotone β(factor) = a + b f/(1 + f): pinned β = a, rigid β = a + b,
+// target t reached at f* = (t − a)/(a + b − t) (own construction, exact).
+function synthetic(a: number, b: number) {
+  const seen: number[] = [];
+  const betaAtFactor = (f: number): BetaPoint => {
+    seen.push(f);
+    const beta = f === Infinity ? a + b : a + (b * f) / (1 + f);
+    return { beta, pf: 0.5 * Math.exp(-beta) }; // any decreasing pf will do here
+  };
+  return { betaAtFactor, seen };
+}
+const root = (a: number, b: number, t: number): number => (t - a) / (a + b - t);
+const base = { bottom: 2e6, top: 1e6 };
+
+describe('brentRoot', () => {
+  it('solves cos x = x (Dottie number 0.739085133215161, common practice)', () => {
+    const r = brentRoot((x) => Math.cos(x) - x, 0, 1, { xtol: 1e-14 });
+    // common practice: the fixed point of cos, 0.739085133215161
+    expect(r.x).toBeCloseTo(0.739085133215161, 13);
+  });
+  it('refuses a bracket without a sign change', () => {
+    expect(() => brentRoot((x) => x * x + 1, -1, 1)).toThrow(/sign change/);
+  });
+});
+
+describe('restraintStudy', () => {
+  it('finds the known root by a solve, not by reading the grid', () => {
+    const { betaAtFactor } = synthetic(2, 3);
+    const result = restraintStudy({ betaAtFactor, baseStiffness: base, target: 3.8 });
+    expect(result.outcome).toBe('reached');
+    expect(result.requiredFactor as number).toBeCloseTo(root(2, 3, 3.8), 5); // 1.5
+    expect(result.required.bottom as number).toBeCloseTo(3e6, -1);
+    expect(result.required.top as number).toBeCloseTo(1.5e6, -1);
+    // the default grid (0.01 … 100, 13 points) does not contain 1.5
+    expect(result.curve.filter((p) => !p.ideal).length).toBeGreaterThan(13);
+    // sorted by stiffness, pinned first and rigid last, marked
+    const factors = result.curve.map((p) => p.factor);
+    expect(factors).toEqual([...factors].sort((x, y) => x - y));
+    expect(result.curve[0]).toMatchObject({ factor: 0, ideal: 'pinned', stiffness: { bottom: 0, top: 0 }, beta: 2 });
+    expect(result.curve[result.curve.length - 1]).toMatchObject({ ideal: 'fixed', stiffness: { bottom: Infinity }, beta: 5 });
+    expect(result.calls).toBe(result.curve.length);
+  });
+
+  it('extends the grid downwards and upwards when the crossing lies outside it', () => {
+    const low = restraintStudy({ ...synthetic(3.7, 1.3), baseStiffness: base, target: 3.8, grid: { min: 1, max: 10, points: 3 } });
+    expect(low.requiredFactor as number).toBeCloseTo(root(3.7, 1.3, 3.8), 6); // 0.0833
+    const high = restraintStudy({ ...synthetic(2, 3), baseStiffness: base, target: 4.99, grid: [0.1, 1, 10] });
+    expect(high.requiredFactor as number).toBeCloseTo(root(2, 3, 4.99), 1); // 299
+    expect(Math.abs((high.requiredFactor as number) / root(2, 3, 4.99) - 1)).toBeLessThan(1e-5);
+  });
+
+  it('reports a target that even rigid ends miss', () => {
+    const result = restraintStudy({ ...synthetic(2, 3), baseStiffness: base, target: 5.5 });
+    expect(result.outcome).toBe('unreachable');
+    expect(result.requiredFactor).toBeNull();
+    expect(result.required).toEqual({ bottom: null, top: null });
+  });
+
+  it('reports a target met by rigid ends only', () => {
+    const result = restraintStudy({ ...synthetic(2, 3), baseStiffness: base, target: 5 });
+    expect(result.outcome).toBe('fixed-only');
+    expect(result.required.bottom).toBe(Infinity);
+  });
+
+  it('says when pinned ends already suffice', () => {
+    const result = restraintStudy({ ...synthetic(2, 3), baseStiffness: base, target: 1.5 });
+    expect(result.outcome).toBe('pinned-suffices');
+    expect(result.required).toEqual({ bottom: 0, top: 0 });
+  });
+});
+
+describe('restraintSentence', () => {
+  const wording = {
+    formatStiffness: (k: number) => `${(k / 1e6).toFixed(2)} MN m/rad`,
+    fixityFactor: (_end: string, k: number) => k / (k + 3e6),
+    effectiveLengthFactor: () => 0.78,
+  };
+  it('states the required stiffness, fixity factor, K and multiple', () => {
+    const result = restraintStudy({ ...synthetic(2, 3), baseStiffness: base, target: 3.8 });
+    expect(restraintSentence(result, wording)).toBe(
+      'The target β = 3.80 needs a mean rotational stiffness of at least 3.00 MN m/rad at the bottom (fixity factor 0.50) and 1.50 MN m/rad at the top (fixity factor 0.33), giving K = 0.78; that is 1.5 times the stiffness assumed.',
+    );
+  });
+  it('has a sentence for each other outcome', () => {
+    const say = (t: number): string => restraintSentence(restraintStudy({ ...synthetic(2, 3), baseStiffness: base, target: t }), wording);
+    expect(say(1.5)).toMatch(/already met with pinned ends \(β = 2\.00\)/);
+    expect(say(5.5)).toMatch(/cannot be reached.*β = 5\.00/);
+    expect(say(5)).toMatch(/only with practically rigid ends/);
+  });
+});

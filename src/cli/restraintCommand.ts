@@ -21,12 +21,24 @@ export function runRestraint(file: string, opts: RestraintOptions): void {
   }
   const ends = r.study.ends;
   const rows: string[][] = [[...ends.map((e) => `${e} mean k`), 'FORM β', 'pf', '']];
+  // the root solve adds its iterates to the curve: show the grid once, plus the point nearest the root
+  const required = r.study.requiredFactor;
+  const hasRoot = required !== null && Number.isFinite(required) && required > 0;
+  const nearest = hasRoot
+    ? r.study.curve.reduce((best, p) => (Math.abs(Math.log(p.factor / (required as number))) < Math.abs(Math.log(best.factor / (required as number))) ? p : best))
+    : null;
+  const seen = new Set<string>();
   for (const p of r.study.curve) {
+    const key = p.ideal ?? p.factor.toPrecision(4);
+    if (seen.has(key)) continue;
+    const isRequired = p === nearest;
+    if (!p.ideal && !isRequired && hasRoot && Math.abs(Math.log(p.factor / (required as number))) < 0.05) continue;
+    seen.add(key);
     rows.push([
       ...ends.map((e) => (p.ideal === 'pinned' ? 'pinned' : p.ideal === 'fixed' ? 'fixed' : formatQuantity(p.stiffness[e], 'rotationalStiffness', system))),
       Number.isFinite(p.beta) ? p.beta.toFixed(2) : String(p.beta),
       p.pf.toExponential(2),
-      p.beta >= r.study.target ? '≥ target' : '',
+      isRequired ? '← least stiffness for the target' : p.beta >= r.study.target ? '≥ target' : '',
     ]);
   }
   const out = [

@@ -8,7 +8,7 @@ import { formatNumber, formatQuantity, type UnitSystem } from './displayUnits.js
 import { CHART_FONT, PALETTE } from './chartStyle.js';
 import { escapeXml } from './escapeXml.js';
 
-const W = 440;
+const W = 470;
 const H = 480;
 const CX = 200; // column centre line
 const TOP = 110;
@@ -17,7 +17,7 @@ const INK = PALETTE.ink;
 
 function text(x: number, y: number, s: string, opts: { anchor?: string; size?: number; color?: string; weight?: string; rotate?: number } = {}): string {
   const rot = opts.rotate ? ` transform="rotate(${opts.rotate} ${x} ${y})"` : '';
-  return `<text x="${x}" y="${y}" text-anchor="${opts.anchor ?? 'start'}" font-size="${opts.size ?? 12}" fill="${opts.color ?? INK}"${opts.weight ? ` font-weight="${opts.weight}"` : ''}${rot}>${escapeXml(s)}</text>`;
+  return `<text x="${x}" y="${y}" text-anchor="${opts.anchor ?? 'start'}" font-size="${opts.size ?? 13}" fill="${opts.color ?? INK}"${opts.weight ? ` font-weight="${opts.weight}"` : ''}${rot}>${escapeXml(s)}</text>`;
 }
 
 /** A ground line with short diagonal hatching on the side away from the column. */
@@ -104,16 +104,16 @@ function zigzag(x1: number, x2: number, y: number): string {
 function lateralRestraint(column: ColumnDescription, system: UnitSystem): string {
   const wallX = CX + 110;
   if (column.frame === 'braced') {
-    return `<path d="M${CX + 6},${TOP} H${wallX}" stroke="${INK}" stroke-width="1.5"/><circle cx="${CX + 40}" cy="${TOP}" r="3" fill="${INK}"/>${wall(wallX, TOP - 18, TOP + 18)}${text(wallX - 52, TOP + 32, 'braced: top held', { anchor: 'middle', size: 11, color: PALETTE.muted })}${text(wallX - 52, TOP + 46, 'laterally', { anchor: 'middle', size: 11, color: PALETTE.muted })}`;
+    return `<path d="M${CX + 6},${TOP} H${wallX}" stroke="${INK}" stroke-width="1.5"/><circle cx="${CX + 40}" cy="${TOP}" r="3" fill="${INK}"/>${wall(wallX, TOP - 18, TOP + 18)}${text(wallX - 52, TOP + 32, 'braced: top held', { anchor: 'middle', size: 12, color: PALETTE.muted })}${text(wallX - 52, TOP + 46, 'laterally', { anchor: 'middle', size: 12, color: PALETTE.muted })}`;
   }
   const k = column.lateralStiffness ?? 0;
-  if (k <= 0) return text(CX + 20, TOP + 36, 'sway: top free to move sideways', { size: 11, color: PALETTE.muted });
-  return `${zigzag(CX + 6, wallX, TOP)}${wall(wallX, TOP - 18, TOP + 18)}${text(wallX - 52, TOP + 32, `kT = ${formatQuantity(k, 'translationalStiffness', system)}`, { anchor: 'middle', size: 11 })}`;
+  if (k <= 0) return text(CX + 20, TOP + 36, 'sway: top free to move sideways', { size: 12, color: PALETTE.muted });
+  return `${zigzag(CX + 6, wallX, TOP)}${wall(wallX, TOP - 18, TOP + 18)}${text(wallX - 52, TOP + 32, `kT = ${formatQuantity(k, 'translationalStiffness', system)}`, { anchor: 'middle', size: 12 })}`;
 }
 
 function loadArrow(demand: number, system: UnitSystem, topType: EndDescription['type']): string {
   const tip = topType === 'fixed' ? TOP - 6 : TOP - 28; // stop at the beam stub
-  return `<path d="M${CX},20 V${tip - 10}" stroke="${PALETTE.load}" stroke-width="3"/><path d="M${CX - 7},${tip - 12} L${CX},${tip} L${CX + 7},${tip - 12} Z" fill="${PALETTE.load}"/>${text(CX + 14, 34, `P = ${formatQuantity(demand, 'force', system)}`, { weight: 'bold', color: PALETTE.load })}${text(CX + 14, 50, 'mean demand, concentric', { size: 11, color: PALETTE.muted })}`;
+  return `<path d="M${CX},20 V${tip - 10}" stroke="${PALETTE.load}" stroke-width="3"/><path d="M${CX - 7},${tip - 12} L${CX},${tip} L${CX + 7},${tip - 12} Z" fill="${PALETTE.load}"/>${text(CX + 14, 34, `P = ${formatQuantity(demand, 'force', system)}`, { weight: 'bold', color: PALETTE.load })}${text(CX + 14, 50, 'mean demand, concentric', { size: 12, color: PALETTE.muted })}`;
 }
 
 function dimension(length: number, system: UnitSystem): string {
@@ -131,7 +131,7 @@ function modeOverlay(mode: ModeShapeData | undefined): string {
 /** The column elevation as a standalone SVG document. */
 export function columnSketchSvg(column: ColumnDescription, demand: number, firstMode: ModeShapeData | undefined, system: UnitSystem): string {
   const section = `A = ${formatQuantity(column.section.area, 'area', system)}, I = ${formatQuantity(column.section.inertia, 'inertia', system)}`;
-  const labelLines = (lines: string[], y: number) => lines.map((l, i) => text(CX + 46, y + i * 15, l, { size: 11 })).join('');
+  const labelLines = (lines: string[], y: number) => lines.map((l, i) => text(CX + 46, y + i * 15, l, { size: 12 })).join('');
   const parts = [
     `<rect width="${W}" height="${H}" fill="white"/>`,
     modeOverlay(firstMode),
@@ -141,12 +141,12 @@ export function columnSketchSvg(column: ColumnDescription, demand: number, first
     lateralRestraint(column, system),
     loadArrow(demand, system, column.ends.top.type),
     dimension(column.length, system),
-    text(22, BOTTOM - 20, 'bottom', { size: 11, color: PALETTE.muted }),
-    text(22, TOP + 20, 'top', { size: 11, color: PALETTE.muted }),
+    text(22, BOTTOM - 20, 'bottom', { size: 12, color: PALETTE.muted }),
+    text(22, TOP + 20, 'top', { size: 12, color: PALETTE.muted }),
     labelLines(endLabel(column.ends.bottom, system), BOTTOM - 56),
     column.frame === 'braced' ? labelLines(endLabel(column.ends.top, system), TOP + 72) : labelLines(endLabel(column.ends.top, system), TOP + 56),
-    text(CX, H - 30, section, { anchor: 'middle', size: 11, color: PALETTE.muted }),
-    text(CX, H - 12, `${column.frame} frame${firstMode ? '; dashed: first buckled mode (not to scale)' : ''}`, { anchor: 'middle', size: 11, color: PALETTE.muted }),
+    text(CX, H - 30, section, { anchor: 'middle', size: 12, color: PALETTE.muted }),
+    text(CX, H - 12, `${column.frame} frame${firstMode ? '; dashed: first buckled mode (not to scale)' : ''}`, { anchor: 'middle', size: 12, color: PALETTE.muted }),
   ];
   return `<svg xmlns="http://www.w3.org/2000/svg" width="${W}" height="${H}" viewBox="0 0 ${W} ${H}" font-family="${CHART_FONT}" role="img" aria-label="Column sketch"><title>Column sketch: ${escapeXml(column.frame)} column, bottom ${escapeXml(column.ends.bottom.type)}, top ${escapeXml(column.ends.top.type)}</title>${parts.join('')}</svg>`;
 }

@@ -279,7 +279,7 @@ function partialFactorsSection(input: ReportInput, system: UnitSystem): Section 
   const rows = input.partialFactors.map((p) => [
     p.variable,
     p.role,
-    `${p.basis}${p.note ? ` (${p.note})` : ''}`,
+    p.note === undefined ? p.basis : p.note.startsWith(p.basis) ? p.note : `${p.basis} (${p.note})`,
     formatQuantity(p.referenceValue, p.kind, system, 4),
     formatQuantity(p.designValue, p.kind, system, 4),
     formatNumber(p.factor, 3),

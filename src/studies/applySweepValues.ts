@@ -29,6 +29,8 @@ function isPlain(x: unknown): x is Plain {
 /** The base scenario, parsed once per runner and copied per case. */
 export interface SweepBase {
   fileName: string;
+  /** The base scenario as read. */
+  scenario: Scenario;
   format: 'yaml' | 'json';
   /** A plain-object view, for checking paths. */
   plain: unknown;
@@ -37,11 +39,11 @@ export interface SweepBase {
 
 /** Validates the base scenario (loadScenario's errors) and keeps it ready for edits. */
 export function parseSweepBase(text: string, fileName: string): SweepBase {
-  loadScenario(text, fileName);
+  const scenario = loadScenario(text, fileName);
   const format = detectFormat(text, fileName);
-  if (format === 'json') return { fileName, format, plain: JSON.parse(text) as unknown, yaml: null };
+  if (format === 'json') return { fileName, scenario, format, plain: JSON.parse(text) as unknown, yaml: null };
   const yaml = parseDocument(text, { uniqueKeys: true });
-  return { fileName, format, plain: yaml.toJS() as unknown, yaml };
+  return { fileName, scenario, format, plain: yaml.toJS() as unknown, yaml };
 }
 
 /** What an edit does besides setting the path: a spread parameter it replaces. */

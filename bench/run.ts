@@ -1,0 +1,34 @@
+/**
+ * `npm run bench`: the speed of the mechanics and of the reliability methods, each against a
+ * floor measured in the same run (ratios, because the machines are shared and noisy).
+ */
+import { readFileSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
+import { dirname, join } from 'node:path';
+import { runMechanicsBench } from './mechanicsBench.js';
+import { runReliabilityBench } from './reliabilityBench.js';
+import { columnRecipe } from '../src/limitState/columnRecipe.js';
+
+const root = join(dirname(fileURLToPath(import.meta.url)), '..', '..');
+
+function recipeFor(file: string) {
+  const path = join(root, 'scenarios', file);
+  return columnRecipe(readFileSync(path, 'utf8'), path);
+}
+
+async function main(): Promise<void> {
+  console.log(`stanchion bench — node ${process.version}, ${new Date().toISOString()}`);
+  console.log('\n## mechanics (critical-load solves per second)');
+  for (const line of await runMechanicsBench()) console.log(line);
+  console.log('\n## reliability (column limit state: scenarios/braced-base-plate.yaml; rare event: scenarios/timber-store-post.yaml)');
+  const lines = await runReliabilityBench({
+    columnRecipe: recipeFor('braced-base-plate.yaml'),
+    rareColumnRecipe: recipeFor('timber-store-post.yaml'),
+  });
+  for (const line of lines) console.log(line);
+}
+
+main().catch((err) => {
+  console.error(err);
+  process.exit(1);
+});

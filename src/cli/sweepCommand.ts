@@ -1,0 +1,462 @@
+/**
+ * `stanchion sweep FILE` runs one scenario over a table of cases (a grid or a Latin hypercube
+ * of varied inputs) and writes sweep.csv and sweep.json; `stanchion merge STATE_DIR...` joins
+ * the journals of shards run apart into the same two files a single run writes.
+ *
+ * FILE is a scenario (then --vary says what to vary) or a sweep file (src/studies/sweepFile.ts:
+ * a top-level `scenario:` key plus `vary:` or `list:`). Each finished case goes to a journal in
+ * the state folder at once, so a run that is stopped, killed or crashes resumes where it was
+ * when the same command is run again. Everything the user gave is checked before anything is
+ * written.
+ */
+import { createHash } from 'node:crypto';
+import { existsSync, readdirSync, readFileSync, rmSync, statSync } from 'node:fs';
+import { basename, join, relative } from 'node:path';
+import { Command, InvalidArgumentError, Option } from 'commander';
+import YAML from 'yaml';
+import { InputError } from '../scenario/inputError.js';
+import type { Method } from '../scenario/types.js';
+import { checkSweepPaths, parseSweepBase, scenarioWithValues, type SweepBase } from '../studies/applySweepValues.js';
+import { columnCaseRecipe, columnCaseRunner, SWEEP_DEFAULT_METHODS, type ColumnCaseArgs } from '../studies/columnCaseRunner.js';
+import { mergeSweep } from '../studies/mergeSweep.js';
+import { runSweep, type RunSweepResult } from '../studies/runSweep.js';
+import { buildCaseTable } from '../studies/sweepDesign.js';
+import { parseSweepFile } from '../studies/sweepFile.js';
+import { sweepFingerprint } from '../studies/sweepFingerprint.js';
+import { journalPath, readJournal, type JournalContent } from '../studies/sweepJournal.js';
+import { sweepJson, writeSweepOutputs } from '../studies/sweepOutput.js';
+import type { SweepTable } from '../studies/sweepTable.js';
+import type { CaseTable, Shard, SweepDefinition, SweepRecord } from '../studies/sweepTypes.js';
+import { parseVaryOption } from '../studies/varyOption.js';
+import { parseMethods, parseNonNegativeInteger, parsePositiveInteger, parseShard } from './optionParsers.js';
+import { readScenarioText } from './readScenarioText.js';
+import { CAUTION } from './textTable.js';
+
+export interface SweepOptions {
+  vary: string[];
+  design?: 'grid' | 'lhs';
+  cases?: number;
+  methods?: Method[];
+  seed?: number;
+  samples?: number;
+  workers: number;
+  shard?: Shard;
+  state?: string;
+  out?: string;
+  force?: boolean;
+  json?: boolean;
+}
+
+export interface MergeOptions {
+  out: string;
+  force?: boolean;
+  json?: boolean;
+}
+
+const CSV_NAME = 'sweep.csv';
+const JSON_NAME = 'sweep.json';
+const METHOD_NAMES: readonly string[] = ['form', 'sorm', 'is', 'mc', 'subset'];
+
+/** Everything a sweep needs, read and checked. */
+interface SweepPlan {
+  /** For messages: FILE, and the scenario when FILE is a sweep file. */
+  file: string;
+  scenarioFile: string;
+  scenarioText: string;
+  def: SweepDefinition;
+  table: CaseTable;
+  methods: readonly Method[];
+  samples?: number;
+  /** Where each varied path was given, for messages. */
+  fieldOf: (path: string) => string;
+}
+
+function isPlain(x: unknown): x is Record<string, unknown> {
+  return typeof x === 'object' && x !== null && !Array.isArray(x);
+}
+
+/** A sweep file has a top-level `scenario:` and `vary:` or `list:`; a scenario has neither. */
+function looksLikeSweepFile(text: string, fileName: string): boolean {
+  let doc: unknown;
+  try {
+    doc = fileName.endsWith('.json') ? JSON.parse(text) : YAML.parse(text);
+  } catch {
+    return false; // let the scenario reader report the syntax error with its line
+  }
+  return isPlain(doc) && 'scenario' in doc && ('vary' in doc || 'list' in doc);
+}
+
+function readScenarioOfSweep(path: string): { text: string; fileName: string } {
+  const shown = relative(process.cwd(), path) || path;
+  if (!/\.(ya?ml|json)$/i.test(path)) throw new InputError('scenario', `expected a .yaml, .yml or .json scenario, got ${shown}`);
+  try {
+    return { text: readFileSync(path, 'utf8'), fileName: shown };
+  } catch (err) {
+    const code = (err as NodeJS.ErrnoException).code;
+    throw new InputError('scenario', `${shown}: ${code === 'ENOENT' ? 'no such file' : 'cannot be read'}`);
+  }
+}
+
+function methodsFromFile(list: string[] | undefined): Method[] | undefined {
+  if (list === undefined) return undefined;
+  for (const m of list) {
+    if (!METHOD_NAMES.includes(m)) throw new InputError('methods', `unknown method '${m}'; expected some of ${METHOD_NAMES.join(', ')}`);
+  }
+  return [...new Set(list)] as Method[];
+}
+
+/** Read FILE (and its scenario), apply the command-line choices, build and check the case table. */
+export function planSweep(file: string, opts: SweepOptions): SweepPlan {
+  const { text, fileName } = readScenarioText(file);
+  const fields = new Map<string, string>();
+  let def: SweepDefinition;
+  let scenario: { text: string; fileName: string };
+  if (looksLikeSweepFile(text, fileName)) {
+    def = parseSweepFile(text, fileName);
+    scenario = readScenarioOfSweep(def.scenario as string);
+    def.vary.forEach((axis, k) => fields.set(axis.path, `vary[${k}] in ${fileName}`));
+    for (const p of Object.keys(def.list?.[0] ?? {})) fields.set(p, `list in ${fileName}`);
+  } else {
+    if (opts.vary.length === 0) {
+      throw new InputError('--vary', 'a scenario FILE needs at least one --vary PATH=FROM:TO:STEPS (or give a sweep file)');
+    }
+    scenario = { text, fileName };
+    def = { design: 'grid', seed: NaN, vary: [] };
+  }
+  const base = parseSweepBase(scenario.text, scenario.fileName);
+  if (Number.isNaN(def.seed)) def.seed = opts.seed ?? base.scenario.analysis.seed ?? 1;
+  else if (opts.seed !== undefined) def.seed = opts.seed;
+  for (const text of opts.vary) {
+    const axis = parseVaryOption(text);
+    def.vary.push(axis);
+    fields.set(axis.path, '--vary');
+  }
+  if (opts.design !== undefined) def.design = opts.design;
+  if (opts.cases !== undefined) def.cases = opts.cases;
+  if (def.design === 'lhs' && def.cases === undefined) throw new InputError('--cases', 'a Latin hypercube (--design lhs) needs --cases N');
+  if (def.design === 'list' && opts.vary.length > 0) throw new InputError('--vary', "a sweep file with design 'list' takes no --vary");
+  const table = buildCaseTable(def);
+  const fieldOf = (path: string): string => fields.get(path) ?? path;
+  const plan: SweepPlan = {
+    file: fileName,
+    scenarioFile: scenario.fileName,
+    scenarioText: scenario.text,
+    def,
+    table,
+    methods: opts.methods ?? methodsFromFile(def.methods) ?? SWEEP_DEFAULT_METHODS,
+    samples: opts.samples,
+    fieldOf,
+  };
+  checkCases(base, plan);
+  return plan;
+}
+
+/** Paths against the scenario; the first and last case in full (the corners of a grid). */
+function checkCases(base: SweepBase, plan: SweepPlan): void {
+  checkSweepPaths(base, plan.table.varied, plan.fieldOf);
+  const cases = plan.table.cases;
+  for (const c of cases.length > 1 ? [cases[0], cases[cases.length - 1]] : cases) {
+    try {
+      scenarioWithValues(base, c.values, plan.fieldOf);
+    } catch (err) {
+      if (!(err instanceof InputError)) throw err;
+      const set = Object.entries(c.values).map(([p, v]) => `${p} = ${v}`).join(', ');
+      throw new InputError(err.field, `${err.message} (sweep case ${c.index}: ${set})`, err.line);
+    }
+  }
+}
+
+/** The fingerprint's extra identity: whatever changes a case's numbers besides the case table. */
+function sweepIdentity(plan: SweepPlan): unknown {
+  const scenario = createHash('sha256').update(plan.scenarioText, 'utf8').digest('hex');
+  return { runner: 'column/1', methods: plan.methods, samples: plan.samples ?? null, scenario };
+}
+
+function defaultOut(file: string): string {
+  const name = file === '-' ? 'stdin' : basename(file).replace(/\.(ya?ml|json)$/i, '');
+  return join('sweep-out', name);
+}
+
+/** The fingerprint recorded in an existing sweep.json, if any. */
+function fingerprintOfOutputs(outDir: string): string | null {
+  const file = join(outDir, JSON_NAME);
+  if (!existsSync(file)) return null;
+  try {
+    const doc = JSON.parse(readFileSync(file, 'utf8')) as { sweep?: { fingerprint?: unknown } };
+    return typeof doc.sweep?.fingerprint === 'string' ? doc.sweep.fingerprint : 'unknown';
+  } catch {
+    return 'unknown';
+  }
+}
+
+/** Refuse to mix or overwrite another sweep's results unless --force. */
+function guardOutputs(outDir: string, fingerprint: string, force: boolean | undefined): void {
+  const found = fingerprintOfOutputs(outDir);
+  if (found !== null && found !== fingerprint && !force) {
+    throw new InputError('--out', `${join(outDir, JSON_NAME)} holds the results of a different sweep; choose another --out, or --force to replace them`);
+  }
+}
+
+/** True when the state folder holds this shard's journal of another sweep (which --force discards). */
+function staleJournal(stateDir: string, shard: Shard, fingerprint: string, force: boolean | undefined): boolean {
+  const file = journalPath(stateDir, shard);
+  if (!existsSync(file)) return false;
+  let found: string;
+  try {
+    found = readJournal(file).header.fingerprint;
+  } catch {
+    return false; // damaged or empty: SweepJournal.open says what is wrong
+  }
+  if (found === fingerprint) return false;
+  if (!force) {
+    throw new InputError('--state', `${stateDir} holds the journal of a different sweep; choose another --out or --state, or --force to discard it`);
+  }
+  return true;
+}
+
+/** Progress on stderr, for people watching a terminal: every 10 % or every 5 s. */
+function progressReporter(total: number, alreadyDone: number): (finished: number) => void {
+  if (!process.stderr.isTTY) return () => {};
+  const start = Date.now();
+  let lastTime = start;
+  let lastTenth = Math.floor((10 * alreadyDone) / Math.max(1, total));
+  return (finished) => {
+    const now = Date.now();
+    const tenth = Math.floor((10 * finished) / total);
+    if (tenth === lastTenth && now - lastTime < 5000 && finished < total) return;
+    lastTenth = tenth;
+    lastTime = now;
+    const ranNow = finished - alreadyDone;
+    const seconds = (now - start) / 1000;
+    const left = ranNow > 0 ? ((total - finished) * seconds) / ranNow : NaN;
+    const eta = Number.isFinite(left) && finished < total ? `, about ${Math.ceil(left)} s left` : '';
+    process.stderr.write(`sweep: ${finished}/${total} cases (${Math.floor((100 * finished) / total)} %), ${seconds.toFixed(0)} s${eta}\n`);
+  };
+}
+
+function resultsJson(table: SweepTable): unknown[] {
+  return (JSON.parse(sweepJson(table)) as { sweep: { cases: unknown[] } }).sweep.cases;
+}
+
+function describeValues(record: SweepRecord, varied: string[]): string {
+  return varied.map((p) => `${p} = ${record.values[p]}`).join(', ');
+}
+
+/** A journalled result as a number: non-finite numbers were stored as text. */
+function resultNumber(v: unknown): number {
+  if (typeof v === 'number') return v;
+  return v === 'Infinity' ? Infinity : v === '-Infinity' ? -Infinity : NaN;
+}
+
+/** The case with the lowest β of the first method that gives one. */
+function weakestCase(table: SweepTable): string | null {
+  const key = table.columns.find((c) => c.startsWith('beta_'));
+  if (!key) return null;
+  let worst: SweepRecord | null = null;
+  for (const row of table.rows) {
+    const beta = resultNumber(row.result[key]);
+    if (!Number.isNaN(beta) && (worst === null || beta < resultNumber(worst.result[key]))) worst = row;
+  }
+  if (!worst) return null;
+  const beta = resultNumber(worst.result[key]);
+  const shown = Number.isFinite(beta) ? beta.toFixed(2) : String(beta);
+  return `lowest ${key.slice(5).toUpperCase()} β = ${shown} in case ${worst.case} (${describeValues(worst, table.varied)})`;
+}
+
+function axesText(plan: SweepPlan): string {
+  const counts = plan.table.varied.map((p) => `${p} (${new Set(plan.table.cases.map((c) => String(c.values[p]))).size} values)`);
+  const kind = plan.def.design === 'grid' ? 'grid over' : plan.def.design === 'lhs' ? 'Latin hypercube over' : 'listed cases of';
+  return `${kind} ${counts.join(' × ')}`;
+}
+
+function humanSummary(plan: SweepPlan, run: RunSweepResult, table: SweepTable, where: { csv: string | null; json: string | null; stateDir: string; out: string }, shard: Shard, seconds: number, workers: number): string {
+  const lines: string[] = [];
+  const from = plan.file === plan.scenarioFile ? plan.file : `${plan.file} on ${plan.scenarioFile}`;
+  lines.push(`stanchion sweep: ${from}`);
+  lines.push(`  ${plan.table.cases.length} cases, ${axesText(plan)}; methods ${plan.methods.join(', ')}; seed ${plan.def.seed}`);
+  const part = shard.count > 1 ? `shard ${shard.index}/${shard.count} (${run.shardCases} cases): ` : '';
+  lines.push(`  ${part}ran ${run.ran}, already finished ${run.skipped}, failed ${run.errors}; ${seconds.toFixed(1)} s with ${workers} worker${workers > 1 ? 's' : ''}`);
+  const weakest = weakestCase(table);
+  if (weakest && shard.count === 1) lines.push(`  ${weakest}`);
+  if (table.hasErrors) lines.push(`  ${table.rows.filter((r) => r.error !== undefined).length} case(s) failed: see the error column`);
+  if (where.csv && where.json) {
+    lines.push(`  results  ${where.csv}`);
+    lines.push(`           ${where.json}`);
+  }
+  lines.push(`  journal  ${run.journal} (run the same command again to resume)`);
+  if (shard.count > 1) lines.push(`  when every shard has run: stanchion merge ${where.stateDir} --out ${where.out}`);
+  lines.push('');
+  lines.push(CAUTION);
+  return `${lines.join('\n')}\n`;
+}
+
+export async function runSweepCommand(file: string, opts: SweepOptions): Promise<void> {
+  const plan = planSweep(file, opts);
+  const shard = opts.shard ?? { index: 0, count: 1 };
+  const out = opts.out ?? defaultOut(file);
+  const stateDir = opts.state ?? join(out, '.state');
+  const identity = sweepIdentity(plan);
+  const fingerprint = sweepFingerprint(plan.table, identity);
+  const writesOutputs = shard.count === 1;
+  if (writesOutputs) guardOutputs(out, fingerprint, opts.force);
+  const discard = staleJournal(stateDir, shard, fingerprint, opts.force);
+  // everything is checked: from here on things are written
+  if (discard) rmSync(journalPath(stateDir, shard), { force: true });
+  const args: ColumnCaseArgs = { scenarioText: plan.scenarioText, fileName: plan.scenarioFile, methods: plan.methods };
+  if (plan.samples !== undefined) args.samples = plan.samples;
+  const started = performance.now();
+  let progress: ((finished: number) => void) | null = null;
+  const run = await runSweep({
+    table: plan.table,
+    runCase: opts.workers > 1 ? columnCaseRecipe(args) : columnCaseRunner(args),
+    workers: opts.workers,
+    stateDir,
+    shard,
+    identity,
+    onCaseDone: (_record, finished, total) => {
+      progress ??= progressReporter(total, finished - 1);
+      progress(finished);
+    },
+  });
+  const seconds = (performance.now() - started) / 1000;
+  const table = mergeSweep(run.journal);
+  const csv = writesOutputs ? join(out, CSV_NAME) : null;
+  const json = writesOutputs ? join(out, JSON_NAME) : null;
+  if (csv && json) writeSweepOutputs(table, { csv, json });
+  if (run.errors > 0) process.stderr.write(`stanchion: ${run.errors} case(s) failed; their messages are in the error column\n`);
+  if (opts.json) {
+    const doc = {
+      sweep: {
+        cases: plan.table.cases.length,
+        ran: run.ran,
+        skipped: run.skipped,
+        failed: run.errors,
+        shard,
+        shard_cases: run.shardCases,
+        csv,
+        json,
+        state: stateDir,
+        journal: run.journal,
+        fingerprint,
+        varied: plan.table.varied,
+        design: plan.def.design,
+        seed: plan.def.seed,
+        methods: plan.methods,
+        seconds,
+        results: resultsJson(table),
+      },
+    };
+    process.stdout.write(`${JSON.stringify(doc, null, 2)}\n`);
+    return;
+  }
+  process.stdout.write(humanSummary(plan, run, table, { csv, json, stateDir, out }, shard, seconds, opts.workers));
+}
+
+/** Journal files named by the arguments: a state folder (every journal in it) or a journal file. */
+function journalFiles(paths: string[]): string[] {
+  const files: string[] = [];
+  for (const p of paths) {
+    if (!existsSync(p)) throw new InputError('STATE_DIR', `${p}: no such folder`);
+    if (statSync(p).isDirectory()) {
+      const found = readdirSync(p).filter((n) => /^journal-\d+-of-\d+\.jsonl$/.test(n)).sort();
+      if (found.length === 0) throw new InputError('STATE_DIR', `${p} holds no sweep journal`);
+      files.push(...found.map((n) => join(p, n)));
+    } else {
+      files.push(p);
+    }
+  }
+  return [...new Set(files)];
+}
+
+function readJournalChecked(file: string): JournalContent {
+  try {
+    return readJournal(file);
+  } catch (err) {
+    throw new InputError('STATE_DIR', err instanceof Error ? err.message : String(err));
+  }
+}
+
+export function runMergeCommand(paths: string[], opts: MergeOptions): void {
+  const files = journalFiles(paths);
+  const journals = files.map(readJournalChecked);
+  const fingerprint = journals[0].header.fingerprint;
+  const stranger = journals.findIndex((j) => j.header.fingerprint !== fingerprint);
+  if (stranger >= 0) throw new InputError('STATE_DIR', `${files[stranger]} belongs to a different sweep than ${files[0]}`);
+  guardOutputs(opts.out, fingerprint, opts.force);
+  const table = mergeSweep(...files);
+  const csv = join(opts.out, CSV_NAME);
+  const json = join(opts.out, JSON_NAME);
+  writeSweepOutputs(table, { csv, json });
+  if (table.missing.length > 0) {
+    process.stderr.write(`stanchion: warning: ${table.missing.length} of ${journals[0].header.cases} cases have no result yet (a shard not run or not finished); sweep.json lists them under "missing"\n`);
+  }
+  if (opts.json) {
+    const doc = { merge: { journals: files, cases: journals[0].header.cases, finished: table.rows.length, missing: table.missing, csv, json, fingerprint, varied: table.varied, results: resultsJson(table) } };
+    process.stdout.write(`${JSON.stringify(doc, null, 2)}\n`);
+    return;
+  }
+  const lines = [
+    `stanchion merge: ${files.length} journal${files.length > 1 ? 's' : ''}, ${table.rows.length} of ${journals[0].header.cases} cases finished`,
+    `  results  ${csv}`,
+    `           ${json}`,
+    '',
+    CAUTION,
+  ];
+  process.stdout.write(`${lines.join('\n')}\n`);
+}
+
+function collect(value: string, previous: string[]): string[] {
+  return [...previous, value];
+}
+
+function parseDesign(value: string): 'grid' | 'lhs' {
+  if (value !== 'grid' && value !== 'lhs') throw new InvalidArgumentError("expected 'grid' or 'lhs'.");
+  return value;
+}
+
+export function registerSweep(program: Command, _unitsOption: () => Option): void {
+  program
+    .command('sweep')
+    .description('run a scenario over a grid or Latin hypercube of inputs; results to CSV and JSON (resumable)')
+    .argument('<FILE>', 'a scenario (with --vary) or a sweep file (scenario: + vary: or list:)')
+    .option('--vary <PATH=FROM:TO:STEPS>', 'vary one input (repeatable); also log:FROM:TO:STEPS, FROM:TO (lhs) or A,B,C', collect, [])
+    .addOption(new Option('--design <design>', 'grid (every combination) or lhs (Latin hypercube)').argParser(parseDesign))
+    .addOption(new Option('--cases <n>', 'number of cases of a Latin hypercube').argParser(parsePositiveInteger))
+    .addOption(new Option('--methods <list>', 'comma-separated: form, sorm, is, mc, subset (default form)').argParser(parseMethods))
+    .addOption(new Option('--seed <n>', 'sweep seed; each case derives its own (default: the file\'s, else 1)').argParser(parseNonNegativeInteger))
+    .addOption(new Option('--samples <n>', 'Monte Carlo samples per case (default: the scenario\'s mc_samples, else 100000)').argParser(parsePositiveInteger))
+    .addOption(new Option('--workers <n>', 'worker threads').argParser(parsePositiveInteger).default(1))
+    .addOption(new Option('--shard <I/N>', 'run only the cases with index % N == I; join shards with `stanchion merge`').argParser(parseShard))
+    .option('--state <dir>', 'journal folder for resuming (default OUT/.state)')
+    .option('--out <dir>', 'output folder (default sweep-out/<FILE name>)')
+    .option('--force', 'discard the journal or results of a different sweep found in the same folders')
+    .option('--json', 'print one JSON document on stdout')
+    .addHelpText(
+      'after',
+      [
+        '',
+        'Examples:',
+        '  stanchion sweep scenarios/braced-base-plate.yaml --vary "column.ends.bottom.rotation.mean=log:0.2 MN m/rad:20 MN m/rad:9"',
+        '  stanchion sweep scenarios/braced-base-plate.yaml --vary "column.length=4 m:7 m:7" --vary "loads.dead.mean=300 kN:400 kN:5"',
+        '  stanchion sweep scenarios/sweep-base-stiffness.yaml --workers 2',
+        '  stanchion sweep scenarios/sweep-base-stiffness.yaml --shard 0/2 --state st   (and 1/2 elsewhere, then: stanchion merge st --out res)',
+        '',
+        'PATH is a scenario path (column.length, loads.dead) or a parameter of a random variable',
+        '(column.ends.bottom.rotation.mean, loads.imposed.cov). Run the same command again to resume.',
+        '',
+        CAUTION,
+        '',
+      ].join('\n'),
+    )
+    .action((file: string, opts: SweepOptions) => runSweepCommand(file, opts));
+
+  program
+    .command('merge')
+    .description('join the journals of sweep shards into the sweep.csv and sweep.json a single run writes')
+    .argument('<STATE_DIR...>', 'state folders (or journal files) of the shards')
+    .requiredOption('--out <dir>', 'output folder')
+    .option('--force', 'replace results of a different sweep in --out')
+    .option('--json', 'print one JSON document on stdout')
+    .addHelpText('after', `\nExample:\n  stanchion merge shard0/.state shard1/.state --out sweep-out/all\n\n${CAUTION}\n`)
+    .action((paths: string[], opts: MergeOptions) => runMergeCommand(paths, opts));
+}

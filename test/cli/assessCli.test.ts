@@ -1,0 +1,72 @@
+import { describe, expect, it } from 'vitest';
+import { existsSync, mkdtempSync, readFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { runCli } from './runCli.js';
+
+// Contract checks of CONTRACT.md §1 and §4 (common practice for a CLI: one JSON document on stdout).
+describe('stanchion assess (end to end)', () => {
+  it('prints the contract JSON; importance sums to 1; tornado sorted by swing', () => {
+    const r = runCli(['assess', 'scenarios/braced-base-plate.yaml', '--json', '--methods', 'form,sorm,mc', '--samples', '50000', '--seed', '3']);
+    expect(r.status, r.stderr).toBe(0);
+    const doc = JSON.parse(r.stdout);
+    expect(Object.keys(doc.reliability)).toEqual(expect.arrayContaining(['form', 'sorm', 'mc']));
+    expect(doc.reliability.is).toBeUndefined(); // only the methods that ran appear
+    const f = doc.reliability.form;
+    expect(f.converged).toBe(true);
+    const sum = Object.values(f.importance as Record<string, number>).reduce((a, b) => a + b, 0);
+    expect(sum).toBeCloseTo(1, 10);
+    expect(f.design_point).toHaveProperty('loads.dead');
+    expect(f.design_point['column.material.E']).toBeGreaterThan(1e9); // physical units: Pa
+    const mc = doc.reliability.mc;
+    expect(mc.samples).toBe(50000);
+    expect(mc.ci95[0]).toBeLessThanOrEqual(mc.pf);
+    expect(mc.ci95[1]).toBeGreaterThanOrEqual(mc.pf);
+    const swings = doc.sensitivity.tornado.map((t: { low: number; high: number }) => Math.abs(t.high - t.low));
+    expect(swings).toEqual([...swings].sort((a: number, b: number) => b - a));
+    expect(doc.sensitivity.tornado).toHaveLength(Object.keys(f.importance).length);
+    expect(doc.meta.seed).toBe(3);
+    expect(doc.meta.scenario_sha256).toMatch(/^[0-9a-f]{64}$/);
+    expect(doc.restraint.required.bottom).toBeGreaterThan(0);
+  });
+
+  it('the same seed gives the same numbers with 1 and 2 workers', () => {
+    const args = ['assess', 'scenarios/sway-canopy-post.yaml', '--json', '--methods', 'mc', '--samples', '40000', '--seed', '9'];
+    const one = JSON.parse(runCli([...args, '--workers', '1']).stdout);
+    const two = JSON.parse(runCli([...args, '--workers', '2']).stdout);
+    expect(two.reliability.mc).toEqual({ ...one.reliability.mc, workers: 2 });
+  });
+
+  it('--out writes the report and refuses an existing folder without --force', () => {
+    const dir = join(mkdtempSync(join(tmpdir(), 'stanchion-')), 'report');
+    const r = runCli(['assess', 'scenarios/sway-canopy-post.yaml', '--methods', 'form,sorm', '--out', dir]);
+    expect(r.status, r.stderr).toBe(0);
+    for (const f of ['report.html', 'result.json', 'summary.md']) expect(existsSync(join(dir, f)), f).toBe(true);
+    const result = JSON.parse(readFileSync(join(dir, 'result.json'), 'utf8'));
+    expect(result.reliability.form.beta).toBeGreaterThan(0);
+    const again = runCli(['assess', 'scenarios/sway-canopy-post.yaml', '--methods', 'form', '--out', dir]);
+    expect(again.status).toBe(2);
+    expect(again.stderr).toMatch(/--out/);
+  });
+});
+
+describe('stanchion restraint (end to end)', () => {
+  it('the least stiffness fed back into the scenario gives β = target ± 0.02', () => {
+    // common practice: the study's root, substituted back, must reproduce the target it was solved for
+    const r = runCli(['restraint', 'scenarios/sway-canopy-post.yaml', '--json']);
+    expect(r.status, r.stderr).toBe(0);
+    const res = JSON.parse(r.stdout).restraint;
+    expect(res.ends).toEqual(['bottom']);
+    const k = res.required.bottom as number;
+    expect(k).toBeGreaterThan(0);
+    const stiffs = res.curve.map((p: { bottom: number | null }) => p.bottom ?? Infinity);
+    expect(stiffs).toEqual([...stiffs].sort((a: number, b: number) => a - b));
+    const text = readFileSync('scenarios/sway-canopy-post.yaml', 'utf8').replace(
+      /bottom: \{rotation: \{dist: lognormal, mean: [^,]+, cov: 0.4\}\}/,
+      `bottom: {rotation: {dist: lognormal, mean: ${k} N m/rad, cov: 0.4}}`,
+    );
+    const a = runCli(['assess', '-', '--json', '--methods', 'form'], text);
+    expect(a.status, a.stderr).toBe(0);
+    expect(Math.abs(JSON.parse(a.stdout).reliability.form.beta - res.target_beta)).toBeLessThan(0.02);
+  });
+});

@@ -13,14 +13,21 @@ import { registerNew } from './newCommand.js';
 import { registerAssess } from './assessCommand.js';
 import { CAUTION } from './textTable.js';
 
+// `stanchion ... | head` closes the pipe early: that is the reader's choice, not a failure.
+for (const stream of [process.stdout, process.stderr]) {
+  stream.on('error', (err: NodeJS.ErrnoException) => {
+    if (err.code === 'EPIPE') process.exit(0);
+    throw err;
+  });
+}
+
 const program = new Command();
 
 program
   .name('stanchion')
   .description(
-    'Reliability of an existing column whose end connections are neither pinned nor fixed:\n' +
-      'failure probability, reliability index, what drives it, and the end restraint the\n' +
-      'verdict relies on.',
+    'Reliability of an existing column whose end connections are neither pinned nor fixed: ' +
+      'failure probability, reliability index, what drives it, and the end restraint the verdict relies on.',
   )
   .version(toolVersion(), '-V, --version')
   .showHelpAfterError('(run with --help for usage)')
@@ -43,6 +50,8 @@ program
   )
   .action((file: string, opts: { json?: boolean; units?: 'si' | 'us' }) => runCheck(file, opts));
 
+registerAssess(program, unitsOption);
+
 program
   .command('restraint')
   .description('how much end restraint the target reliability needs (FORM β against connection stiffness)')
@@ -56,7 +65,6 @@ program
   )
   .action((file: string, opts: { json?: boolean; end?: 'bottom' | 'top' | 'both'; units?: 'si' | 'us' }) => runRestraint(file, opts));
 
-registerAssess(program, unitsOption);
 registerSweep(program, unitsOption);
 registerNew(program);
 

@@ -16,6 +16,7 @@ import { Command, InvalidArgumentError, Option } from 'commander';
 import YAML from 'yaml';
 import { InputError } from '../scenario/inputError.js';
 import type { Method } from '../scenario/types.js';
+import { buildColumnModel } from '../limitState/columnModel.js';
 import { checkSweepPaths, parseSweepBase, scenarioWithValues, type SweepBase } from '../studies/applySweepValues.js';
 import { columnCaseRecipe, columnCaseRunner, SWEEP_DEFAULT_METHODS, type ColumnCaseArgs } from '../studies/columnCaseRunner.js';
 import { mergeSweep } from '../studies/mergeSweep.js';
@@ -33,7 +34,7 @@ import { readScenarioText } from './readScenarioText.js';
 import { CAUTION } from './textTable.js';
 
 export interface SweepOptions {
-  vary: string[];
+  vary?: string[];
   design?: 'grid' | 'lhs';
   cases?: number;
   methods?: Method[];
@@ -62,6 +63,8 @@ interface SweepPlan {
   /** For messages: FILE, and the scenario when FILE is a sweep file. */
   file: string;
   scenarioFile: string;
+  /** FILE was a sweep file naming the scenario (not the scenario itself). */
+  fromSweepFile: boolean;
   scenarioText: string;
   def: SweepDefinition;
   table: CaseTable;
@@ -87,7 +90,8 @@ function looksLikeSweepFile(text: string, fileName: string): boolean {
 }
 
 function readScenarioOfSweep(path: string): { text: string; fileName: string } {
-  const shown = relative(process.cwd(), path) || path;
+  const near = relative(process.cwd(), path);
+  const shown = near === '' || near.startsWith('..') ? path : near;
   if (!/\.(ya?ml|json)$/i.test(path)) throw new InputError('scenario', `expected a .yaml, .yml or .json scenario, got ${shown}`);
   try {
     return { text: readFileSync(path, 'utf8'), fileName: shown };
@@ -108,16 +112,18 @@ function methodsFromFile(list: string[] | undefined): Method[] | undefined {
 /** Read FILE (and its scenario), apply the command-line choices, build and check the case table. */
 export function planSweep(file: string, opts: SweepOptions): SweepPlan {
   const { text, fileName } = readScenarioText(file);
+  const varyTexts = opts.vary ?? [];
   const fields = new Map<string, string>();
   let def: SweepDefinition;
   let scenario: { text: string; fileName: string };
-  if (looksLikeSweepFile(text, fileName)) {
+  const fromSweepFile = looksLikeSweepFile(text, fileName);
+  if (fromSweepFile) {
     def = parseSweepFile(text, fileName);
     scenario = readScenarioOfSweep(def.scenario as string);
     def.vary.forEach((axis, k) => fields.set(axis.path, `vary[${k}] in ${fileName}`));
     for (const p of Object.keys(def.list?.[0] ?? {})) fields.set(p, `list in ${fileName}`);
   } else {
-    if (opts.vary.length === 0) {
+    if (varyTexts.length === 0) {
       throw new InputError('--vary', 'a scenario FILE needs at least one --vary PATH=FROM:TO:STEPS (or give a sweep file)');
     }
     scenario = { text, fileName };
@@ -126,7 +132,7 @@ export function planSweep(file: string, opts: SweepOptions): SweepPlan {
   const base = parseSweepBase(scenario.text, scenario.fileName);
   if (Number.isNaN(def.seed)) def.seed = opts.seed ?? base.scenario.analysis.seed ?? 1;
   else if (opts.seed !== undefined) def.seed = opts.seed;
-  for (const text of opts.vary) {
+  for (const text of varyTexts) {
     const axis = parseVaryOption(text);
     def.vary.push(axis);
     fields.set(axis.path, '--vary');
@@ -134,12 +140,13 @@ export function planSweep(file: string, opts: SweepOptions): SweepPlan {
   if (opts.design !== undefined) def.design = opts.design;
   if (opts.cases !== undefined) def.cases = opts.cases;
   if (def.design === 'lhs' && def.cases === undefined) throw new InputError('--cases', 'a Latin hypercube (--design lhs) needs --cases N');
-  if (def.design === 'list' && opts.vary.length > 0) throw new InputError('--vary', "a sweep file with design 'list' takes no --vary");
+  if (def.design === 'list' && varyTexts.length > 0) throw new InputError('--vary', "a sweep file with design 'list' takes no --vary");
   const table = buildCaseTable(def);
   const fieldOf = (path: string): string => fields.get(path) ?? path;
   const plan: SweepPlan = {
-    file: fileName,
+    file: fileName === '-' ? 'standard input' : fileName,
     scenarioFile: scenario.fileName,
+    fromSweepFile,
     scenarioText: scenario.text,
     def,
     table,
@@ -156,12 +163,14 @@ function checkCases(base: SweepBase, plan: SweepPlan): void {
   checkSweepPaths(base, plan.table.varied, plan.fieldOf);
   const cases = plan.table.cases;
   for (const c of cases.length > 1 ? [cases[0], cases[cases.length - 1]] : cases) {
+    const set = (): string => Object.entries(c.values).map(([p, v]) => `${p} = ${v}`).join(', ');
     try {
-      scenarioWithValues(base, c.values, plan.fieldOf);
+      buildColumnModel(scenarioWithValues(base, c.values, plan.fieldOf));
     } catch (err) {
-      if (!(err instanceof InputError)) throw err;
-      const set = Object.entries(c.values).map(([p, v]) => `${p} = ${v}`).join(', ');
-      throw new InputError(err.field, `${err.message} (sweep case ${c.index}: ${set})`, err.line);
+      if (err instanceof InputError) throw new InputError(err.field, `${err.message} (sweep case ${c.index}: ${set()})`, err.line);
+      // a distribution the values make impossible (e.g. a negative cov)
+      if (err instanceof Error && err.name === 'DistributionError') throw new InputError(`sweep case ${c.index}`, `${err.message} (${set()})`);
+      throw err;
     }
   }
 }
@@ -271,10 +280,10 @@ function axesText(plan: SweepPlan): string {
 
 function humanSummary(plan: SweepPlan, run: RunSweepResult, table: SweepTable, where: { csv: string | null; json: string | null; stateDir: string; out: string }, shard: Shard, seconds: number, workers: number): string {
   const lines: string[] = [];
-  const from = plan.file === plan.scenarioFile ? plan.file : `${plan.file} on ${plan.scenarioFile}`;
+  const from = plan.fromSweepFile ? `${plan.file} on ${plan.scenarioFile}` : plan.file;
   lines.push(`stanchion sweep: ${from}`);
   lines.push(`  ${plan.table.cases.length} cases, ${axesText(plan)}; methods ${plan.methods.join(', ')}; seed ${plan.def.seed}`);
-  const part = shard.count > 1 ? `shard ${shard.index}/${shard.count} (${run.shardCases} cases): ` : '';
+  const part = shard.count > 1 ? `shard ${shard.index}/${shard.count} (${run.shardCases} case${run.shardCases === 1 ? '' : 's'}): ` : '';
   lines.push(`  ${part}ran ${run.ran}, already finished ${run.skipped}, failed ${run.errors}; ${seconds.toFixed(1)} s with ${workers} worker${workers > 1 ? 's' : ''}`);
   const weakest = weakestCase(table);
   if (weakest && shard.count === 1) lines.push(`  ${weakest}`);
@@ -405,8 +414,8 @@ export function runMergeCommand(paths: string[], opts: MergeOptions): void {
   process.stdout.write(`${lines.join('\n')}\n`);
 }
 
-function collect(value: string, previous: string[]): string[] {
-  return [...previous, value];
+function collect(value: string, previous: string[] | undefined): string[] {
+  return [...(previous ?? []), value];
 }
 
 function parseDesign(value: string): 'grid' | 'lhs' {
@@ -419,7 +428,7 @@ export function registerSweep(program: Command, _unitsOption: () => Option): voi
     .command('sweep')
     .description('run a scenario over a grid or Latin hypercube of inputs; results to CSV and JSON (resumable)')
     .argument('<FILE>', 'a scenario (with --vary) or a sweep file (scenario: + vary: or list:)')
-    .option('--vary <PATH=FROM:TO:STEPS>', 'vary one input (repeatable); also log:FROM:TO:STEPS, FROM:TO (lhs) or A,B,C', collect, [])
+    .option('--vary <PATH=FROM:TO:STEPS>', 'vary one input (repeatable); also log:FROM:TO:STEPS, FROM:TO (lhs) or A,B,C', collect)
     .addOption(new Option('--design <design>', 'grid (every combination) or lhs (Latin hypercube)').argParser(parseDesign))
     .addOption(new Option('--cases <n>', 'number of cases of a Latin hypercube').argParser(parsePositiveInteger))
     .addOption(new Option('--methods <list>', 'comma-separated: form, sorm, is, mc, subset (default form)').argParser(parseMethods))

@@ -14,6 +14,7 @@ import { monteCarlo } from '../reliability/monteCarlo.js';
 import { sorm } from '../reliability/sorm.js';
 import { subsetSimulation } from '../reliability/subsetSimulation.js';
 import type { FormResult, ReliabilityProblem } from '../reliability/types.js';
+import { InputError } from '../scenario/inputError.js';
 import type { Method } from '../scenario/types.js';
 import { parseSweepBase, scenarioWithValues } from './applySweepValues.js';
 import type { CaseRunner, CaseRunnerRecipe } from './caseRunner.js';
@@ -110,7 +111,15 @@ async function runCase(args: ColumnCaseArgs, base: ReturnType<typeof parseSweepB
 /** The runner factory named in the worker recipe: (args) => CaseRunner. */
 export function columnCaseRunner(args: ColumnCaseArgs): CaseRunner {
   const base = parseSweepBase(args.scenarioText, args.fileName);
-  return (c: SweepCase) => runCase(args, base, c);
+  return async (c: SweepCase) => {
+    try {
+      return await runCase(args, base, c);
+    } catch (err) {
+      // the journal keeps only the message: put the field in it
+      if (err instanceof InputError) throw new InputError(err.field, err.describe(), err.line);
+      throw err;
+    }
+  };
 }
 
 /** How worker threads rebuild this runner (the .ts source maps to its dist twin). */

@@ -155,6 +155,7 @@ describe('loadScenario never fails with anything but InputError', () => {
       }),
       { numRuns: 10_000, seed: 20261201 },
     );
+    process.stderr.write(`fuzz: ${accepted} accepted, ${rejected} rejected\n`);
     // the generator must exercise both outcomes, or the property is vacuous
     expect(accepted).toBeGreaterThan(100);
     expect(rejected).toBeGreaterThan(5000);

@@ -17,7 +17,8 @@ import type { Frame, StrengthModel } from './types.js';
  * braced tabulates φ, sway tabulates φ² (linear in f near the mechanism corner, where φ → 0).
  * Measured worst relative error in Pcr ≈ 5e-9 (braced) and ≈ 1e-7 (sway, near the corner). In sway, where
  * f_A + f_B < SWAY_EXACT_CORNER the relative accuracy of a table degrades as Pcr → 0, so the exact
- * (non-allocating) Brent solve is used there. c comes from the closed-form mode at that φ.
+ * (non-allocating) Brent solve is used there. Braced c is tabulated too (bracedCurvatureTable); sway c
+ * comes from the closed-form mode at that φ.
  * With a lateral spring (T > 0) call the exact solver (criticalLoad / columnCapacity).
  * Nothing here allocates per call; the scratch arrays are module-level.
  */
@@ -25,6 +26,8 @@ export const FAST_TABLE_CELLS = 128;
 export const SWAY_EXACT_CORNER = 1e-3;
 
 const tables: { braced?: FixityTable; sway?: FixityTable } = {};
+/** Braced c over the fixity factors, built on first use (see bracedCurvatureTable). */
+let bracedC: FixityTable | undefined;
 const weights = new Float64Array(WEIGHT_LENGTH);
 const coeffs = new Float64Array(3);
 const extrema = new Float64Array(EXTREMA_LENGTH);
@@ -36,6 +39,27 @@ function buildTable(frame: Frame): FixityTable {
     const phi = criticalPhiFromWeights(frame, w, 1);
     return frame === 'braced' ? phi : phi * phi;
   });
+}
+
+/**
+ * Braced frames only: c tabulated like φ. In the first braced mode φ ∈ [π, 2π], so a crest of
+ * w'' = −φ² ρ sin(φξ + γ) always lies inside the column and max|w''| = φ²ρ; the deflection has one
+ * hump. c = ρ / max|w| is therefore smooth in (f_A, f_B) and interpolates to ~1e-9 (the sway mode's
+ * c switches between end and crest values, has kinks, and keeps the closed form).
+ */
+function bracedCurvatureTable(): FixityTable {
+  if (bracedC) return bracedC;
+  const w = new Float64Array(WEIGHT_LENGTH);
+  const ab = new Float64Array(3);
+  const ex = new Float64Array(EXTREMA_LENGTH);
+  bracedC = buildFixityTable(FAST_TABLE_CELLS, (fA, fB) => {
+    weightsInto(w, ratioFromFixity(fA), ratioFromFixity(fB), 0);
+    const phi = criticalPhiFromWeights('braced', w, 1);
+    modeCoefficientsInto(ab, 'braced', w, phi);
+    modeExtremaInto(ex, ab[0], ab[1], ab[2], phi);
+    return curvatureFactorFromExtrema(ex);
+  });
+  return bracedC;
 }
 
 /** The table of a frame, built on first use. */
@@ -65,6 +89,7 @@ export function fastPhi(frame: Frame, RBottom: number, RTop: number): number {
 /** Curvature factor c of the first mode at a known root φ (T = 0); 0 for a mechanism. No allocation. */
 export function fastCurvatureFactor(frame: Frame, RBottom: number, RTop: number, phi: number): number {
   if (phi === 0) return 0;
+  if (frame === 'braced') return interpolateFixityTable(bracedC ?? bracedCurvatureTable(), fixityOf(RBottom), fixityOf(RTop));
   weightsInto(weights, RBottom, RTop, 0);
   modeCoefficientsInto(coeffs, frame, weights, phi);
   modeExtremaInto(extrema, coeffs[0], coeffs[1], coeffs[2], phi);
@@ -94,6 +119,7 @@ export function makeFastCapacity(frame: Frame, model: StrengthModel): FastCapaci
 export function makeFastCapacityFromRatio(frame: Frame, model: StrengthModel): FastCapacity {
   fastTable(frame);
   if (model === 'first-yield') {
+    if (frame === 'braced') bracedCurvatureTable();
     return (E, fy, A, I, S, L, bow, RA, RB) => {
       const phi = fastPhi(frame, RA, RB);
       if (phi === 0) return 0;

@@ -7,7 +7,7 @@ import { toolVersion } from './version.js';
 import { EXIT_INPUT, EXIT_OK, reportFailure } from './failure.js';
 import { parseEnd, parseUnits } from './optionParsers.js';
 import { runCheck } from './checkCommand.js';
-import { runRestraint } from './restraintCommand.js';
+import { runRestraint, type RestraintOptions } from './restraintCommand.js';
 import { registerSweep } from './sweepCommand.js';
 import { registerNew } from './newCommand.js';
 import { registerAssess } from './assessCommand.js';
@@ -58,12 +58,14 @@ program
   .argument('<FILE>', 'scenario (.yaml, .yml, .json, or - for stdin)')
   .option('--json', 'print one JSON document (SI units) on stdout')
   .addOption(new Option('--end <end>', 'which connection to study: bottom, top or both (default: the ends given as springs)').argParser(parseEnd))
+  .option('--out <DIR>', 'also write the report (HTML, Markdown, JSON, CSV, charts) into DIR')
+  .option('--force', 'replace DIR when it exists')
   .addOption(unitsOption())
   .addHelpText(
     'after',
-    `\nExamples:\n  stanchion restraint scenarios/braced-base-plate.yaml\n  stanchion restraint scenarios/sway-canopy-post.yaml --end bottom --json\n\n${CAUTION}\n`,
+    `\nExamples:\n  stanchion restraint scenarios/braced-base-plate.yaml\n  stanchion restraint scenarios/sway-canopy-post.yaml --end bottom --json\n  stanchion restraint scenarios/braced-base-plate.yaml --out reports/c3-restraint\n\n${CAUTION}\n`,
   )
-  .action((file: string, opts: { json?: boolean; end?: 'bottom' | 'top' | 'both'; units?: 'si' | 'us' }) => runRestraint(file, opts));
+  .action((file: string, opts: RestraintOptions) => runRestraint(file, opts));
 
 registerSweep(program, unitsOption);
 registerNew(program);

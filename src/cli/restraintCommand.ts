@@ -2,19 +2,34 @@ import { loadScenario } from '../scenario/loadScenario.js';
 import { columnRestraint, restraintJson, type EndChoice } from '../studies/columnRestraint.js';
 import { formatQuantity, type UnitSystem } from '../report/displayUnits.js';
 import { readScenarioText } from './readScenarioText.js';
+import { assessColumn } from '../studies/columnAssessment.js';
+import { assessmentJson } from '../studies/assessmentJson.js';
+import { assessmentReportInput } from '../studies/assessmentReport.js';
+import { writeOutputs } from '../report/writeOutputs.js';
+import { toolVersion } from './version.js';
 import { CAUTION, textTable } from './textTable.js';
 
 export interface RestraintOptions {
   json?: boolean;
+  out?: string;
+  force?: boolean;
   end?: EndChoice;
   units?: UnitSystem;
 }
 
-export function runRestraint(file: string, opts: RestraintOptions): void {
+export async function runRestraint(file: string, opts: RestraintOptions): Promise<void> {
   const { text, fileName } = readScenarioText(file);
   const scenario = loadScenario(text, fileName);
   const system = opts.units ?? scenario.displayUnits;
   const r = columnRestraint(scenario, { end: opts.end, units: system });
+  if (opts.out) {
+    // the report around the study: the column, FORM/SORM at the assessed stiffness, sensitivity, the curve
+    const a = await assessColumn(scenario, { text, methods: ['form', 'sorm'], end: opts.end });
+    const meta = { version: toolVersion(), date: new Date().toISOString(), command: ['stanchion', ...process.argv.slice(2)].join(' ') };
+    const json = assessmentJson(a, meta);
+    const written = await writeOutputs(opts.out, assessmentReportInput(a, meta, json), json, { force: opts.force, units: system });
+    process.stderr.write(`stanchion: report written to ${written.dir}/report.html (${written.files.length} files)\n`);
+  }
   if (opts.json) {
     process.stdout.write(JSON.stringify({ restraint: restraintJson(r) }, null, 2) + '\n');
     return;

@@ -26,6 +26,8 @@ import { parseSweepFile } from '../studies/sweepFile.js';
 import { sweepFingerprint } from '../studies/sweepFingerprint.js';
 import { journalPath, readJournal, type JournalContent } from '../studies/sweepJournal.js';
 import { sweepJson, writeSweepOutputs } from '../studies/sweepOutput.js';
+import { writeSweepReport } from '../studies/sweepReport.js';
+import { toolVersion } from './version.js';
 import type { SweepTable } from '../studies/sweepTable.js';
 import type { CaseTable, Shard, SweepDefinition, SweepRecord } from '../studies/sweepTypes.js';
 import { parseVaryOption } from '../studies/varyOption.js';
@@ -46,6 +48,7 @@ export interface SweepOptions {
   out?: string;
   force?: boolean;
   json?: boolean;
+  units?: 'si' | 'us';
 }
 
 export interface MergeOptions {
@@ -332,6 +335,20 @@ export async function runSweepCommand(file: string, opts: SweepOptions): Promise
   const csv = writesOutputs ? join(out, CSV_NAME) : null;
   const json = writesOutputs ? join(out, JSON_NAME) : null;
   if (csv && json) writeSweepOutputs(table, { csv, json });
+  // the readable report of the whole sweep, regenerated from the journal at every complete run
+  let report: string | null = null;
+  if (writesOutputs && table.missing.length === 0 && table.rows.length > 0) {
+    const written = await writeSweepReport({
+      scenarioText: plan.scenarioText,
+      scenarioFile: plan.scenarioFile,
+      table,
+      methods: plan.methods,
+      dir: join(out, 'report'),
+      units: opts.units,
+      meta: { version: toolVersion(), date: new Date().toISOString(), command: ['stanchion', ...process.argv.slice(2)].join(' ') },
+    });
+    report = join(written.dir, 'report.html');
+  }
   if (run.errors > 0) process.stderr.write(`stanchion: ${run.errors} case(s) failed; their messages are in the error column\n`);
   if (opts.json) {
     const doc = {
@@ -344,6 +361,7 @@ export async function runSweepCommand(file: string, opts: SweepOptions): Promise
         shard_cases: run.shardCases,
         csv,
         json,
+        report,
         state: stateDir,
         journal: run.journal,
         fingerprint,
@@ -359,6 +377,7 @@ export async function runSweepCommand(file: string, opts: SweepOptions): Promise
     return;
   }
   process.stdout.write(humanSummary(plan, run, table, { csv, json, stateDir, out }, shard, seconds, opts.workers));
+  if (report) process.stderr.write(`stanchion: sweep report written to ${report}\n`);
 }
 
 /** Journal files named by the arguments: a state folder (every journal in it) or a journal file. */
@@ -423,7 +442,7 @@ function parseDesign(value: string): 'grid' | 'lhs' {
   return value;
 }
 
-export function registerSweep(program: Command, _unitsOption: () => Option): void {
+export function registerSweep(program: Command, unitsOption: () => Option): void {
   program
     .command('sweep')
     .description('run a scenario over a grid or Latin hypercube of inputs; results to CSV and JSON (resumable)')
@@ -440,9 +459,13 @@ export function registerSweep(program: Command, _unitsOption: () => Option): voi
     .option('--out <dir>', 'output folder (default sweep-out/<FILE name>)')
     .option('--force', 'discard the journal or results of a different sweep found in the same folders')
     .option('--json', 'print one JSON document on stdout')
+    .addOption(unitsOption())
     .addHelpText(
       'after',
       [
+        '',
+        'Writes OUT/sweep.csv, OUT/sweep.json and, when every case is done, OUT/report/ (report.html,',
+        'summary.md, result.json, CSV tables and charts of the base scenario and the sweep).',
         '',
         'Examples:',
         '  stanchion sweep scenarios/braced-base-plate.yaml --vary "column.ends.bottom.rotation.mean=log:0.2 MN m/rad:20 MN m/rad:9"',

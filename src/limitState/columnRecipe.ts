@@ -3,7 +3,7 @@
  * so that every thread parses, validates and converts exactly the same numbers.
  */
 import { natafTransform } from '../probability/nataf.js';
-import { compiledTwin } from '../reliability/compiledTwin.js';
+import { compiledTwin } from '../runtime/compiledTwin.js';
 import type { ProblemRecipe, ReliabilityProblem } from '../reliability/types.js';
 import { loadScenario } from '../scenario/loadScenario.js';
 import { buildColumnModel, type ColumnModel } from './columnModel.js';

@@ -7,7 +7,7 @@
 import { Worker } from 'node:worker_threads';
 import type { ProblemRecipe, ReliabilityProblem } from './types.js';
 import { makeChunkKernel, type ChunkJob, type ChunkOutcome, type SamplingSpec } from './chunkKernel.js';
-import { compiledTwin, requireCompiled } from './compiledTwin.js';
+import { compiledTwin, requireCompiled } from '../runtime/compiledTwin.js';
 import { LimitStateError } from './limitStateError.js';
 
 export interface ChunkRunOptions {

@@ -13,4 +13,4 @@ export { subsetSimulation, type SubsetOptions } from './subsetSimulation.js';
 export { verdict, type Verdict, type VerdictInput, type VerdictOptions, type MethodComparison, type MethodName } from './verdict.js';
 export { wilsonInterval } from './wilson.js';
 export { loadRecipe } from './loadRecipe.js';
-export { compiledTwin } from './compiledTwin.js';
+export { compiledTwin } from '../runtime/compiledTwin.js';

@@ -1,6 +1,6 @@
 /** Build a problem from its recipe (what a worker thread does; also handy in the main thread). */
 import type { ProblemRecipe, ReliabilityProblem } from './types.js';
-import { importableUrl } from './compiledTwin.js';
+import { importableUrl } from '../runtime/compiledTwin.js';
 
 export async function loadRecipe(recipe: ProblemRecipe): Promise<ReliabilityProblem> {
   const mod = (await import(importableUrl(recipe.module))) as Record<string, unknown>;

@@ -8,7 +8,7 @@ import { natafTransform } from '../probability/nataf.js';
 import type { DistSpec } from '../probability/distribution.js';
 import type { IsoTransform } from '../probability/nataf.js';
 import type { ProblemRecipe, ReliabilityProblem } from './types.js';
-import { compiledTwin } from './compiledTwin.js';
+import { compiledTwin } from '../runtime/compiledTwin.js';
 
 /** A recipe naming the compiled twin of this module (dist/src/reliability/testProblems.js). */
 export function testProblemRecipe(exportName: string, args: unknown): ProblemRecipe {

@@ -208,7 +208,7 @@ export interface RestraintStudy {
   required: { bottom?: number | null; top?: number | null };
   fixityFactor: { bottom?: number; top?: number }; // R/(R+3) at the required stiffness
   effectiveLengthFactor: number | null; // K at the required stiffness (means)
-  /** The K an engineer would need in a deterministic check to reproduce the required-stiffness capacity. */
+  /** K of the column whose studied springs are known exactly (no scatter) and just reach the target β: the largest K a deterministic check may use. */
   equivalentK: number | null;
   sentence: string; // the justification sentence, ready to quote
 }

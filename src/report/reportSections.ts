@@ -269,7 +269,7 @@ function restraintSection(input: ReportInput, system: UnitSystem, charts: ChartS
     },
     {
       kind: 'paragraph',
-      text: `At the required stiffness K = ${st.effectiveLengthFactor === null ? '—' : formatNumber(st.effectiveLengthFactor, 3)}; a deterministic check reproducing that capacity would use an equivalent K = ${st.equivalentK === null ? '—' : formatNumber(st.equivalentK, 3)}.`,
+      text: `At the required stiffness K = ${st.effectiveLengthFactor === null ? '—' : formatNumber(st.effectiveLengthFactor, 3)}; a deterministic check that takes the connections as known exactly reaches the same target with K = ${st.equivalentK === null ? '—' : formatNumber(st.equivalentK, 3)} (the effective length factor a code check may use at most).`,
     },
     ...chartBlock(charts, 'restraint-curve'),
   ]);

@@ -160,7 +160,7 @@ export function assessmentReportInput(a: Assessment, meta: RunMeta, resultJson: 
       required,
       fixityFactor: pick(r.fixityAtRequired) as { bottom?: number; top?: number },
       effectiveLengthFactor: r.kAtRequired,
-      equivalentK: r.kAtCharacteristic,
+      equivalentK: r.kDeterministic,
       sentence: r.sentence,
     };
   }

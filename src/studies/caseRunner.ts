@@ -4,7 +4,7 @@
  * file URL of a compiled .js module (a .ts path is mapped to its dist twin), whose export
  * `exportName` is `(args) => CaseRunner`; `args` must survive structured cloning.
  */
-import { compiledTwin } from './compiledTwin.js';
+import { compiledModule } from '../runtime/compiledTwin.js';
 import type { CaseResult, ResultValue, SweepCase } from './sweepTypes.js';
 
 export type CaseRunner = (c: SweepCase) => CaseResult | Promise<CaseResult>;
@@ -16,7 +16,7 @@ export interface CaseRunnerRecipe {
 }
 
 export async function loadCaseRunner(recipe: CaseRunnerRecipe): Promise<CaseRunner> {
-  const mod = (await import(compiledTwin(recipe.module).href)) as Record<string, unknown>;
+  const mod = (await import(compiledModule(recipe.module).href)) as Record<string, unknown>;
   const factory = mod[recipe.exportName];
   if (typeof factory !== 'function') throw new Error(`${recipe.module} has no function export '${recipe.exportName}'`);
   const runner: unknown = await (factory as (args: unknown) => unknown)(recipe.args);

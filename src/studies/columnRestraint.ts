@@ -27,6 +27,11 @@ export interface ColumnRestraintResult {
   kAtRequired: number | null;
   /** K with each studied spring at its 5 % fractile when its mean is the required one */
   kAtCharacteristic: number | null;
+  /**
+   * The deterministic K a code check would need: K of the column whose studied springs are known
+   * exactly (no scatter) and just reach the target β; null when even rigid ends fall short.
+   */
+  kDeterministic: number | null;
   sentence: string;
   notes: string[];
 }
@@ -113,8 +118,27 @@ export function columnRestraint(
     }
     kAtCharacteristic = kWith(t);
   }
+  // the same study with the studied springs known exactly: the K a deterministic check may use
+  const fixedBase: Record<string, Scalar> = {};
+  for (const e of ends) fixedBase[e] = { kind: 'fixed', value: baseStiffness[e] };
+  const exact = restraintStudy({
+    betaAtFactor: (fct) => {
+      let t = s;
+      for (const e of ends) t = withEndStiffness(t, e, fixedBase[e], fct);
+      const p = scenarioForm(t);
+      return { beta: p.beta, pf: p.pf };
+    },
+    baseStiffness,
+    target: s.targetBeta,
+  });
+  let kDeterministic: number | null = null;
+  if (exact.requiredFactor !== null) {
+    let t = s;
+    for (const e of ends) t = withEndStiffness(t, e, fixedBase[e], exact.requiredFactor);
+    kDeterministic = kWith(t);
+  }
   const system = opts.units ?? s.displayUnits;
-  const sentence = restraintSentence(study, {
+  const studySentence = restraintSentence(study, {
     formatStiffness: (k) => formatQuantity(k, 'rotationalStiffness', system),
     fixityFactor: (_end, k) => fixityFactor(ratioAt(s, k)),
     effectiveLengthFactor: (stiff) => {
@@ -127,7 +151,11 @@ export function columnRestraint(
     },
     endLabel: (e) => `the ${e} connection`,
   });
-  return { study, base, fixityAtRequired, kAtRequired, kAtCharacteristic, sentence, notes };
+  const sentence =
+    kDeterministic !== null && Number.isFinite(kDeterministic)
+      ? `${studySentence} With the connections known exactly, the target is reached at K = ${kDeterministic.toFixed(2)}: the largest effective length factor a deterministic check may use.`
+      : studySentence;
+  return { study, base, fixityAtRequired, kAtRequired, kAtCharacteristic, kDeterministic, sentence, notes };
 }
 
 const finite = (v: number): number | null => (Number.isFinite(v) ? v : null);
@@ -157,6 +185,7 @@ export function restraintJson(r: ColumnRestraintResult): Record<string, unknown>
     fixity_factor: r.fixityAtRequired,
     effective_length_factor: r.kAtRequired,
     effective_length_factor_characteristic: r.kAtCharacteristic,
+    effective_length_factor_deterministic: r.kDeterministic,
     sentence: r.sentence,
     notes: r.notes,
   };

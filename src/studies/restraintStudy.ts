@@ -9,7 +9,7 @@
  * the first grid interval where β crosses the target (the grid is extended by decades when
  * the crossing lies beyond it) — the answer is not read off the grid.
  */
-import { brentRoot } from './brentRoot.js';
+import { findRootBracketed } from '../probability/rootBracketed.js';
 
 export interface BetaPoint {
   beta: number;
@@ -146,9 +146,9 @@ export function restraintStudy(input: RestraintStudyInput): RestraintStudyResult
     }
     if (hi !== undefined && lo !== undefined) {
       const tolerance = input.tolerance ?? 1e-6;
-      const root = brentRoot((t) => at(Math.exp(t)).beta - target, Math.log(lo), Math.log(hi), { xtol: tolerance });
+      const root = findRootBracketed((t) => at(Math.exp(t)).beta - target, Math.log(lo), Math.log(hi), { xTolerance: tolerance });
       outcome = 'reached';
-      requiredFactor = Math.exp(root.x);
+      requiredFactor = Math.exp(root);
     } else if (fixed.beta >= target) {
       outcome = 'fixed-only';
       requiredFactor = Infinity;

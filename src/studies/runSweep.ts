@@ -6,7 +6,7 @@
  */
 import { Worker } from 'node:worker_threads';
 import { loadCaseRunner, runOneCase, type CaseRunner, type CaseRunnerRecipe } from './caseRunner.js';
-import { compiledTwin } from './compiledTwin.js';
+import { compiledModule } from '../runtime/compiledTwin.js';
 import { sweepFingerprint } from './sweepFingerprint.js';
 import { SweepJournal } from './sweepJournal.js';
 import type { CaseResult, CaseTable, Shard, SweepCase, SweepRecord } from './sweepTypes.js';
@@ -61,7 +61,7 @@ interface WorkerReply {
 function runInWorkers(recipe: CaseRunnerRecipe, todo: SweepCase[], workers: number, finish: Finish): Promise<void> {
   // under vitest this file is .ts: the worker must be the compiled twin
   const ext = import.meta.url.endsWith('.ts') ? '.ts' : '.js';
-  const workerUrl = compiledTwin(new URL(`./sweepWorker${ext}`, import.meta.url).href);
+  const workerUrl = compiledModule(new URL(`./sweepWorker${ext}`, import.meta.url).href);
   const byIndex = new Map(todo.map((c) => [c.index, c]));
   const queue = [...todo];
   const count = Math.min(workers, queue.length);

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { brentRoot } from '../../src/studies/brentRoot.js';
+import { findRootBracketed } from '../../src/probability/rootBracketed.js';
 import { restraintStudy, type BetaPoint } from '../../src/studies/restraintStudy.js';
 import { restraintSentence } from '../../src/studies/restraintSentence.js';
 
@@ -17,14 +17,14 @@ function synthetic(a: number, b: number) {
 const root = (a: number, b: number, t: number): number => (t - a) / (a + b - t);
 const base = { bottom: 2e6, top: 1e6 };
 
-describe('brentRoot', () => {
+describe('the root solve the study uses', () => {
   it('solves cos x = x (Dottie number 0.739085133215161, common practice)', () => {
-    const r = brentRoot((x) => Math.cos(x) - x, 0, 1, { xtol: 1e-14 });
+    const x = findRootBracketed((t) => Math.cos(t) - t, 0, 1, { xTolerance: 1e-14 });
     // common practice: the fixed point of cos, 0.739085133215161
-    expect(r.x).toBeCloseTo(0.739085133215161, 13);
+    expect(x).toBeCloseTo(0.739085133215161, 13);
   });
   it('refuses a bracket without a sign change', () => {
-    expect(() => brentRoot((x) => x * x + 1, -1, 1)).toThrow(/sign change/);
+    expect(() => findRootBracketed((x) => x * x + 1, -1, 1)).toThrow(/sign change/);
   });
 });
 

@@ -43,8 +43,8 @@ export function sweepChart(input: ReportInput, sweep: SweepResults, system: Unit
       spec: { ...chartBase(title, `Red dashed: target β = ${formatBeta(target.beta)} (${target.source}).`), width: 460, height: 260, layer: layers },
     };
   }
-  const x = { field: 'v0', type: 'ordinal', title: axis(0), axis: { format: '~r', labelAngle: 0 } };
-  const y = { field: 'v1', type: 'ordinal', title: axisLines(1), sort: 'descending', axis: { format: '~r' } };
+  const x = { field: 'v0', type: 'ordinal', title: axis(0), axis: { format: '.3~r', formatType: 'number', labelAngle: 0 } };
+  const y = { field: 'v1', type: 'ordinal', title: axisLines(1), sort: 'descending', axis: { format: '.3~r', formatType: 'number' } };
   return {
     name: 'sweep',
     title,

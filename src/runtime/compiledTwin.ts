@@ -15,6 +15,14 @@ export function compiledTwin(moduleUrl: string, fileName: string): URL {
   return pathToFileURL(join(root, 'dist', relative(root, dirname(here)), fileName));
 }
 
+/** An absolute path or file URL of a module (.ts or .js) → file URL of the .js to load. */
+export function compiledModule(moduleRef: string): URL {
+  const file = moduleRef.startsWith('file:') ? fileURLToPath(moduleRef) : moduleRef;
+  if (!file.endsWith('.ts')) return pathToFileURL(file);
+  const root = projectRoot(dirname(file));
+  return requireCompiled(pathToFileURL(join(root, 'dist', relative(root, file)).replace(/\.ts$/, '.js')));
+}
+
 /** Throws a plain Error telling how to build when the compiled file is missing. */
 export function requireCompiled(url: URL): URL {
   if (!existsSync(fileURLToPath(url))) {

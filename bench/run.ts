@@ -8,12 +8,13 @@ import { dirname, join } from 'node:path';
 import { runMechanicsBench } from './mechanicsBench.js';
 import { runReliabilityBench } from './reliabilityBench.js';
 import { columnRecipe } from '../src/limitState/columnRecipe.js';
+import { loadScenario } from '../src/scenario/loadScenario.js';
 
 const root = join(dirname(fileURLToPath(import.meta.url)), '..', '..');
 
 function recipeFor(file: string) {
   const path = join(root, 'scenarios', file);
-  return columnRecipe(readFileSync(path, 'utf8'), path);
+  return columnRecipe(loadScenario(readFileSync(path, 'utf8'), path));
 }
 
 async function main(): Promise<void> {

@@ -34,7 +34,6 @@ export async function runAssess(file: string, opts: AssessCliOptions, argv: stri
   const progress = progressPrinter();
   const a = await withInterrupt((signal) =>
     assessColumn(scenario, {
-      text,
       methods: opts.methods,
       samples: opts.samples,
       seed: opts.seed,

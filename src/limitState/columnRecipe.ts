@@ -1,16 +1,16 @@
 /**
- * How a worker thread rebuilds the column's reliability problem: from the scenario text itself,
- * so that every thread parses, validates and converts exactly the same numbers.
+ * How a worker thread rebuilds the column's reliability problem: from the validated scenario
+ * itself (plain data, cloned to the thread), so every thread uses exactly the same numbers and
+ * none pays for parsing, units or validation again.
  */
 import { natafTransform } from '../probability/nataf.js';
 import { compiledTwin } from '../runtime/compiledTwin.js';
 import type { ProblemRecipe, ReliabilityProblem } from '../reliability/types.js';
-import { loadScenario } from '../scenario/loadScenario.js';
+import type { Scenario } from '../scenario/types.js';
 import { buildColumnModel, type ColumnModel } from './columnModel.js';
 
 export interface ColumnRecipeArgs {
-  text: string;
-  fileName: string;
+  scenario: Scenario;
 }
 
 export function problemFromModel(model: ColumnModel): ReliabilityProblem {
@@ -23,13 +23,13 @@ export function problemFromModel(model: ColumnModel): ReliabilityProblem {
 
 /** The export named in the recipe: (args) => ReliabilityProblem. */
 export function buildColumnProblem(args: ColumnRecipeArgs): ReliabilityProblem {
-  return problemFromModel(buildColumnModel(loadScenario(args.text, args.fileName)));
+  return problemFromModel(buildColumnModel(args.scenario));
 }
 
-export function columnRecipe(text: string, fileName: string): ProblemRecipe {
+export function columnRecipe(scenario: Scenario): ProblemRecipe {
   return {
     module: compiledTwin(import.meta.url, 'columnRecipe.js').href,
     exportName: 'buildColumnProblem',
-    args: { text, fileName } satisfies ColumnRecipeArgs,
+    args: { scenario } satisfies ColumnRecipeArgs,
   };
 }

@@ -37,8 +37,6 @@ const HISTOGRAM_SAMPLES = 5000;
 const HISTOGRAM_STREAM = 9_000_001;
 
 export interface AssessOptions {
-  /** the scenario text as read: worker threads rebuild the problem from it */
-  text: string;
   methods?: readonly Method[];
   samples?: number;
   seed?: number;
@@ -168,7 +166,7 @@ function governingEstimate(a: Pick<Assessment, 'form' | 'sorm' | 'is' | 'mc' | '
   return { method: 'form' as Method, beta: a.form.beta, pf: a.form.pf };
 }
 
-export async function assessColumn(s: Scenario, opts: AssessOptions): Promise<Assessment> {
+export async function assessColumn(s: Scenario, opts: AssessOptions = {}): Promise<Assessment> {
   const model = buildColumnModel(s);
   if (model.names.length === 0) {
     throw new InputError('scenario', 'no value is random: give at least one {dist: ...} so that there is a probability to compute');
@@ -181,7 +179,7 @@ export async function assessColumn(s: Scenario, opts: AssessOptions): Promise<As
   const seed = opts.seed ?? s.analysis.seed ?? DEFAULT_SEED;
   const workers = Math.max(1, opts.workers ?? s.analysis.workers ?? 1);
   const problem = problemFromModel(model);
-  const recipe = columnRecipe(opts.text, s.fileName);
+  const recipe = columnRecipe(s);
   const warnings: string[] = [];
   let interrupted = false;
 

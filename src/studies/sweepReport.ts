@@ -69,7 +69,7 @@ export async function writeSweepReport(opts: {
   meta: RunMeta;
 }): Promise<WrittenOutputs> {
   const s = loadScenario(opts.scenarioText, opts.scenarioFile);
-  const a = await assessColumn(s, { text: opts.scenarioText, methods: ['form', 'sorm'] });
+  const a = await assessColumn(s, { methods: ['form', 'sorm'] });
   const json = assessmentJson(a, opts.meta) as Record<string, unknown>;
   const input: ReportInput = assessmentReportInput(a, opts.meta, json);
   const sweep = sweepResults(opts.table, opts.methods, s.column.length);

@@ -9,7 +9,7 @@ import type { Method } from '../scenario/types.js';
 import type { EndChoice } from '../studies/columnRestraint.js';
 import { readScenarioText } from './readScenarioText.js';
 import { formatAssessment } from './assessSummary.js';
-import { parseEnd, parseMethods, parseNonNegativeInteger, parsePositiveInteger } from './optionParsers.js';
+import { parseEnd, parseFraction, parseMethods, parseNonNegativeInteger, parsePositiveInteger } from './optionParsers.js';
 import { CAUTION } from './textTable.js';
 import { toolVersion } from './version.js';
 import { progressPrinter } from './progressPrinter.js';
@@ -22,6 +22,7 @@ export interface AssessCliOptions {
   seed?: number;
   methods?: Method[];
   samples?: number;
+  targetCov?: number;
   workers?: number;
   units?: UnitSystem;
   end?: EndChoice;
@@ -36,6 +37,7 @@ export async function runAssess(file: string, opts: AssessCliOptions, argv: stri
     assessColumn(scenario, {
       methods: opts.methods,
       samples: opts.samples,
+      targetCov: opts.targetCov,
       seed: opts.seed,
       workers: opts.workers,
       end: opts.end,
@@ -73,6 +75,7 @@ export function registerAssess(program: Command, unitsOption: () => Option): voi
     .addOption(new Option('--seed <N>', 'seed of every random stream (default: the scenario\'s, else 1)').argParser(parseNonNegativeInteger))
     .addOption(new Option('--methods <LIST>', 'comma-separated: form, sorm, is, mc, subset').argParser(parseMethods))
     .addOption(new Option('--samples <N>', 'Monte Carlo samples (default: the scenario\'s, else 1e6)').argParser(parsePositiveInteger))
+    .addOption(new Option('--target-cov <x>', 'stop Monte Carlo early once its CoV is at most x (e.g. 0.1)').argParser(parseFraction))
     .addOption(new Option('--workers <N>', 'worker threads for Monte Carlo (same numbers whatever N)').argParser(parsePositiveInteger))
     .addOption(new Option('--end <end>', 'ends for the restraint study: bottom, top or both').argParser(parseEnd))
     .addOption(unitsOption())

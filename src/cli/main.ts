@@ -30,7 +30,6 @@ program
       'failure probability, reliability index, what drives it, and the end restraint the verdict relies on.',
   )
   .version(toolVersion(), '-V, --version')
-  .showHelpAfterError('(run with --help for usage)')
   .exitOverride()
   .configureOutput({ writeErr: (s) => process.stderr.write(s) })
   .addHelpText('after', `\n${CAUTION}\n`);

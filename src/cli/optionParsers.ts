@@ -20,6 +20,12 @@ export function parsePositiveInteger(value: string): number {
   return n;
 }
 
+export function parseFraction(value: string): number {
+  const n = Number(value.trim());
+  if (value.trim() === '' || !Number.isFinite(n) || n <= 0 || n >= 1) throw new InvalidArgumentError('expected a number between 0 and 1 (e.g. 0.1).');
+  return n;
+}
+
 export function parseMethods(value: string): MethodName[] {
   const list = value.split(',').map((m) => m.trim().toLowerCase()).filter(Boolean);
   if (list.length === 0) throw new InvalidArgumentError(`expected a comma-separated list of ${METHODS.join(', ')}.`);

@@ -39,6 +39,8 @@ const HISTOGRAM_STREAM = 9_000_001;
 export interface AssessOptions {
   methods?: readonly Method[];
   samples?: number;
+  /** stop Monte Carlo once its coefficient of variation is at or below this */
+  targetCov?: number;
   seed?: number;
   workers?: number;
   end?: EndChoice;
@@ -208,6 +210,7 @@ export async function assessColumn(s: Scenario, opts: AssessOptions = {}): Promi
       samples: opts.samples ?? s.analysis.mcSamples ?? DEFAULT_MC_SAMPLES,
       seed,
       workers,
+      targetCov: opts.targetCov,
       recipe: workers > 1 ? recipe : undefined,
       signal: opts.signal,
       onProgress: opts.onProgress && ((p) => opts.onProgress?.('Monte Carlo', p)),

@@ -121,7 +121,8 @@ export interface FormResult {
 
 export interface SormResult {
   beta: number; // generalised index −Φ⁻¹(pf)
-  pf: number; // Breitung
+  pf: number; // of the formula named in `formula`
+  formula?: string; // 'Tvedt', 'Hohenbichler–Rackwitz' or 'Breitung'
   calls: number; // extra calls beyond FORM
   curvatures?: number[];
 }

@@ -99,7 +99,10 @@ export function assessmentReportInput(a: Assessment, meta: RunMeta, resultJson: 
       history: f.history.map((h) => ({ iteration: h.iteration, beta: h.beta, g: h.g })),
     };
   }
-  if (a.sorm) rel.sorm = { beta: a.sorm.beta, pf: a.sorm.pf, calls: a.sorm.calls, curvatures: a.sorm.curvatures };
+  if (a.sorm) {
+    const formula = { tvedt: 'Tvedt', 'hohenbichler-rackwitz': 'Hohenbichler–Rackwitz', breitung: 'Breitung', form: 'FORM, no valid curvature correction' }[a.sorm.used];
+    rel.sorm = { beta: a.sorm.beta, pf: a.sorm.pf, calls: a.sorm.calls, curvatures: a.sorm.curvatures, formula };
+  }
   if (a.is) rel.is = { beta: a.is.beta, pf: a.is.pf, cov: a.is.cov, calls: a.is.calls };
   if (a.mc) {
     rel.mc = {

@@ -41,6 +41,7 @@ export async function runAssess(file: string, opts: AssessCliOptions, argv: stri
       seed: opts.seed,
       workers: opts.workers,
       end: opts.end,
+      units: system,
       signal,
       onProgress: progress.update,
     }),
@@ -53,7 +54,7 @@ export async function runAssess(file: string, opts: AssessCliOptions, argv: stri
   const meta = { version: toolVersion(), date: new Date().toISOString(), command: ['stanchion', ...argv].join(' ') };
   const json = assessmentJson(a, meta);
   if (opts.out) {
-    const input = assessmentReportInput(a, meta, json);
+    const input = assessmentReportInput(a, meta);
     const written = await writeOutputs(opts.out, input, json, { force: opts.force, units: system });
     process.stderr.write(`stanchion: report written to ${written.dir}/report.html (${written.files.length} files)\n`);
   }

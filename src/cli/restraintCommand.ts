@@ -24,10 +24,10 @@ export async function runRestraint(file: string, opts: RestraintOptions): Promis
   const r = columnRestraint(scenario, { end: opts.end, units: system });
   if (opts.out) {
     // the report around the study: the column, FORM/SORM at the assessed stiffness, sensitivity, the curve
-    const a = await assessColumn(scenario, { methods: ['form', 'sorm'], end: opts.end });
+    const a = await assessColumn(scenario, { methods: ['form', 'sorm'], end: opts.end, restraint: r });
     const meta = { version: toolVersion(), date: new Date().toISOString(), command: ['stanchion', ...process.argv.slice(2)].join(' ') };
     const json = assessmentJson(a, meta);
-    const written = await writeOutputs(opts.out, assessmentReportInput(a, meta, json), json, { force: opts.force, units: system });
+    const written = await writeOutputs(opts.out, assessmentReportInput(a, meta), json, { force: opts.force, units: system });
     process.stderr.write(`stanchion: report written to ${written.dir}/report.html (${written.files.length} files)\n`);
   }
   if (opts.json) {

@@ -27,8 +27,6 @@ export interface NatafTransform extends IsoTransform {
 }
 
 const SYMMETRY_TOLERANCE = 1e-10;
-const INLINE_NORMAL = 1;
-const INLINE_LOGNORMAL = 2;
 
 function label(names: readonly string[] | undefined, i: number): string {
   return names?.[i] ?? `#${i + 1}`;
@@ -99,36 +97,13 @@ export function natafTransform(
     );
   }
   const z = new Float64Array(n);
-  // Hot path: normal and lognormal marginals are done inline (one multiply-add, one exp) instead of
-  // through five different classes' methods, a call site V8 cannot inline.
-  const code = new Int8Array(n);
-  const pa = new Float64Array(n);
-  const pb = new Float64Array(n);
-  for (let i = 0; i < n; i++) {
-    const m = marginals[i];
-    if (m.name === 'normal') {
-      code[i] = INLINE_NORMAL;
-      pa[i] = m.params.mean;
-      pb[i] = m.params.sd;
-    } else if (m.name === 'lognormal') {
-      code[i] = INLINE_LOGNORMAL;
-      pa[i] = m.params.lambda;
-      pb[i] = m.params.zeta;
-    }
-  }
-  const marginal = (i: number, ui: number): number => {
-    const k = code[i];
-    if (k === INLINE_NORMAL) return pa[i] + pb[i] * ui;
-    if (k === INLINE_LOGNORMAL) return Math.exp(pa[i] + pb[i] * ui);
-    return marginals[i].fromStandardNormal(ui);
-  };
   const toPhysical = lower
     ? (u: Float64Array, x: Float64Array): void => {
         lowerTimes(lower, n, u, z);
-        for (let i = 0; i < n; i++) x[i] = marginal(i, z[i]);
+        for (let i = 0; i < n; i++) x[i] = marginals[i].fromStandardNormal(z[i]);
       }
     : (u: Float64Array, x: Float64Array): void => {
-        for (let i = 0; i < n; i++) x[i] = marginal(i, u[i]);
+        for (let i = 0; i < n; i++) x[i] = marginals[i].fromStandardNormal(u[i]);
       };
   const toStandard = lower
     ? (x: Float64Array, u: Float64Array): void => {

@@ -64,8 +64,7 @@ function partialFactors(a: Assessment): PartialFactorRow[] {
   return out;
 }
 
-export function assessmentReportInput(a: Assessment, meta: RunMeta, resultJson: unknown): ReportInput {
-  void resultJson;
+export function assessmentReportInput(a: Assessment, meta: RunMeta): ReportInput {
   const s = a.scenario;
   const model = a.model;
   const meanOf = (path: string): number => {

@@ -24,6 +24,7 @@ import type { Method, Scenario } from '../scenario/types.js';
 import { scalarAt } from '../scenario/variables.js';
 import type { DistSpec } from '../probability/distribution.js';
 import { scenarioForm } from './columnForm.js';
+import type { UnitSystem } from '../report/displayUnits.js';
 import { columnRestraint, studiedEnds, type ColumnRestraintResult, type EndChoice } from './columnRestraint.js';
 
 export const DEFAULT_METHODS: readonly Method[] = ['form', 'sorm', 'is', 'mc'];
@@ -46,6 +47,10 @@ export interface AssessOptions {
   end?: EndChoice;
   signal?: AbortSignal;
   onProgress?: (method: string, p: SimulationProgress) => void;
+  /** display units of the restraint sentence (default: the scenario's) */
+  units?: UnitSystem;
+  /** a restraint study already computed for this scenario and `end` (not computed again) */
+  restraint?: ColumnRestraintResult;
   /** skip sensitivity and restraint studies (sweeps, quick looks) */
   reliabilityOnly?: boolean;
 }
@@ -236,7 +241,7 @@ export async function assessColumn(s: Scenario, opts: AssessOptions = {}): Promi
   let restraint: ColumnRestraintResult | undefined;
   if (!opts.reliabilityOnly && !interrupted) {
     sensitivity = sensitivityStudy(s, model, formResult.beta, seed);
-    if (studiedEnds(s, opts.end).length > 0) restraint = columnRestraint(s, { end: opts.end });
+    if (studiedEnds(s, opts.end).length > 0) restraint = opts.restraint ?? columnRestraint(s, { end: opts.end, units: opts.units });
   }
   return {
     scenario: s,

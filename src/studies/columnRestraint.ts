@@ -81,9 +81,10 @@ export function columnRestraint(
   const notes: string[] = [];
   const base: Record<string, Scalar> = {};
   for (const e of ends) base[e] = baseScalar(s, e, notes);
-  const edited = (factor: number): Scenario => {
+  /** The scenario with every studied end at factor × its base stiffness (random or known exactly). */
+  const edited = (factor: number, bases: Record<string, Scalar> = base): Scenario => {
     let t = s;
-    for (const e of ends) t = withEndStiffness(t, e, base[e], factor);
+    for (const e of ends) t = withEndStiffness(t, e, bases[e], factor);
     return t;
   };
   const baseStiffness: Record<string, number> = {};
@@ -123,20 +124,13 @@ export function columnRestraint(
   for (const e of ends) fixedBase[e] = { kind: 'fixed', value: baseStiffness[e] };
   const exact = restraintStudy({
     betaAtFactor: (fct) => {
-      let t = s;
-      for (const e of ends) t = withEndStiffness(t, e, fixedBase[e], fct);
-      const p = scenarioForm(t);
+      const p = scenarioForm(edited(fct, fixedBase));
       return { beta: p.beta, pf: p.pf };
     },
     baseStiffness,
     target: s.targetBeta,
   });
-  let kDeterministic: number | null = null;
-  if (exact.requiredFactor !== null) {
-    let t = s;
-    for (const e of ends) t = withEndStiffness(t, e, fixedBase[e], exact.requiredFactor);
-    kDeterministic = kWith(t);
-  }
+  const kDeterministic = exact.requiredFactor === null ? null : kWith(edited(exact.requiredFactor, fixedBase));
   const system = opts.units ?? s.displayUnits;
   const studySentence = restraintSentence(study, {
     formatStiffness: (k) => formatQuantity(k, 'rotationalStiffness', system),

@@ -69,9 +69,9 @@ export async function writeSweepReport(opts: {
   meta: RunMeta;
 }): Promise<WrittenOutputs> {
   const s = loadScenario(opts.scenarioText, opts.scenarioFile);
-  const a = await assessColumn(s, { methods: ['form', 'sorm'] });
+  const a = await assessColumn(s, { methods: ['form', 'sorm'], units: opts.units ?? s.displayUnits });
   const json = assessmentJson(a, opts.meta) as Record<string, unknown>;
-  const input: ReportInput = assessmentReportInput(a, opts.meta, json);
+  const input: ReportInput = assessmentReportInput(a, opts.meta);
   const sweep = sweepResults(opts.table, opts.methods, s.column.length);
   if (sweep) input.sweep = sweep;
   else input.cautions.push('The sweep varied more than two quantities: its results are in sweep.csv, not charted.');

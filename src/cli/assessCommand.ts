@@ -4,6 +4,7 @@ import { assessColumn } from '../studies/columnAssessment.js';
 import { assessmentJson } from '../studies/assessmentJson.js';
 import { assessmentReportInput } from '../studies/assessmentReport.js';
 import { writeOutputs } from '../report/writeOutputs.js';
+import { checkOutFolder } from '../report/outputFolder.js';
 import type { UnitSystem } from '../report/displayUnits.js';
 import type { Method } from '../scenario/types.js';
 import type { EndChoice } from '../studies/columnRestraint.js';
@@ -31,6 +32,8 @@ export interface AssessCliOptions {
 export async function runAssess(file: string, opts: AssessCliOptions, argv: string[]): Promise<void> {
   const { text, fileName } = readScenarioText(file);
   const scenario = loadScenario(text, fileName);
+  // refuse a bad --out before the long run; writeOutputs checks again when it writes
+  if (opts.out) checkOutFolder(opts.out, { force: opts.force ?? false, inputFiles: [file] });
   const system = opts.units ?? scenario.displayUnits;
   const progress = progressPrinter();
   const a = await withInterrupt((signal) =>
@@ -55,7 +58,7 @@ export async function runAssess(file: string, opts: AssessCliOptions, argv: stri
   const json = assessmentJson(a, meta);
   if (opts.out) {
     const input = assessmentReportInput(a, meta);
-    const written = await writeOutputs(opts.out, input, json, { force: opts.force, units: system });
+    const written = await writeOutputs(opts.out, input, json, { force: opts.force, inputFiles: [file], units: system });
     process.stderr.write(`stanchion: report written to ${written.dir}/report.html (${written.files.length} files)\n`);
   }
   if (opts.json) {
@@ -71,8 +74,8 @@ export function registerAssess(program: Command, unitsOption: () => Option): voi
     .description('reliability, sensitivity, restraint study and report for one scenario')
     .argument('<FILE>', 'scenario (.yaml, .yml, .json, or - for stdin)')
     .option('--json', 'print one JSON document (SI units) on stdout')
-    .option('--out <DIR>', 'write the report (HTML, Markdown, JSON, CSV, charts) into DIR')
-    .option('--force', 'replace DIR when it exists')
+    .option('--out <DIR>', 'write the report (HTML, Markdown, JSON, CSV, charts) into the new folder DIR, whole or not at all')
+    .option('--force', 'replace DIR when it is a report folder stanchion wrote (it holds .stanchion-output.json); nothing else is ever replaced')
     .addOption(new Option('--seed <N>', 'seed of every random stream (default: the scenario\'s, else 1)').argParser(parseNonNegativeInteger))
     .addOption(new Option('--methods <LIST>', 'comma-separated: form, sorm, is, mc, subset').argParser(parseMethods))
     .addOption(new Option('--samples <N>', 'Monte Carlo samples (default: the scenario\'s, else 1e6)').argParser(parsePositiveInteger))

@@ -1,4 +1,5 @@
 import { InputError } from '../scenario/inputError.js';
+import { boundEchoes } from '../scenario/shortenEcho.js';
 
 /** Exit codes of CONTRACT.md §1. */
 export const EXIT_OK = 0;
@@ -25,11 +26,11 @@ export function reportFailure(err: unknown): number {
     return EXIT_INPUT;
   }
   if (isUserError(err)) {
-    process.stderr.write(`stanchion: ${(err as Error).message}\n`);
+    process.stderr.write(`stanchion: ${boundEchoes((err as Error).message)}\n`);
     return EXIT_INPUT;
   }
   const message = err instanceof Error ? err.message : String(err);
-  process.stderr.write(`stanchion: internal error: ${message}\n`);
+  process.stderr.write(`stanchion: internal error: ${boundEchoes(message)}\n`);
   if (process.env.STANCHION_DEBUG && err instanceof Error && err.stack) process.stderr.write(`${err.stack}\n`);
   return EXIT_INTERNAL;
 }

@@ -12,6 +12,7 @@ import { registerSweep } from './sweepCommand.js';
 import { registerNew } from './newCommand.js';
 import { registerAssess } from './assessCommand.js';
 import { CAUTION } from './textTable.js';
+import { boundLines } from '../scenario/shortenEcho.js';
 
 // `stanchion ... | head` closes the pipe early: that is the reader's choice, not a failure.
 for (const stream of [process.stdout, process.stderr]) {
@@ -31,7 +32,7 @@ program
   )
   .version(toolVersion(), '-V, --version')
   .exitOverride()
-  .configureOutput({ writeErr: (s) => process.stderr.write(s) })
+  .configureOutput({ writeErr: (s) => process.stderr.write(boundLines(s)) })
   .addHelpText('after', `\n${CAUTION}\n`);
 
 const unitsOption = () =>
@@ -57,8 +58,8 @@ program
   .argument('<FILE>', 'scenario (.yaml, .yml, .json, or - for stdin)')
   .option('--json', 'print one JSON document (SI units) on stdout')
   .addOption(new Option('--end <end>', 'which connection to study: bottom, top or both (default: the ends given as springs)').argParser(parseEnd))
-  .option('--out <DIR>', 'also write the report (HTML, Markdown, JSON, CSV, charts) into DIR')
-  .option('--force', 'replace DIR when it exists')
+  .option('--out <DIR>', 'also write the report (HTML, Markdown, JSON, CSV, charts) into the new folder DIR, whole or not at all')
+  .option('--force', 'replace DIR when it is a report folder stanchion wrote (it holds .stanchion-output.json); nothing else is ever replaced')
   .addOption(unitsOption())
   .addHelpText(
     'after',

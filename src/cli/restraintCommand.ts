@@ -6,6 +6,7 @@ import { assessColumn } from '../studies/columnAssessment.js';
 import { assessmentJson } from '../studies/assessmentJson.js';
 import { assessmentReportInput } from '../studies/assessmentReport.js';
 import { writeOutputs } from '../report/writeOutputs.js';
+import { checkOutFolder } from '../report/outputFolder.js';
 import { toolVersion } from './version.js';
 import { CAUTION, textTable } from './textTable.js';
 
@@ -20,6 +21,7 @@ export interface RestraintOptions {
 export async function runRestraint(file: string, opts: RestraintOptions): Promise<void> {
   const { text, fileName } = readScenarioText(file);
   const scenario = loadScenario(text, fileName);
+  if (opts.out) checkOutFolder(opts.out, { force: opts.force ?? false, inputFiles: [file] }); // before the study; checked again when written
   const system = opts.units ?? scenario.displayUnits;
   const r = columnRestraint(scenario, { end: opts.end, units: system });
   if (opts.out) {
@@ -27,7 +29,7 @@ export async function runRestraint(file: string, opts: RestraintOptions): Promis
     const a = await assessColumn(scenario, { methods: ['form', 'sorm'], end: opts.end, restraint: r });
     const meta = { version: toolVersion(), date: new Date().toISOString(), command: ['stanchion', ...process.argv.slice(2)].join(' ') };
     const json = assessmentJson(a, meta);
-    const written = await writeOutputs(opts.out, assessmentReportInput(a, meta), json, { force: opts.force, units: system });
+    const written = await writeOutputs(opts.out, assessmentReportInput(a, meta), json, { force: opts.force, inputFiles: [file], units: system });
     process.stderr.write(`stanchion: report written to ${written.dir}/report.html (${written.files.length} files)\n`);
   }
   if (opts.json) {

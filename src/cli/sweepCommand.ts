@@ -27,12 +27,13 @@ import { sweepFingerprint } from '../studies/sweepFingerprint.js';
 import { journalPath, readJournal, type JournalContent } from '../studies/sweepJournal.js';
 import { sweepJson, writeSweepOutputs } from '../studies/sweepOutput.js';
 import { writeSweepReport } from '../studies/sweepReport.js';
+import { checkOutFolder } from '../report/outputFolder.js';
 import { toolVersion } from './version.js';
 import type { SweepTable } from '../studies/sweepTable.js';
 import type { CaseTable, Shard, SweepDefinition, SweepRecord } from '../studies/sweepTypes.js';
 import { parseVaryOption } from '../studies/varyOption.js';
 import { parseMethods, parseNonNegativeInteger, parsePositiveInteger, parseShard } from './optionParsers.js';
-import { readScenarioText } from './readScenarioText.js';
+import { readScenarioText, readTextFileBounded } from './readScenarioText.js';
 import { CAUTION } from './textTable.js';
 
 export interface SweepOptions {
@@ -96,12 +97,7 @@ function readScenarioOfSweep(path: string): { text: string; fileName: string } {
   const near = relative(process.cwd(), path);
   const shown = near === '' || near.startsWith('..') ? path : near;
   if (!/\.(ya?ml|json)$/i.test(path)) throw new InputError('scenario', `expected a .yaml, .yml or .json scenario, got ${shown}`);
-  try {
-    return { text: readFileSync(path, 'utf8'), fileName: shown };
-  } catch (err) {
-    const code = (err as NodeJS.ErrnoException).code;
-    throw new InputError('scenario', `${shown}: ${code === 'ENOENT' ? 'no such file' : 'cannot be read'}`);
-  }
+  return { text: readTextFileBounded(path, 'scenario', shown), fileName: shown };
 }
 
 function methodsFromFile(list: string[] | undefined): Method[] | undefined {
@@ -182,6 +178,11 @@ function checkCases(base: SweepBase, plan: SweepPlan): void {
 function sweepIdentity(plan: SweepPlan): unknown {
   const scenario = createHash('sha256').update(plan.scenarioText, 'utf8').digest('hex');
   return { runner: 'column/1', methods: plan.methods, samples: plan.samples ?? null, scenario };
+}
+
+/** The files a sweep reads, which its report folder must never replace. */
+function sweepInputFiles(file: string, plan: SweepPlan): string[] {
+  return plan.fromSweepFile ? [file, plan.scenarioFile] : [file];
 }
 
 function defaultOut(file: string): string {
@@ -311,6 +312,8 @@ export async function runSweepCommand(file: string, opts: SweepOptions): Promise
   const fingerprint = sweepFingerprint(plan.table, identity);
   const writesOutputs = shard.count === 1;
   if (writesOutputs) guardOutputs(out, fingerprint, opts.force);
+  // OUT/report is replaced only when stanchion wrote it: refuse anything else before a case runs
+  if (writesOutputs) checkOutFolder(join(out, 'report'), { force: true, inputFiles: sweepInputFiles(file, plan) });
   const discard = staleJournal(stateDir, shard, fingerprint, opts.force);
   // everything is checked: from here on things are written
   if (discard) rmSync(journalPath(stateDir, shard), { force: true });
@@ -344,6 +347,7 @@ export async function runSweepCommand(file: string, opts: SweepOptions): Promise
       table,
       methods: plan.methods,
       dir: join(out, 'report'),
+      inputFiles: sweepInputFiles(file, plan),
       units: opts.units,
       meta: { version: toolVersion(), date: new Date().toISOString(), command: ['stanchion', ...process.argv.slice(2)].join(' ') },
     });
@@ -466,6 +470,8 @@ export function registerSweep(program: Command, unitsOption: () => Option): void
         '',
         'Writes OUT/sweep.csv, OUT/sweep.json and, when every case is done, OUT/report/ (report.html,',
         'summary.md, result.json, CSV tables and charts of the base scenario and the sweep).',
+        'OUT/report/ is replaced only when stanchion wrote it (it holds .stanchion-output.json);',
+        'anything else there stops the sweep before any case runs.',
         '',
         'Examples:',
         '  stanchion sweep scenarios/braced-base-plate.yaml --vary "column.ends.bottom.rotation.mean=log:0.2 MN m/rad:20 MN m/rad:9"',

@@ -1,21 +1,12 @@
-/** The CSV files of the report: SI base units, one header row, RFC 4180 quoting. */
+/** The CSV files of the report: SI base units, one header row, cells by csvCell (RFC 4180, formula-safe). */
 import type { ReportInput } from './reportInput.js';
+import { csvCell, type CsvValue } from './csvCell.js';
 import { sampleQuantile } from './charts/histogramBins.js';
 
-type Cell = string | number | null | undefined;
-
-function cell(v: Cell): string {
-  if (v === null || v === undefined) return '';
-  if (typeof v === 'number') {
-    if (Number.isNaN(v)) return '';
-    if (!Number.isFinite(v)) return v > 0 ? 'inf' : '-inf';
-    return String(v);
-  }
-  return /[",\n\r]/.test(v) ? `"${v.replace(/"/g, '""')}"` : v;
-}
+type Cell = CsvValue;
 
 export function toCsv(head: string[], rows: Cell[][]): string {
-  return [head, ...rows].map((r) => r.map(cell).join(',')).join('\n') + '\n';
+  return [head, ...rows].map((r) => r.map(csvCell).join(',')).join('\n') + '\n';
 }
 
 function stats(values: number[]) {

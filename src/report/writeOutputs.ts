@@ -1,9 +1,10 @@
 /**
  * `--out DIR`: render every report file in memory, write them into a hidden sibling
  * folder, then rename it into place. DIR is either complete or untouched: never half.
+ * DIR gets the marker OUTPUT_MARKER, so that a later `--force` knows stanchion wrote it.
  */
 import { promises as fsp } from 'node:fs';
-import { basename, dirname, join, resolve } from 'node:path';
+import { dirname, join, resolve } from 'node:path';
 import { InputError } from '../scenario/inputError.js';
 import type { ReportInput } from './reportInput.js';
 import type { UnitSystem } from './displayUnits.js';
@@ -14,9 +15,15 @@ import { buildReportDocument } from './reportSections.js';
 import { renderHtml } from './htmlReport.js';
 import { renderMarkdown } from './markdownReport.js';
 import { csvTables } from './csvTables.js';
+import { OUTPUT_MARKER, checkOutFolder, outputMarkerText, type OutFolderRules } from './outputFolder.js';
+import { removeStaleSiblings, siblingFolderName, type Notify } from './staleSiblings.js';
 
 export interface WriteOutputsOptions {
-  force?: boolean; // replace an existing DIR whole
+  force?: boolean; // replace an existing DIR whole, only when it is a stanchion output folder (outputFolder.ts)
+  /** The files the run read (scenario, sweep file; '-' is stdin): never replaced, nor any folder holding them. */
+  inputFiles?: readonly string[];
+  /** Where the line about removed leftovers goes (default stderr). */
+  notify?: Notify;
   units?: UnitSystem; // display units of HTML, Markdown and charts (default 'si'); JSON and CSV stay SI
   png?: boolean; // also write charts/*.png (default true)
   pngScale?: number; // PNG pixel density (default 2)
@@ -26,7 +33,7 @@ export interface WriteOutputsOptions {
 
 export interface WrittenOutputs {
   dir: string; // absolute path of DIR
-  files: string[]; // paths relative to DIR, sorted
+  files: string[]; // paths relative to DIR, sorted (the marker OUTPUT_MARKER included)
 }
 
 /** Every output file as relative path → content, rendered in memory (nothing touches disk). */
@@ -56,19 +63,6 @@ export async function renderReportFiles(
   return files;
 }
 
-async function exists(path: string): Promise<boolean> {
-  try {
-    await fsp.lstat(path);
-    return true;
-  } catch {
-    return false;
-  }
-}
-
-function refuseExisting(dir: string): InputError {
-  return new InputError('--out', `${dir} already exists; choose a new folder or pass --force to replace it`);
-}
-
 function isErrno(e: unknown, ...codes: string[]): boolean {
   return e instanceof Error && codes.includes((e as NodeJS.ErrnoException).code ?? '');
 }
@@ -80,15 +74,12 @@ async function requireParentFolder(dir: string): Promise<void> {
   if (stat === null || !stat.isDirectory()) throw new InputError('--out', `the parent folder of ${dir} does not exist`);
 }
 
-let sequence = 0;
-function siblingName(dir: string, tag: string): string {
-  return join(dirname(dir), `.${basename(dir)}.${tag}-${process.pid}-${Date.now()}-${sequence++}`);
-}
-
 /**
- * Write the report into `outDir`. Throws InputError (field '--out') when outDir exists and
- * `force` is not set, or when its parent folder is missing or not writable; on any failure
- * nothing is left behind and an existing outDir is untouched.
+ * Write the report into `outDir`. Throws InputError (field '--out') when checkOutFolder refuses
+ * outDir (outputFolder.ts: only a stanchion output folder is ever replaced, and only with
+ * `force`), or when its parent folder is missing or not writable; on any failure nothing is
+ * left behind and an existing outDir is untouched. Hidden leftovers of writers that died are
+ * removed first (staleSiblings.ts).
  */
 export async function writeOutputs(
   outDir: string,
@@ -97,12 +88,15 @@ export async function writeOutputs(
   options: WriteOutputsOptions = {},
 ): Promise<WrittenOutputs> {
   const dir = resolve(outDir);
-  if (!options.force && (await exists(dir))) throw refuseExisting(dir);
+  const rules = { force: options.force ?? false, inputFiles: options.inputFiles };
+  checkOutFolder(outDir, rules);
   await requireParentFolder(dir);
   const files = await renderReportFiles(input, resultJson, options);
+  files.set(OUTPUT_MARKER, outputMarkerText({ command: input.meta.commandLine, version: input.meta.toolVersion, created: new Date().toISOString() }));
   const write = options.writeFile ?? ((p: string, d: string | Uint8Array) => fsp.writeFile(p, d));
 
-  const temp = siblingName(dir, 'partial');
+  removeStaleSiblings(dir, options.notify);
+  const temp = siblingFolderName(dir, 'partial');
   try {
     await fsp.mkdir(temp);
   } catch (e) {
@@ -113,7 +107,7 @@ export async function writeOutputs(
   try {
     await fsp.mkdir(join(temp, 'charts'));
     for (const [rel, data] of files) await write(join(temp, rel), data);
-    await moveIntoPlace(temp, dir, options.force ?? false);
+    await moveIntoPlace(temp, outDir, rules);
   } catch (e) {
     await fsp.rm(temp, { recursive: true, force: true });
     throw e;
@@ -121,14 +115,18 @@ export async function writeOutputs(
   return { dir, files: [...files.keys()].sort() };
 }
 
-/** Rename the finished folder to `dir`; with force, swap out an existing one and restore it on failure. */
-async function moveIntoPlace(temp: string, dir: string, force: boolean): Promise<void> {
-  if (!(await exists(dir))) {
+/**
+ * Rename the finished folder to `dir`. The rules are checked again at this moment (the folder
+ * may have changed while we rendered); a replaced stanchion folder is swapped out, restored if
+ * the rename fails, and removed only once the new one is in place.
+ */
+async function moveIntoPlace(temp: string, outDir: string, rules: OutFolderRules): Promise<void> {
+  const dir = resolve(outDir);
+  if (checkOutFolder(outDir, rules) === 'absent') {
     await fsp.rename(temp, dir);
     return;
   }
-  if (!force) throw refuseExisting(dir); // appeared while we were rendering
-  const old = siblingName(dir, 'replaced');
+  const old = siblingFolderName(dir, 'replaced');
   await fsp.rename(dir, old);
   try {
     await fsp.rename(temp, dir);

@@ -8,7 +8,13 @@ import { InputError } from './inputError.js';
 import { setOwn, formatPath, type PathSegment, type RawMap, type RawTree, type RawValue } from './rawTree.js';
 
 const MAX_DEPTH = 32;
-const MAX_TEXT_LENGTH = 4_000_000;
+/** The largest scenario read: in bytes by the CLI's reader, in characters here (never more than bytes). */
+export const MAX_TEXT_LENGTH = 4_000_000;
+
+/** A UTF-8 byte order mark some editors put first: not part of the text. */
+export function stripByteOrderMark(text: string): string {
+  return text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
+}
 
 /** Decides JSON or YAML: by extension, or for stdin (`-`) by a leading `{`. */
 export function detectFormat(text: string, fileName: string): 'yaml' | 'json' {
@@ -17,9 +23,10 @@ export function detectFormat(text: string, fileName: string): 'yaml' | 'json' {
   return 'yaml';
 }
 
-export function parseText(text: string, fileName: string): RawTree {
+export function parseText(withMark: string, fileName: string): RawTree {
+  const text = stripByteOrderMark(withMark);
   const where = fileName === '-' ? 'stdin' : fileName;
-  if (text.length > MAX_TEXT_LENGTH) throw new InputError(where, `is too large (${text.length} characters)`);
+  if (text.length > MAX_TEXT_LENGTH) throw new InputError(where, `is too large (${text.length} characters; the limit is ${MAX_TEXT_LENGTH})`);
   if (text.trim() === '') throw new InputError(where, 'is empty: a scenario needs at least `stanchion: 1`, `column`, `loads` and `strength`');
   const format = detectFormat(text, fileName);
   if (format === 'json') checkJsonSyntax(text, where);

@@ -1,27 +1,22 @@
 /**
  * CSV and JSON renderings of a sweep table, byte-for-byte deterministic: rows by case
- * index, numbers as JavaScript's shortest round-trip text, RFC 4180 quoting, '\n' line ends.
+ * index, cells by csvCell (numbers as JavaScript's shortest round-trip text, RFC 4180 quoting,
+ * formula-like text neutralised), '\n' line ends.
  * CSV header: case, each varied path, each result column (then `error` if any case failed).
  */
 import { writeFileAtomic } from './atomicWrite.js';
+import { csvCell } from '../report/csvCell.js';
 import type { SweepTable } from './sweepTable.js';
-import type { ResultValue, SweepValue } from './sweepTypes.js';
-
-function csvField(value: ResultValue | SweepValue | undefined): string {
-  if (value === undefined || value === null) return '';
-  const text = String(value);
-  return /[",\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
-}
 
 export function sweepCsv(table: SweepTable): string {
   const header = ['case', ...table.varied, ...table.columns, ...(table.hasErrors ? ['error'] : [])];
-  const lines = [header.map(csvField).join(',')];
+  const lines = [header.map(csvCell).join(',')];
   for (const row of table.rows) {
     const fields = [
       String(row.case),
-      ...table.varied.map((p) => csvField(row.values[p])),
-      ...table.columns.map((c) => csvField(row.result[c])),
-      ...(table.hasErrors ? [csvField(row.error)] : []),
+      ...table.varied.map((p) => csvCell(row.values[p])),
+      ...table.columns.map((c) => csvCell(row.result[c])),
+      ...(table.hasErrors ? [csvCell(row.error)] : []),
     ];
     lines.push(fields.join(','));
   }

@@ -67,6 +67,8 @@ export async function writeSweepReport(opts: {
   dir: string;
   units?: UnitSystem;
   meta: RunMeta;
+  /** The files the sweep read: never replaced, nor any folder holding them ('-' is stdin). */
+  inputFiles?: readonly string[];
 }): Promise<WrittenOutputs> {
   const s = loadScenario(opts.scenarioText, opts.scenarioFile);
   const a = await assessColumn(s, { methods: ['form', 'sorm'], units: opts.units ?? s.displayUnits });
@@ -77,5 +79,6 @@ export async function writeSweepReport(opts: {
   else input.cautions.push('The sweep varied more than two quantities: its results are in sweep.csv, not charted.');
   input.cautions.unshift('The sections before the sweep describe the base scenario (FORM and SORM); the sweep section lists every case.');
   json.sweep = jsonSafe({ varied: opts.table.varied, rows: opts.table.rows.length, method: sweep?.method ?? null });
-  return writeOutputs(opts.dir, input, json, { force: true, units: opts.units ?? s.displayUnits });
+  // force: the sweep regenerates its own report at every complete run, and writeOutputs replaces only a marked folder
+  return writeOutputs(opts.dir, input, json, { force: true, inputFiles: opts.inputFiles, units: opts.units ?? s.displayUnits });
 }

@@ -6,6 +6,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { renderReportFiles, writeOutputs } from '../../src/report/writeOutputs.js';
 import { InputError } from '../../src/scenario/inputError.js';
+import { OUTPUT_MARKER, hasOutputMarker } from '../../src/report/outputFolder.js';
 import { SECTION_TITLES } from '../../src/report/reportDocument.js';
 import { demoReportInput, demoResultJson } from './fixture.js';
 
@@ -28,6 +29,15 @@ const EXPECTED = [
     `charts/${n}.png`,
   ]),
 ].sort();
+
+/** What a written folder holds: the rendered files plus the marker. */
+const WRITTEN = [...EXPECTED, OUTPUT_MARKER].sort();
+
+/** A folder as an earlier run left it: the marker and one stale file. */
+async function earlierReport(dir: string, stale: string): Promise<void> {
+  await writeOutputs(dir, input, result, { png: false });
+  writeFileSync(join(dir, stale), 'old');
+}
 
 function listTree(dir: string, prefix = ''): string[] {
   return readdirSync(dir, { withFileTypes: true }).flatMap((e) =>
@@ -95,8 +105,14 @@ describe('writeOutputs', () => {
   it('creates the folder with every file', async () => {
     const dir = join(root, 'fresh');
     const out = await writeOutputs(dir, input, result);
-    expect(out.files).toEqual(EXPECTED);
-    expect(listTree(dir).sort()).toEqual(EXPECTED);
+    expect(out.files).toEqual(WRITTEN);
+    expect(listTree(dir).sort()).toEqual(WRITTEN);
+    expect(hasOutputMarker(dir)).toBe(true);
+    const marker = JSON.parse(readFileSync(join(dir, OUTPUT_MARKER), 'utf8')) as Record<string, string>;
+    expect(marker.tool).toBe('stanchion');
+    expect(marker.command).toBe(input.meta.commandLine);
+    expect(marker.version).toBe(input.meta.toolVersion);
+    expect(Number.isNaN(Date.parse(marker.created))).toBe(false);
     expect(readFileSync(join(dir, 'report.html'), 'utf8')).toContain('<!DOCTYPE html>');
     expect(readdirSync(root).filter((n) => n.startsWith('.'))).toEqual([]);
   });
@@ -112,10 +128,9 @@ describe('writeOutputs', () => {
     expect(listTree(dir)).toEqual(['keep.txt']);
   });
 
-  it('replaces an existing folder whole with force', async () => {
+  it('replaces an existing stanchion folder whole with force', async () => {
     const dir = join(root, 'replaced');
-    mkdirSync(dir);
-    writeFileSync(join(dir, 'stale.txt'), 'old');
+    await earlierReport(dir, 'stale.txt');
     await writeOutputs(dir, input, result, { ...fast, force: true });
     expect(existsSync(join(dir, 'stale.txt'))).toBe(false);
     expect(existsSync(join(dir, 'report.html'))).toBe(true);
@@ -137,15 +152,16 @@ describe('writeOutputs', () => {
 
   it('keeps the old folder intact when a forced replacement fails', async () => {
     const dir = join(root, 'precious');
-    mkdirSync(dir);
-    writeFileSync(join(dir, 'old.txt'), 'old');
+    await earlierReport(dir, 'old.txt');
+    const before = listTree(dir).sort();
     let calls = 0;
     const writeFile = async (p: string, d: string | Uint8Array) => {
       if (++calls === 3) throw new Error('injected');
       await fsp.writeFile(p, d);
     };
     await expect(writeOutputs(dir, input, result, { ...fast, force: true, writeFile })).rejects.toThrow('injected');
-    expect(listTree(dir)).toEqual(['old.txt']);
+    expect(listTree(dir).sort()).toEqual(before);
+    expect(readFileSync(join(dir, 'old.txt'), 'utf8')).toBe('old');
     expect(readdirSync(root).filter((n) => n.includes('precious'))).toEqual(['precious']);
   });
 

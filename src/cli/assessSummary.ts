@@ -10,12 +10,70 @@ function pct(cov: number): string {
   return Number.isFinite(cov) ? `CoV ${(cov * 100).toFixed(1)} %` : 'CoV —';
 }
 
+function modelFactorLine(a: Assessment): string {
+  const m = a.modelFactor;
+  const what = m.dist === 'fixed' ? `fixed ${m.mean}` : `${m.dist}, mean ${m.mean.toFixed(2)}, CoV ${m.cov.toFixed(2)}`;
+  return m.source === 'default'
+    ? `model factor: ${what}, the default for ${m.strength} (${m.reference})`
+    : `model factor: ${what}, as given in the scenario`;
+}
+
+function characteristicLines(a: Assessment, system: UnitSystem): string[] {
+  const c = a.characteristic;
+  const fmt = (v: number | null, path: string) => (v === null ? '—' : formatQuantity(v, quantityKindOf(path), system));
+  const rows: string[][] = [['variable', 'side', 'characteristic', 'design', 'γ implied', c.code ? 'code' : '', 'design/mean']];
+  for (const r of c.rows) {
+    const basis = r.fractile === null ? (r.side === 'favourable' ? '' : ' (mean)') : ` (${Math.round(r.fractile * 100)} %)`;
+    rows.push([
+      r.variable,
+      r.side,
+      `${fmt(r.characteristic, r.variable)}${basis}`,
+      fmt(r.design, r.variable),
+      r.partialFactor === null ? '—' : r.partialFactor.toFixed(3),
+      r.code ? `${r.code.symbol} = ${r.code.value.toFixed(2)}` : '',
+      r.designToMean.toFixed(3),
+    ]);
+  }
+  const rf = c.resistance;
+  rows.push([
+    'resistance θ·capacity',
+    'resistance',
+    formatQuantity(rf.characteristic, 'force', system),
+    formatQuantity(rf.design, 'force', system),
+    rf.partialFactor.toFixed(3),
+    rf.code ? `${rf.code.symbol} = ${rf.code.value.toFixed(2)}` : '',
+    '',
+  ]);
+  return [
+    '',
+    '  characteristic values (EN 1990 4.1.2: resistance side 5 %, variable loads 95 %, permanent loads the mean) and implied partial factors',
+    '  (γ = design/characteristic for loads, characteristic/design for resistances; design/mean is not a partial factor):',
+    textTable(rows, '    '),
+    ...(c.code ? [`    code factors for comparison: ${c.code} (${[...new Set(c.rows.flatMap((r) => (r.code ? [r.code.source] : [])).concat(rf.code ? [rf.code.source] : []))].join('; ')})`] : []),
+  ];
+}
+
+function strengthModelLines(a: Assessment): string[] {
+  if (!a.byStrengthModel) return [];
+  const rows: string[][] = [['strength model', 'β (FORM)', 'model factor mean / CoV', 'from']];
+  for (const m of a.byStrengthModel) {
+    rows.push([
+      `${m.strength}${m.chosen ? ' (chosen)' : ''}`,
+      m.beta === null ? `— (${m.note ?? 'not evaluated'})` : formatBeta(m.beta),
+      `${m.modelFactor.mean.toFixed(2)} / ${m.modelFactor.cov.toFixed(2)}`,
+      m.modelFactor.source === 'default' ? 'default' : 'scenario',
+    ]);
+  }
+  return ['', '  β by strength model (same column; each with its own model factor):', textTable(rows, '    ')];
+}
+
 export function formatAssessment(a: Assessment, system: UnitSystem): string {
   const s = a.scenario;
   const lines: string[] = [];
   lines.push(`stanchion assess: ${s.title}`);
   lines.push(`  ${s.column.frame} column, strength model ${s.strength}; seed ${a.seed}; ${a.model.names.length} random variables`);
   lines.push(`  at the means: capacity ${formatQuantity(a.check.capacity, 'force', system)}, demand ${formatQuantity(a.check.demand, 'force', system)}, utilization ${a.check.utilization.toFixed(3)}, K = ${a.check.effective_length_factor.toFixed(3)}`);
+  lines.push(`  ${modelFactorLine(a)}`);
   lines.push('');
   const rows: string[][] = [['method', 'β', 'pf', 'uncertainty', 'calls']];
   const f = a.form;
@@ -50,6 +108,8 @@ export function formatAssessment(a: Assessment, system: UnitSystem): string {
     dp.push([f.names[i], formatQuantity(a.model.dists[i].mean, kind, system), formatQuantity(f.designPointX[i], kind, system), f.importance[i].toFixed(3)]);
   }
   lines.push(textTable(dp, '    '));
+  lines.push(...characteristicLines(a, system));
+  lines.push(...strengthModelLines(a));
   if (a.sensitivity) {
     lines.push('');
     lines.push('  what drives it (utilization at the 5 % / 95 % quantile of one variable, the rest at their means):');

@@ -11,6 +11,7 @@ import type { ColumnState } from '../mechanics/types.js';
 import type { End, Scalar, Scenario } from '../scenario/types.js';
 import { randomVariables } from '../scenario/variables.js';
 import { restraintRatio } from '../scenario/restraintRatio.js';
+import { resolveStrengthModel, type ModelFactorUsed } from './strengthChoice.js';
 
 /** Where a value comes from: x[index] when random, else the fixed value. */
 interface Slot {
@@ -19,7 +20,12 @@ interface Slot {
 }
 
 export interface ColumnModel {
+  /** the scenario as its strength model sees it (resolveStrengthModel): default model factor in, ignored bow out */
   readonly scenario: Scenario;
+  /** the model factor in use and where it comes from */
+  readonly modelFactorUsed: ModelFactorUsed;
+  /** the bow was random but the strength model ignores it: it is fixed at its mean */
+  readonly bowDropped: boolean;
   /** contract paths of the random variables, in the order of x */
   readonly names: string[];
   readonly dists: Distribution[];
@@ -90,7 +96,9 @@ function correlationMatrix(s: Scenario, names: readonly string[]): number[][] | 
   return R;
 }
 
-export function buildColumnModel(s: Scenario): ColumnModel {
+export function buildColumnModel(given: Scenario): ColumnModel {
+  const resolved = resolveStrengthModel(given);
+  const s = resolved.scenario;
   const vars = randomVariables(s);
   const names = vars.map((v) => v.path);
   const dists = vars.map((v) => makeDistribution(v.spec));
@@ -151,6 +159,8 @@ export function buildColumnModel(s: Scenario): ColumnModel {
 
   return {
     scenario: s,
+    modelFactorUsed: resolved.modelFactor,
+    bowDropped: resolved.bowDropped,
     names,
     dists,
     correlation: correlationMatrix(s, names),

@@ -1,24 +1,30 @@
 import { aiscCapacity } from './aisc360.js';
 import { criticalLoad } from './criticalLoad.js';
-import { EN_IMPERFECTION, enCapacity, type EnCurve } from './en1993.js';
+import { EN_IMPERFECTION, enCapacity } from './en1993.js';
+import { equivalentBowCapacity } from './equivalentBow.js';
 import { firstYieldCapacity } from './firstYield.js';
 import { modeShape } from './modeShape.js';
+import { strengthModelKind } from './strengthModelKind.js';
 import type { CapacityResult, ColumnState, StrengthModel } from './types.js';
 
 /** Capacity from Pcr and c for a strength model (shared by the exact and the fast path). */
 export function capacityFromPcr(model: StrengthModel, A: number, S: number, fy: number, bow: number, Pcr: number, c: number): number {
-  switch (model) {
+  const kind = strengthModelKind(model);
+  if (!kind) throw new RangeError(`unknown strength model '${String(model)}'`);
+  switch (kind.family) {
     case 'first-yield':
       return firstYieldCapacity(A, S, fy, Pcr, bow, c);
     case 'aisc360-e3':
       return aiscCapacity(A, fy, Pcr);
-    default:
-      return enCapacity(EN_IMPERFECTION[model.slice(7) as EnCurve], A, fy, Pcr);
+    case 'en1993':
+      return enCapacity(EN_IMPERFECTION[kind.curve!], A, fy, Pcr);
+    case 'equivalent-bow':
+      return equivalentBowCapacity(EN_IMPERFECTION[kind.curve!], A, S, fy, Pcr, c, kind.usesBow ? bow : 0);
   }
 }
 
 export function isStrengthModel(s: string): s is StrengthModel {
-  return s === 'first-yield' || s === 'aisc360-e3' || (s.startsWith('en1993-') && s.slice(7) in EN_IMPERFECTION);
+  return strengthModelKind(s) !== undefined;
 }
 
 /**

@@ -2,8 +2,10 @@ import { aiscCapacity } from './aisc360.js';
 import { WEIGHT_LENGTH, weightsInto } from './characteristicEquation.js';
 import { criticalPhiFromWeights, swayPhi } from './criticalLoad.js';
 import { EXTREMA_LENGTH, curvatureFactorFromExtrema, modeExtremaInto } from './curvatureFactor.js';
-import { EN_IMPERFECTION, enCapacity, type EnCurve } from './en1993.js';
+import { EN_IMPERFECTION, enCapacity } from './en1993.js';
+import { equivalentBowCapacity } from './equivalentBow.js';
 import { firstYieldCapacity } from './firstYield.js';
+import { strengthModelKind } from './strengthModelKind.js';
 import { buildFixityTable, interpolateFixityTable, type FixityTable } from './fixityTable.js';
 import { modeCoefficientsInto } from './modeCoefficients.js';
 import { ratioFromFixity } from './restraint.js';
@@ -133,9 +135,19 @@ export function makeFastCapacityFromRatio(frame: Frame, model: StrengthModel): F
       return aiscCapacity(A, fy, (phi * phi * E * I) / (L * L));
     };
   }
-  const curve = model.startsWith('en1993-') ? (model.slice(7) as EnCurve) : undefined;
-  const alpha = curve !== undefined ? EN_IMPERFECTION[curve] : undefined;
-  if (alpha === undefined) throw new RangeError(`unknown strength model '${String(model)}'`);
+  const kind = strengthModelKind(model);
+  const alpha = kind?.curve !== undefined ? EN_IMPERFECTION[kind.curve] : undefined;
+  if (!kind || alpha === undefined) throw new RangeError(`unknown strength model '${String(model)}'`);
+  if (kind.family === 'equivalent-bow') {
+    if (frame === 'braced') bracedCurvatureTable();
+    const withBow = kind.usesBow;
+    return (E, fy, A, I, S, L, bow, RA, RB) => {
+      const phi = fastPhi(frame, RA, RB);
+      if (phi === 0) return 0;
+      const Pcr = (phi * phi * E * I) / (L * L);
+      return equivalentBowCapacity(alpha, A, S, fy, Pcr, fastCurvatureFactor(frame, RA, RB, phi), withBow ? bow : 0);
+    };
+  }
   return (E, fy, A, I, _S, L, _bow, RA, RB) => {
     const phi = fastPhi(frame, RA, RB);
     return enCapacity(alpha, A, fy, (phi * phi * E * I) / (L * L));

@@ -12,3 +12,6 @@ export {
 export {
   makeFastCapacity, makeFastCapacityFromRatio, fastPhi, fastCurvatureFactor, fastTable, type FastCapacity,
 } from './fastColumn.js';
+export { en1993EquivalentBow, equivalentBowCapacity } from './equivalentBow.js';
+export { strengthModelKind, strengthUsesBow, type StrengthModelKind } from './strengthModelKind.js';
+export { defaultModelUncertainty, type ModelUncertaintyDefault } from './modelUncertainty.js';

@@ -64,8 +64,19 @@ export type StrengthModel =
   | 'en1993-a'
   | 'en1993-b'
   | 'en1993-c'
-  | 'en1993-d';
+  | 'en1993-d'
+  | 'first-yield-en1993-a0'
+  | 'first-yield-en1993-a'
+  | 'first-yield-en1993-b'
+  | 'first-yield-en1993-c'
+  | 'first-yield-en1993-d'
+  | 'first-yield-en1993-a0-plus-bow'
+  | 'first-yield-en1993-a-plus-bow'
+  | 'first-yield-en1993-b-plus-bow'
+  | 'first-yield-en1993-c-plus-bow'
+  | 'first-yield-en1993-d-plus-bow';
 
+/** The models a scenario may name, in the order the outputs list them. */
 export const STRENGTH_MODELS: readonly StrengthModel[] = [
   'first-yield',
   'aisc360-e3',
@@ -74,6 +85,16 @@ export const STRENGTH_MODELS: readonly StrengthModel[] = [
   'en1993-b',
   'en1993-c',
   'en1993-d',
+  'first-yield-en1993-a0',
+  'first-yield-en1993-a',
+  'first-yield-en1993-b',
+  'first-yield-en1993-c',
+  'first-yield-en1993-d',
+  'first-yield-en1993-a0-plus-bow',
+  'first-yield-en1993-a-plus-bow',
+  'first-yield-en1993-b-plus-bow',
+  'first-yield-en1993-c-plus-bow',
+  'first-yield-en1993-d-plus-bow',
 ];
 
 /** Everything the strength models need (SI). bow = e0, either sign (|e0| is used). */

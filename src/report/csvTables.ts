@@ -46,6 +46,23 @@ export function csvTables(input: ReportInput): Record<string, string> {
     ...t.conditionalBeta.rows.map((r) => ['conditional_beta', '1', r.variable, t.conditionalBeta.baseline, r.low, r.high, Math.abs(r.high - r.low)]),
   ];
   out['tornado.csv'] = toCsv(['quantity', 'unit', 'variable', 'baseline', 'low_at_q05', 'high_at_q95', 'swing'], tornadoRows);
+  if (input.partialFactors.length > 0) {
+    const rows: Cell[][] = input.partialFactors.map((p) => [
+      p.variable, p.side ?? p.role, p.basis, p.note, p.referenceValue, p.designValue, p.factor, p.code?.symbol, p.code?.value, p.designToMean,
+    ]);
+    const rf = input.resistanceFactor;
+    if (rf) rows.push(['resistance', 'resistance', 'characteristic', 'theta x capacity, resistance-side variables at characteristic values', rf.characteristic, rf.design, rf.factor, rf.code?.symbol, rf.code?.value, '']);
+    out['partial-factors.csv'] = toCsv(
+      ['variable', 'side', 'basis', 'characteristic_value_is', 'characteristic_SI', 'design_SI', 'implied_partial_factor', 'code_factor', 'code_value', 'design_to_mean_ratio'],
+      rows,
+    );
+  }
+  if (input.strengthModels && input.strengthModels.length > 0) {
+    out['strength-models.csv'] = toCsv(
+      ['strength', 'beta_form', 'model_factor_mean', 'model_factor_cov', 'model_factor_from', 'chosen', 'note'],
+      input.strengthModels.map((m) => [m.strength, m.beta, m.modelFactorMean, m.modelFactorCov, m.modelFactorSource, m.chosen ? 'yes' : 'no', m.note]),
+    );
+  }
   if (input.restraint) {
     const st = input.restraint;
     out['restraint-curve.csv'] = toCsv(

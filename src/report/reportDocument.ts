@@ -35,7 +35,7 @@ export const SECTION_TITLES = {
   target: 'Reliability against the target',
   sensitivity: 'Sensitivity',
   restraint: 'Restraint justification',
-  partialFactors: 'Implied partial factors',
+  partialFactors: 'Characteristic values and implied partial factors',
   sweep: 'Parameter sweep',
   cautions: 'Cautions',
   reproducibility: 'Reproducibility',

@@ -31,7 +31,17 @@ export type StrengthModelName =
   | 'en1993-a'
   | 'en1993-b'
   | 'en1993-c'
-  | 'en1993-d';
+  | 'en1993-d'
+  | 'first-yield-en1993-a0'
+  | 'first-yield-en1993-a'
+  | 'first-yield-en1993-b'
+  | 'first-yield-en1993-c'
+  | 'first-yield-en1993-d'
+  | 'first-yield-en1993-a0-plus-bow'
+  | 'first-yield-en1993-a-plus-bow'
+  | 'first-yield-en1993-b-plus-bow'
+  | 'first-yield-en1993-c-plus-bow'
+  | 'first-yield-en1993-d-plus-bow';
 
 export interface ReportMeta {
   toolVersion: string; // package version, e.g. '0.1.0'
@@ -226,9 +236,50 @@ export interface PartialFactorRow {
   basis: 'characteristic' | 'mean'; // what referenceValue is
   referenceValue: number; // the characteristic or mean value (SI)
   designValue: number; // the FORM design-point value (SI)
-  /** reference/design when adverse = 'low', design/reference when adverse = 'high' (> 1 means the design value is harsher). */
-  factor: number;
+  /** reference/design when adverse = 'low', design/reference when adverse = 'high' (> 1 means the design value is harsher); null when the variable is favourable at the design point. */
+  factor: number | null;
   note?: string; // e.g. 'characteristic = 5 % fractile'
+  /** where FORM put the variable: resistance side, load side, an action-effect variable (the bow), or favourable */
+  side?: 'resistance' | 'load' | 'action effect' | 'favourable';
+  /** design / mean: how far FORM moved it (not a partial factor) */
+  designToMean?: number;
+  /** the code's factor for comparison, when the strength model names a code */
+  code?: CodeFactorRef;
+}
+
+export interface CodeFactorRef {
+  symbol: string; // 'γ_M1', 'γ_Q', '1/φc'
+  value: number;
+  source: string; // clause
+}
+
+/** β of the same column under each strength model (FORM), each with its model factor. */
+export interface StrengthModelRow {
+  strength: string;
+  beta: number | null; // null: not evaluated (note says why)
+  modelFactorMean: number;
+  modelFactorCov: number;
+  modelFactorSource: 'scenario' | 'default';
+  chosen: boolean;
+  note?: string;
+}
+
+/** The model factor in use and where it comes from. */
+export interface ModelFactorNote {
+  source: 'scenario' | 'default';
+  strength: string;
+  dist: string; // 'fixed' or a distribution name
+  mean: number;
+  cov: number;
+  reference: string;
+}
+
+/** θ·capacity with every resistance-side variable at its characteristic value, against the design point. */
+export interface ResistanceFactorRow {
+  characteristic: number; // N
+  design: number; // N
+  factor: number; // characteristic / design
+  code?: CodeFactorRef;
 }
 
 /** Samples for the histogram; the report never needs more than about 5000 of each. */
@@ -255,6 +306,9 @@ export interface ReportInput {
   sensitivity: SensitivityResults;
   restraint?: RestraintStudy; // absent when no end has a rotational spring
   partialFactors: PartialFactorRow[];
+  resistanceFactor?: ResistanceFactorRow;
+  strengthModels?: StrengthModelRow[];
+  modelFactor?: ModelFactorNote;
   samples?: SamplesSummary; // absent when no sampling method ran
   sweep?: SweepResults;
   /** Specific cautions for this run (the standing disclaimers are always added by the report). */

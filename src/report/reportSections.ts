@@ -25,7 +25,26 @@ const STRENGTH_TEXT: Record<StrengthModelName, string> = {
   'en1993-b': 'χ·A·fy of EN 1993-1-1 clause 6.3.1.2, buckling curve b, no partial factor (the bow is not used)',
   'en1993-c': 'χ·A·fy of EN 1993-1-1 clause 6.3.1.2, buckling curve c, no partial factor (the bow is not used)',
   'en1993-d': 'χ·A·fy of EN 1993-1-1 clause 6.3.1.2, buckling curve d, no partial factor (the bow is not used)',
+  ...equivalentBowTexts(),
 };
+
+/** The first-yield forms with the equivalent bow of EN 1993-1-1 5.3.2(11), with and without the measured bow. */
+function equivalentBowTexts(): Record<Extract<StrengthModelName, `first-yield-en1993-${string}`>, string> {
+  const out: Record<string, string> = {};
+  for (const curve of ['a0', 'a', 'b', 'c', 'd']) {
+    const base = `first yield with the equivalent bow of EN 1993-1-1 5.3.2(11), Eqs. 5.9/5.10 (curve ${curve}, γ_M1 = 1), affine to the restrained buckling mode`;
+    out[`first-yield-en1993-${curve}`] = `${base}; it reproduces χ of curve ${curve} for any restraint (the measured bow is not used)`;
+    out[`first-yield-en1993-${curve}-plus-bow`] = `${base}, with the measured bow added on top (a cautious reading: the equivalent bow already allows for a standard bow)`;
+  }
+  return out as Record<Extract<StrengthModelName, `first-yield-en1993-${string}`>, string>;
+}
+
+function modelFactorText(m: NonNullable<ReportInput['modelFactor']>): string {
+  const what = m.dist === 'fixed' ? `fixed at ${formatNumber(m.mean, 3)}` : `${m.dist}, mean ${formatNumber(m.mean, 3)}, CoV ${formatNumber(m.cov, 3)}`;
+  return m.source === 'default'
+    ? `Model factor θ: ${what}, the default of strength model ${m.strength}, since the scenario gives none (${m.reference}).`
+    : `Model factor θ: ${what}, as given in the scenario.`;
+}
 
 function unitsNote(system: UnitSystem): string {
   return system === 'si'
@@ -158,6 +177,7 @@ function modelSection(input: ReportInput, system: UnitSystem, charts: ChartSpec[
     'End restraint as elastic rotational springs; Pcr is the smallest positive elastic critical load of the restrained column and K = π / (L √(Pcr / E·I)).',
     `Strength (${c.strengthModel}): ${STRENGTH_TEXT[c.strengthModel]}.`,
     'Limit state g = θ × capacity − Σ loads, θ = model_factor; failure when g ≤ 0.',
+    ...(input.modelFactor ? [modelFactorText(input.modelFactor)] : []),
     'Every random variable is mapped to independent standard normals by the Nataf transformation; the sampling methods draw from seeded streams, so a run is reproducible.',
   ];
   const modes = k.modeShapes.map((m) => `${m.mode}: ${formatQuantity(m.criticalLoad, 'force', system, 4)}`).join(', ');
@@ -216,6 +236,7 @@ function targetSection(input: ReportInput): Section {
       kind: 'paragraph',
       text: 'The target is a reference value for the consequence class and reference period stated; which target applies to this structure is for the responsible engineer to decide.',
     },
+    ...strengthModelBlocks(input),
   ]);
 }
 
@@ -276,21 +297,56 @@ function restraintSection(input: ReportInput, system: UnitSystem, charts: ChartS
 }
 
 function partialFactorsSection(input: ReportInput, system: UnitSystem): Section {
+  const code = (c?: { symbol: string; value: number }) => (c ? `${c.symbol} = ${formatNumber(c.value, 3)}` : '');
   const rows = input.partialFactors.map((p) => [
     p.variable,
-    p.role,
+    p.side ?? p.role,
     p.note === undefined ? p.basis : p.note.startsWith(p.basis) ? p.note : `${p.basis} (${p.note})`,
     formatQuantity(p.referenceValue, p.kind, system, 4),
     formatQuantity(p.designValue, p.kind, system, 4),
-    formatNumber(p.factor, 3),
+    p.factor === null ? '—' : formatNumber(p.factor, 3),
+    code(p.code),
+    p.designToMean === undefined ? '' : formatNumber(p.designToMean, 3),
   ]);
+  const rf = input.resistanceFactor;
+  if (rf) {
+    rows.push(['resistance θ × capacity', 'resistance', 'every resistance-side variable and the bow at its characteristic value', formatQuantity(rf.characteristic, 'force', system, 4), formatQuantity(rf.design, 'force', system, 4), formatNumber(rf.factor, 3), code(rf.code), '']);
+  }
+  const sources = [...new Set([...input.partialFactors.flatMap((p) => (p.code ? [p.code.source] : [])), ...(rf?.code ? [rf.code.source] : [])])];
   return section('partialFactors', [
     {
       kind: 'paragraph',
-      text: 'The FORM design point gives the value of each variable at the most likely failure. The implied partial factor is reference ÷ design value where low values are adverse (strengths, stiffnesses, model factor) and design ÷ reference value where high values are adverse (loads, bow). A factor below 1 means the design value is milder than the reference value.',
+      text: 'The FORM design point gives the value of each variable at the most likely failure. Characteristic values follow EN 1990 4.1.2: the 5 % fractile for resistance-side variables, the 95 % fractile for variable loads and the mean for permanent loads; the bow, an action-effect variable rather than a load, takes the fractile on the side its design value went. The implied partial factor is characteristic ÷ design value on the resistance side and design ÷ characteristic value for loads and the bow; a variable whose design value helps (a load below its mean) implies none. The design/mean ratio only says how far FORM moved a variable: it is not a partial factor.',
     },
-    { kind: 'table', head: ['variable', 'role', 'basis', 'reference value', 'design value', 'implied factor'], rows, numeric: [false, false, false, true, true, true] },
+    {
+      kind: 'table',
+      head: ['variable', 'side', 'characteristic value', 'characteristic', 'design value', 'implied partial factor', 'code factor', 'design/mean ratio'],
+      rows,
+      numeric: [false, false, false, true, true, true, false, true],
+    },
+    ...(sources.length > 0 ? [{ kind: 'paragraph' as const, text: `Code factors for comparison: ${sources.join('; ')}. ASCE 7 and AISC 360 apply their factors to nominal values, which are close to, but not defined as, these fractiles.` }] : []),
   ]);
+}
+
+/** β of the same column under each strength model: how much the verdict rests on that choice. */
+function strengthModelBlocks(input: ReportInput): Block[] {
+  const rows = input.strengthModels;
+  if (!rows || rows.length === 0) return [];
+  return [
+    {
+      kind: 'table',
+      caption: 'β (FORM) of the same column under each strength model, each with its own model factor',
+      head: ['strength model', 'β (FORM)', 'model factor mean', 'model factor CoV', 'model factor from'],
+      rows: rows.map((r) => [
+        `${r.strength}${r.chosen ? ' (chosen)' : ''}`,
+        r.beta === null ? `— (${r.note ?? 'not evaluated'})` : formatBeta(r.beta),
+        formatNumber(r.modelFactorMean, 3),
+        formatNumber(r.modelFactorCov, 3),
+        r.modelFactorSource === 'default' ? 'the model\'s default' : 'the scenario',
+      ]),
+      numeric: [false, true, true, true, false],
+    },
+  ];
 }
 
 function sweepSection(input: ReportInput, system: UnitSystem, charts: ChartSpec[]): Section | null {

@@ -55,8 +55,8 @@ export function buildScenario(shape: ScenarioShape, lines: ReadonlyMap<string, n
   const rawBow = c.imperfection?.bow;
   let bow: Scalar;
   if (rawBow === undefined) {
-    if (shape.strength === 'first-yield') {
-      fail(ctx, ['column', 'imperfection', 'bow'], 'is required for strength first-yield: give the bow amplitude of the initial shape, e.g. bow: L/1000');
+    if (shape.strength === 'first-yield' || shape.strength.endsWith('-plus-bow')) {
+      fail(ctx, ['column', 'imperfection', 'bow'], `is required for strength ${shape.strength}: give the bow amplitude of the initial shape, e.g. bow: L/1000`);
     }
     bow = { kind: 'fixed', value: 0 };
   } else {
@@ -94,6 +94,7 @@ export function buildScenario(shape: ScenarioShape, lines: ReadonlyMap<string, n
     column: { length, frame, section, material, ends, bow },
     loads,
     modelFactor,
+    ...(shape.model_factor === undefined ? { modelFactorOmitted: true } : {}),
     strength: shape.strength,
     targetBeta,
     ...(shape.target_source !== undefined ? { targetSource: shape.target_source } : {}),

@@ -10,7 +10,25 @@ import { KINDS, type QuantityKind } from './dimensions.js';
 import { didYouMean } from './nearestName.js';
 
 export const FRAMES = ['braced', 'sway'] as const;
-export const STRENGTH_MODELS = ['first-yield', 'aisc360-e3', 'en1993-a0', 'en1993-a', 'en1993-b', 'en1993-c', 'en1993-d'] as const;
+export const STRENGTH_MODELS = [
+  'first-yield',
+  'aisc360-e3',
+  'en1993-a0',
+  'en1993-a',
+  'en1993-b',
+  'en1993-c',
+  'en1993-d',
+  'first-yield-en1993-a0',
+  'first-yield-en1993-a',
+  'first-yield-en1993-b',
+  'first-yield-en1993-c',
+  'first-yield-en1993-d',
+  'first-yield-en1993-a0-plus-bow',
+  'first-yield-en1993-a-plus-bow',
+  'first-yield-en1993-b-plus-bow',
+  'first-yield-en1993-c-plus-bow',
+  'first-yield-en1993-d-plus-bow',
+] as const;
 export const METHODS = ['form', 'sorm', 'is', 'mc', 'subset'] as const;
 export const DISPLAY_UNITS = ['si', 'us'] as const;
 export const END_TYPES = ['pinned', 'fixed'] as const;

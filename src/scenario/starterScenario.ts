@@ -58,9 +58,10 @@ loads:                               # axial compression, summed; name them as y
   permanent: {dist: normal, mean: 280 kN, cov: 0.08}
   variable: {dist: gumbel, mean: 110 kN, cov: 0.3}
 
-model_factor: {dist: lognormal, mean: 1.0, cov: 0.06}   # capacity model uncertainty (no unit)
+model_factor: {dist: lognormal, mean: 1.0, cov: 0.06}   # capacity model uncertainty (no unit); leave out for the strength model's default
 
 # strength: first-yield | aisc360-e3 | en1993-a0 | en1993-a | en1993-b | en1993-c | en1993-d
+# first-yield-en1993-X (equivalent bow of EN 1993-1-1 5.3.2(11)), first-yield-en1993-X-plus-bow (plus the bow above)
 strength: first-yield
 
 target_beta: 3.8                     # target reliability index

@@ -9,7 +9,24 @@ export type { DisplayUnit } from './quantity.js';
 
 /** Same literals as mechanics/ (docs/interfaces.md). */
 export type Frame = 'braced' | 'sway';
-export type StrengthModel = 'first-yield' | 'aisc360-e3' | 'en1993-a0' | 'en1993-a' | 'en1993-b' | 'en1993-c' | 'en1993-d';
+export type StrengthModel =
+  | 'first-yield'
+  | 'aisc360-e3'
+  | 'en1993-a0'
+  | 'en1993-a'
+  | 'en1993-b'
+  | 'en1993-c'
+  | 'en1993-d'
+  | 'first-yield-en1993-a0'
+  | 'first-yield-en1993-a'
+  | 'first-yield-en1993-b'
+  | 'first-yield-en1993-c'
+  | 'first-yield-en1993-d'
+  | 'first-yield-en1993-a0-plus-bow'
+  | 'first-yield-en1993-a-plus-bow'
+  | 'first-yield-en1993-b-plus-bow'
+  | 'first-yield-en1993-c-plus-bow'
+  | 'first-yield-en1993-d-plus-bow';
 export type Method = 'form' | 'sorm' | 'is' | 'mc' | 'subset';
 
 export type Scalar = { readonly kind: 'fixed'; readonly value: number } | { readonly kind: 'random'; readonly spec: DistSpec };
@@ -73,7 +90,11 @@ export interface Scenario {
   };
   /** In file order. */
   readonly loads: readonly Load[];
+  /** Fixed 1 when the file gives none; then `modelFactorOmitted` is true and limitState/ puts in the strength model's default. */
   readonly modelFactor: Scalar;
+  readonly modelFactorOmitted?: boolean;
+  /** Set by limitState/ once it has put in a strength model's default model factor (which model, and the source). */
+  readonly modelFactorDefault?: { readonly strength: StrengthModel; readonly source: string };
   readonly strength: StrengthModel;
   readonly targetBeta: number;
   readonly targetSource?: string;

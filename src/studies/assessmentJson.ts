@@ -30,6 +30,35 @@ function byName(names: readonly string[], values: readonly number[]): Record<str
   return out;
 }
 
+function modelFactorJson(m: Assessment['modelFactor']): Record<string, unknown> {
+  return { mean: m.mean, cov: m.cov, dist: m.dist, source: m.source, strength: m.strength, reference: m.reference };
+}
+
+/** Characteristic values and implied partial factors beside the design point (keys of reliability.form). */
+function characteristicJson(a: Assessment): Record<string, unknown> {
+  const c = a.characteristic;
+  const characteristic: Record<string, unknown> = {};
+  const partial: Record<string, unknown> = {};
+  const designToMean: Record<string, number> = {};
+  for (const r of c.rows) {
+    characteristic[r.variable] = { value: r.characteristic, side: r.side, fractile: r.fractile, basis: r.basis };
+    partial[r.variable] = { gamma: r.partialFactor, side: r.side, code: r.code };
+    designToMean[r.variable] = r.designToMean;
+  }
+  return {
+    characteristic,
+    partial_factors: partial,
+    resistance_factor: {
+      characteristic: c.resistance.characteristic,
+      design: c.resistance.design,
+      gamma: c.resistance.partialFactor,
+      code: c.resistance.code,
+    },
+    code_factors_from: c.code,
+    design_to_mean_ratio: designToMean,
+  };
+}
+
 export function reliabilityJson(a: Assessment): Record<string, unknown> {
   const r: Record<string, unknown> = {};
   const f = a.form;
@@ -47,6 +76,7 @@ export function reliabilityJson(a: Assessment): Record<string, unknown> {
       multiple_design_points: f.multipleDesignPoints,
       origin_fails: f.originFails,
       reason: f.reason,
+      ...characteristicJson(a),
     };
   }
   if (a.sorm) {
@@ -84,6 +114,18 @@ export function reliabilityJson(a: Assessment): Record<string, unknown> {
       levels: a.subset.levels.length,
       converged: a.subset.converged,
     };
+  }
+  r.model_factor = modelFactorJson(a.modelFactor);
+  if (a.byStrengthModel) {
+    r.by_strength_model = a.byStrengthModel.map((m) => ({
+      strength: m.strength,
+      beta: m.beta,
+      model_factor: modelFactorJson(m.modelFactor),
+      pf: m.pf,
+      converged: m.converged,
+      chosen: m.chosen,
+      note: m.note,
+    }));
   }
   r.verdict = { agree: a.verdict.agree, trust: a.verdict.trust, reason: a.verdict.reason };
   r.governing = a.governing;

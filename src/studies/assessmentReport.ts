@@ -43,12 +43,10 @@ function tornadoRows(rows: { variable: string; low: number; high: number }[]): T
   return rows.map((r) => ({ variable: r.variable, low: r.low, high: r.high }));
 }
 
+/** Characteristic values (EN 1990 4.1.2) and the partial factors they imply, from characteristicValues.ts. */
 function partialFactors(a: Assessment): PartialFactorRow[] {
-  const f = a.form;
-  const out: PartialFactorRow[] = [];
-  f.names.forEach((path, i) => {
-    const mean = a.model.dists[i].mean;
-    const design = f.designPointX[i];
+  return a.characteristic.rows.map((r) => {
+    const path = r.variable;
     const role: PartialFactorRow['role'] = path.startsWith('loads.')
       ? 'load'
       : path === 'model_factor'
@@ -56,12 +54,22 @@ function partialFactors(a: Assessment): PartialFactorRow[] {
         : path === 'column.imperfection.bow'
           ? 'imperfection'
           : 'resistance';
-    const adverse: 'low' | 'high' = f.alpha[i] > 0 ? 'high' : 'low';
-    const factor = adverse === 'low' ? mean / design : design / mean;
-    if (!Number.isFinite(factor)) return;
-    out.push({ variable: path, kind: quantityKindOf(path), role, adverse, basis: 'mean', referenceValue: mean, designValue: design, factor });
+    const adverse: 'low' | 'high' = r.side === 'resistance' || (r.side === 'favourable' && r.design < r.mean) ? 'low' : 'high';
+    return {
+      variable: path,
+      kind: quantityKindOf(path),
+      role,
+      adverse,
+      basis: r.characteristic === null ? 'mean' : 'characteristic',
+      referenceValue: r.characteristic ?? r.mean,
+      designValue: r.design,
+      factor: r.partialFactor,
+      note: r.basis,
+      side: r.side,
+      designToMean: r.designToMean,
+      code: r.code,
+    };
   });
-  return out;
 }
 
 export function assessmentReportInput(a: Assessment, meta: RunMeta): ReportInput {
@@ -213,6 +221,22 @@ export function assessmentReportInput(a: Assessment, meta: RunMeta): ReportInput
     sensitivity,
     restraint,
     partialFactors: partialFactors(a),
+    resistanceFactor: {
+      characteristic: a.characteristic.resistance.characteristic,
+      design: a.characteristic.resistance.design,
+      factor: a.characteristic.resistance.partialFactor,
+      code: a.characteristic.resistance.code,
+    },
+    strengthModels: a.byStrengthModel?.map((m) => ({
+      strength: m.strength,
+      beta: m.beta,
+      modelFactorMean: m.modelFactor.mean,
+      modelFactorCov: m.modelFactor.cov,
+      modelFactorSource: m.modelFactor.source,
+      chosen: m.chosen,
+      note: m.note,
+    })),
+    modelFactor: { ...a.modelFactor },
     samples: {
       resistance: a.samples.resistance,
       demand: a.samples.demand,

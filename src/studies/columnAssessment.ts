@@ -26,6 +26,9 @@ import type { DistSpec } from '../probability/distribution.js';
 import { scenarioForm } from './columnForm.js';
 import type { UnitSystem } from '../report/displayUnits.js';
 import { columnRestraint, studiedEnds, type ColumnRestraintResult, type EndChoice } from './columnRestraint.js';
+import { BOW_PATH, resolveStrengthModel, type ModelFactorUsed } from '../limitState/strengthChoice.js';
+import { betaByStrengthModel, type StrengthModelBeta } from './strengthComparison.js';
+import { characteristicValues, type CharacteristicSummary } from './characteristicValues.js';
 
 export const DEFAULT_METHODS: readonly Method[] = ['form', 'sorm', 'is', 'mc'];
 export const DEFAULT_SEED = 1;
@@ -90,6 +93,12 @@ export interface Assessment {
   samples: SamplesSummary;
   warnings: string[];
   interrupted: boolean;
+  /** the model factor in use and where it comes from */
+  modelFactor: ModelFactorUsed;
+  /** FORM β under each strength model (absent with reliabilityOnly) */
+  byStrengthModel?: StrengthModelBeta[];
+  /** characteristic values and implied partial factors at the FORM design point */
+  characteristic: CharacteristicSummary;
 }
 
 function momentsOf(model: ColumnModel): Moments[] {
@@ -173,7 +182,10 @@ function governingEstimate(a: Pick<Assessment, 'form' | 'sorm' | 'is' | 'mc' | '
   return { method: 'form' as Method, beta: a.form.beta, pf: a.form.pf };
 }
 
-export async function assessColumn(s: Scenario, opts: AssessOptions = {}): Promise<Assessment> {
+export async function assessColumn(given: Scenario, opts: AssessOptions = {}): Promise<Assessment> {
+  // the scenario as its strength model sees it; `given` is kept for the comparison of models
+  const resolved = resolveStrengthModel(given);
+  const s = resolved.scenario;
   const model = buildColumnModel(s);
   if (model.names.length === 0) {
     throw new InputError('scenario', 'no value is random: give at least one {dist: ...} so that there is a probability to compute');
@@ -188,6 +200,9 @@ export async function assessColumn(s: Scenario, opts: AssessOptions = {}): Promi
   const problem = problemFromModel(model);
   const recipe = columnRecipe(s);
   const warnings: string[] = [];
+  if (resolved.bowDropped) {
+    warnings.push(`${BOW_PATH}: strength model ${s.strength} does not use the bow, so it was taken out of the random variables (fixed at its mean; no effect on β)`);
+  }
   let interrupted = false;
 
   const formResult = form(problem);
@@ -243,9 +258,13 @@ export async function assessColumn(s: Scenario, opts: AssessOptions = {}): Promi
     sensitivity = sensitivityStudy(s, model, formResult.beta, seed);
     if (studiedEnds(s, opts.end).length > 0) restraint = opts.restraint ?? columnRestraint(s, { end: opts.end, units: opts.units });
   }
+  const byStrengthModel = opts.reliabilityOnly || interrupted ? undefined : betaByStrengthModel(given, formResult);
   return {
     scenario: s,
     model,
+    modelFactor: model.modelFactorUsed,
+    byStrengthModel,
+    characteristic: characteristicValues(model, formResult),
     check,
     methods,
     seed,

@@ -28,6 +28,14 @@ describe('stanchion assess (end to end)', () => {
     expect(doc.meta.seed).toBe(3);
     expect(doc.meta.scenario_sha256).toMatch(/^[0-9a-f]{64}$/);
     expect(doc.restraint.required.bottom).toBeGreaterThan(0);
+    // CONTRACT.md §5: reliability.by_strength_model [{strength, beta, model_factor: {mean, cov}}]
+    const rows = doc.reliability.by_strength_model as { strength: string; beta: number; model_factor: { mean: number; cov: number } }[];
+    expect(rows.map((m) => m.strength)).toContain('first-yield');
+    for (const m of rows) expect(Object.keys(m)).toEqual(expect.arrayContaining(['strength', 'beta', 'model_factor']));
+    expect(rows.find((m) => m.strength === 'first-yield')!.beta).toBe(f.beta);
+    expect(doc.reliability.model_factor.source).toBe('scenario');
+    expect(f.characteristic['loads.imposed'].fractile).toBe(0.95); // EN 1990 4.1.2
+    expect(f.partial_factors['loads.imposed'].gamma).toBeGreaterThan(1);
   });
 
   it('the same seed gives the same numbers with 1 and 2 workers', () => {

@@ -318,6 +318,11 @@ export function demoReportInput(): ReportInput {
       { variable: 'loads.imposed', kind: 'force', role: 'load', adverse: 'high', basis: 'mean', referenceValue: 240e3, designValue: 344.9e3, factor: 344.9 / 240 },
       { variable: 'model_factor', kind: 'dimensionless', role: 'model', adverse: 'low', basis: 'mean', referenceValue: 1.0, designValue: 0.96, factor: 1 / 0.96 },
     ],
+    strengthModels: [
+      { strength: 'first-yield', beta: 3.91, modelFactorMean: 1, modelFactorCov: 0.1, modelFactorSource: 'default', chosen: true },
+      { strength: 'en1993-b', beta: 3.4, modelFactorMean: 1.1, modelFactorCov: 0.07, modelFactorSource: 'default', chosen: false },
+    ],
+    modelFactor: { source: 'default', strength: 'first-yield', dist: 'lognormal', mean: 1, cov: 0.1, reference: 'an invented reference for the fixture' },
     samples: { ...samples, totalSamples: 1_000_000, designPoint: { resistance: 1.1858e6, demand: 1.1858e6 } },
     sweep: demoSweep1D(),
     cautions: [

@@ -86,6 +86,20 @@ describe('report document', () => {
     expect(t).toContain('no restraint study');
   });
 
+  // common practice: a partial factor is only comparable to γ_M, γ_G, γ_Q against characteristic values; the mean-based ratio is named apart
+  it('shows β by strength model, the model factor used, and characteristic-based partial factors', () => {
+    const d = doc(demoReportInput());
+    const target = sectionText(d, 'target');
+    expect(target).toContain('first-yield (chosen)');
+    expect(target).toContain('en1993-b');
+    expect(sectionText(d, 'model')).toContain('the default of strength model first-yield');
+    const pf = sectionText(d, 'partialFactors');
+    expect(pf).toContain('implied partial factor');
+    expect(pf).toContain('design/mean ratio');
+    expect(pf).toContain('EN 1990 4.1.2');
+    expect(csvTables(demoReportInput())['strength-models.csv'].split('\n')[1]).toBe('first-yield,3.91,1,0.1,default,yes,');
+  });
+
   it('renders compact Markdown with linked PNG charts', () => {
     const md = renderMarkdown(doc(demoReportInput()));
     expect(md).toContain('![Column sketch](charts/column-sketch.png)');

@@ -24,6 +24,8 @@ const EXPECTED = [
   'tornado.csv',
   'restraint-curve.csv',
   'sweep.csv',
+  'partial-factors.csv',
+  'strength-models.csv',
   ...['column-sketch', 'mode-shapes', 'samples-histogram', 'mc-convergence', 'tornado-utilization', 'tornado-capacity', 'conditional-beta', 'importance', 'restraint-curve', 'sweep'].flatMap((n) => [
     `charts/${n}.svg`,
     `charts/${n}.png`,

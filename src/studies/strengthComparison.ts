@@ -1,0 +1,44 @@
+/**
+ * β of the same column under each strength model, each with its own default model uncertainty
+ * (or the scenario's model_factor when it gives one), at FORM level: how much the verdict rests on
+ * the choice of strength model.
+ */
+import { strengthUsesBow } from '../mechanics/strengthModelKind.js';
+import { resolveStrengthModel, type ModelFactorUsed } from '../limitState/strengthChoice.js';
+import type { FormResult } from '../reliability/types.js';
+import type { Scenario, StrengthModel } from '../scenario/types.js';
+import { scenarioForm } from './columnForm.js';
+
+/** The models every assessment compares (the equivalent-bow forms repeat their curve's β; they are added only when chosen). */
+export const COMPARED_STRENGTH_MODELS: readonly StrengthModel[] = ['first-yield', 'aisc360-e3', 'en1993-a0', 'en1993-a', 'en1993-b', 'en1993-c', 'en1993-d'];
+
+export interface StrengthModelBeta {
+  strength: StrengthModel;
+  /** FORM β; null when the model cannot be evaluated (see note) */
+  beta: number | null;
+  pf: number | null;
+  converged: boolean;
+  modelFactor: ModelFactorUsed;
+  /** the scenario's own strength model */
+  chosen: boolean;
+  note?: string;
+}
+
+/**
+ * `given` is the scenario as read (before resolveStrengthModel), so that each model receives its
+ * own default model factor and the bow where it uses one. `chosenForm` is the assessment's own FORM
+ * result, reused for the chosen model so that the table and the verdict show the same β.
+ */
+export function betaByStrengthModel(given: Scenario, chosenForm: FormResult): StrengthModelBeta[] {
+  const models = COMPARED_STRENGTH_MODELS.includes(given.strength) ? COMPARED_STRENGTH_MODELS : [...COMPARED_STRENGTH_MODELS, given.strength];
+  const noBow = given.column.bow.kind === 'fixed' && given.column.bow.value === 0;
+  return models.map((strength) => {
+    const resolved = resolveStrengthModel(given, strength);
+    const chosen = strength === given.strength;
+    if (strengthUsesBow(strength) && noBow) {
+      return { strength, beta: null, pf: null, converged: false, modelFactor: resolved.modelFactor, chosen, note: 'needs a bow; the scenario gives none' };
+    }
+    const r = chosen ? chosenForm : scenarioForm(resolved.scenario);
+    return { strength, beta: r.beta, pf: r.pf, converged: r.converged, modelFactor: resolved.modelFactor, chosen };
+  });
+}

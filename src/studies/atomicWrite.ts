@@ -1,17 +1,50 @@
 /** Write a file so that a crash leaves either the old file or the whole new one: temp, fsync, rename. */
-import { closeSync, fsyncSync, mkdirSync, openSync, renameSync, writeSync } from 'node:fs';
+import { closeSync, fsyncSync, mkdirSync, openSync, renameSync, rmSync, writeSync } from 'node:fs';
 import { basename, dirname, join } from 'node:path';
 
 export function writeFileAtomic(file: string, content: string): void {
+  writeFileAtomicStreamed(file, (write) => write(content));
+}
+
+const FLUSH_AT = 1 << 20;
+
+/**
+ * The same for content produced piece by piece: `produce` calls `write` as often as it likes;
+ * pieces are buffered up to 1 MB, so a file of gigabytes never sits in memory. If `produce`
+ * throws, the temporary file is removed and the old file is left as it was.
+ */
+export function writeFileAtomicStreamed(file: string, produce: (write: (piece: string) => void) => void): void {
   const dir = dirname(file);
   mkdirSync(dir, { recursive: true });
   const temp = join(dir, `.${basename(file)}.${process.pid}.tmp`);
   const fd = openSync(temp, 'w');
+  let renamed = false;
   try {
-    writeSync(fd, content);
+    let pending: string[] = [];
+    let size = 0;
+    const flush = (): void => {
+      if (pending.length > 0) writeSync(fd, pending.join(''));
+      pending = [];
+      size = 0;
+    };
+    produce((piece) => {
+      pending.push(piece);
+      size += piece.length;
+      if (size >= FLUSH_AT) flush();
+    });
+    flush();
     fsyncSync(fd);
-  } finally {
     closeSync(fd);
+    renameSync(temp, file);
+    renamed = true;
+  } finally {
+    if (!renamed) {
+      try {
+        closeSync(fd);
+      } catch {
+        // already closed
+      }
+      rmSync(temp, { force: true });
+    }
   }
-  renameSync(temp, file);
 }

@@ -7,6 +7,7 @@ import { fileURLToPath } from 'node:url';
 import { dirname, join } from 'node:path';
 import { runMechanicsBench } from './mechanicsBench.js';
 import { runReliabilityBench } from './reliabilityBench.js';
+import { runSweepBench } from './sweepBench.js';
 import { columnRecipe } from '../src/limitState/columnRecipe.js';
 import { loadScenario } from '../src/scenario/loadScenario.js';
 
@@ -19,6 +20,12 @@ function recipeFor(file: string) {
 
 async function main(): Promise<void> {
   console.log(`stanchion bench — node ${process.version}, ${new Date().toISOString()}`);
+  if (process.argv[2] === 'sweep') {
+    // `node dist/bench/run.js sweep [CASES]`: memory of a large sweep only (default 1e6 cases)
+    console.log('\n## sweep memory (synthetic cases, grid)');
+    for (const line of await runSweepBench(Number(process.argv[3] ?? 1_000_000))) console.log(line);
+    return;
+  }
   console.log('\n## mechanics (critical-load solves per second)');
   for (const line of await runMechanicsBench()) console.log(line);
   console.log('\n## reliability (column limit state: scenarios/braced-base-plate.yaml; rare event: scenarios/timber-store-post.yaml)');

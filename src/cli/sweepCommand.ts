@@ -10,7 +10,8 @@
  * written.
  */
 import { createHash } from 'node:crypto';
-import { existsSync, readdirSync, readFileSync, rmSync, statSync } from 'node:fs';
+import { closeSync, existsSync, openSync, readdirSync, readFileSync, readSync, rmSync, statSync } from 'node:fs';
+import { availableParallelism } from 'node:os';
 import { basename, join, relative } from 'node:path';
 import { Command, InvalidArgumentError, Option } from 'commander';
 import YAML from 'yaml';
@@ -19,13 +20,15 @@ import type { Method } from '../scenario/types.js';
 import { buildColumnModel } from '../limitState/columnModel.js';
 import { checkSweepPaths, parseSweepBase, scenarioWithValues, type SweepBase } from '../studies/applySweepValues.js';
 import { columnCaseRecipe, columnCaseRunner, SWEEP_DEFAULT_METHODS, type ColumnCaseArgs } from '../studies/columnCaseRunner.js';
-import { mergeSweep } from '../studies/mergeSweep.js';
+import { checkSweepCases } from '../studies/checkSweepCases.js';
+import { mergeSweep, mergeSweepOf } from '../studies/mergeSweep.js';
+import { pathInputError } from '../studies/pathErrors.js';
 import { runSweep, type RunSweepResult } from '../studies/runSweep.js';
-import { buildCaseTable } from '../studies/sweepDesign.js';
+import { axisLength, axisValue, buildCaseTable, MAX_SWEEP_CASES } from '../studies/sweepDesign.js';
 import { parseSweepFile } from '../studies/sweepFile.js';
 import { sweepFingerprint } from '../studies/sweepFingerprint.js';
-import { journalPath, readJournal, type JournalContent } from '../studies/sweepJournal.js';
-import { sweepJson, writeSweepOutputs } from '../studies/sweepOutput.js';
+import { journalPath, readJournalHeader, type JournalHeader, type StoredDefinition } from '../studies/sweepJournal.js';
+import { sweepJsonEntry, writeSweepOutputs } from '../studies/sweepOutput.js';
 import { writeSweepReport } from '../studies/sweepReport.js';
 import { checkOutFolder } from '../report/outputFolder.js';
 import { toolVersion } from './version.js';
@@ -34,6 +37,7 @@ import type { CaseTable, Shard, SweepDefinition, SweepRecord } from '../studies/
 import { parseVaryOption } from '../studies/varyOption.js';
 import { parseMethods, parseNonNegativeInteger, parsePositiveInteger, parseShard } from './optionParsers.js';
 import { readScenarioText, readTextFileBounded } from './readScenarioText.js';
+import { checkFolderTarget } from './outputFolder.js';
 import { CAUTION } from './textTable.js';
 
 export interface SweepOptions {
@@ -61,6 +65,10 @@ export interface MergeOptions {
 const CSV_NAME = 'sweep.csv';
 const JSON_NAME = 'sweep.json';
 const METHOD_NAMES: readonly string[] = ['form', 'sorm', 'is', 'mc', 'subset'];
+/** --json lists the results inline up to this many cases; beyond, they are in sweep.json only. */
+export const INLINE_RESULTS_LIMIT = 10_000;
+/** The report lists and charts every case: beyond this many it is not written. */
+export const REPORT_CASES_LIMIT = 5_000;
 
 /** Everything a sweep needs, read and checked. */
 interface SweepPlan {
@@ -157,21 +165,28 @@ export function planSweep(file: string, opts: SweepOptions): SweepPlan {
   return plan;
 }
 
-/** Paths against the scenario; the first and last case in full (the corners of a grid). */
+/** Paths against the scenario, then the cases (all, or what they are made of: checkSweepCases). */
 function checkCases(base: SweepBase, plan: SweepPlan): void {
   checkSweepPaths(base, plan.table.varied, plan.fieldOf);
-  const cases = plan.table.cases;
-  for (const c of cases.length > 1 ? [cases[0], cases[cases.length - 1]] : cases) {
-    const set = (): string => Object.entries(c.values).map(([p, v]) => `${p} = ${v}`).join(', ');
+  checkSweepCases(plan.table, plan.def, (values, index) => {
+    const where = `${index === null ? 'sweep values' : `sweep case ${index}`}: ${Object.entries(values).map(([p, v]) => `${p} = ${v}`).join(', ')}`;
     try {
-      buildColumnModel(scenarioWithValues(base, c.values, plan.fieldOf));
+      buildColumnModel(scenarioWithValues(base, values, plan.fieldOf));
     } catch (err) {
-      if (err instanceof InputError) throw new InputError(err.field, `${err.message} (sweep case ${c.index}: ${set()})`, err.line);
+      if (err instanceof InputError) throw new InputError(err.field, `${err.message} (${where})`, err.line);
       // a distribution the values make impossible (e.g. a negative cov)
-      if (err instanceof Error && err.name === 'DistributionError') throw new InputError(`sweep case ${c.index}`, `${err.message} (${set()})`);
+      if (err instanceof Error && err.name === 'DistributionError') throw new InputError(index === null ? 'sweep values' : `sweep case ${index}`, `${err.message} (${where})`);
       throw err;
     }
-  }
+  });
+}
+
+/** What the journal keeps of the definition (no file names: they differ between machines). */
+function storedDefinition(def: SweepDefinition): StoredDefinition {
+  const stored: StoredDefinition = { design: def.design, seed: def.seed, vary: def.vary };
+  if (def.cases !== undefined && def.design === 'lhs') stored.cases = def.cases;
+  if (def.list !== undefined) stored.list = def.list;
+  return stored;
 }
 
 /** The fingerprint's extra identity: whatever changes a case's numbers besides the case table. */
@@ -194,9 +209,16 @@ function defaultOut(file: string): string {
 function fingerprintOfOutputs(outDir: string): string | null {
   const file = join(outDir, JSON_NAME);
   if (!existsSync(file)) return null;
+  // the fingerprint is near the top: read 4 kB, not a file that may hold millions of cases
   try {
-    const doc = JSON.parse(readFileSync(file, 'utf8')) as { sweep?: { fingerprint?: unknown } };
-    return typeof doc.sweep?.fingerprint === 'string' ? doc.sweep.fingerprint : 'unknown';
+    const fd = openSync(file, 'r');
+    try {
+      const head = Buffer.alloc(4096);
+      const text = head.toString('utf8', 0, readSync(fd, head, 0, head.length, 0));
+      return /^\{\s*"sweep":\s*\{\s*"fingerprint":\s*"([0-9a-f]+)"/.exec(text)?.[1] ?? 'unknown';
+    } finally {
+      closeSync(fd);
+    }
   } catch {
     return 'unknown';
   }
@@ -216,7 +238,7 @@ function staleJournal(stateDir: string, shard: Shard, fingerprint: string, force
   if (!existsSync(file)) return false;
   let found: string;
   try {
-    found = readJournal(file).header.fingerprint;
+    found = readJournalHeader(file).fingerprint;
   } catch {
     return false; // damaged or empty: SweepJournal.open says what is wrong
   }
@@ -247,8 +269,10 @@ function progressReporter(total: number, alreadyDone: number): (finished: number
   };
 }
 
-function resultsJson(table: SweepTable): unknown[] {
-  return (JSON.parse(sweepJson(table)) as { sweep: { cases: unknown[] } }).sweep.cases;
+/** The results for --json: inline up to INLINE_RESULTS_LIMIT cases, else null (read sweep.json). */
+function resultsJson(table: SweepTable): unknown[] | null {
+  if (table.finished > INLINE_RESULTS_LIMIT) return null;
+  return [...table.rows()].map((row) => sweepJsonEntry(table, row));
 }
 
 function describeValues(record: SweepRecord, varied: string[]): string {
@@ -266,7 +290,7 @@ function weakestCase(table: SweepTable): string | null {
   const key = table.columns.find((c) => c.startsWith('beta_'));
   if (!key) return null;
   let worst: SweepRecord | null = null;
-  for (const row of table.rows) {
+  for (const row of table.rows()) {
     const beta = resultNumber(row.result[key]);
     if (!Number.isNaN(beta) && (worst === null || beta < resultNumber(worst.result[key]))) worst = row;
   }
@@ -276,8 +300,21 @@ function weakestCase(table: SweepTable): string | null {
   return `lowest ${key.slice(5).toUpperCase()} β = ${shown} in case ${worst.case} (${describeValues(worst, table.varied)})`;
 }
 
+function distinctValues(plan: SweepPlan, path: string): number {
+  const { def, table } = plan;
+  if (def.design === 'lhs') return table.count;
+  const axis = def.vary.find((a) => a.path === path);
+  if (def.design === 'grid' && axis) {
+    const n = axisLength(axis);
+    return n > 100_000 ? n : new Set(Array.from({ length: n }, (_, k) => String(axisValue(axis, k)))).size;
+  }
+  const seen = new Set<string>();
+  for (let k = 0; k < table.count; k++) seen.add(String(table.valuesAt(k)[path]));
+  return seen.size;
+}
+
 function axesText(plan: SweepPlan): string {
-  const counts = plan.table.varied.map((p) => `${p} (${new Set(plan.table.cases.map((c) => String(c.values[p]))).size} values)`);
+  const counts = plan.table.varied.map((p) => `${p} (${distinctValues(plan, p)} values)`);
   const kind = plan.def.design === 'grid' ? 'grid over' : plan.def.design === 'lhs' ? 'Latin hypercube over' : 'listed cases of';
   return `${kind} ${counts.join(' × ')}`;
 }
@@ -286,12 +323,12 @@ function humanSummary(plan: SweepPlan, run: RunSweepResult, table: SweepTable, w
   const lines: string[] = [];
   const from = plan.fromSweepFile ? `${plan.file} on ${plan.scenarioFile}` : plan.file;
   lines.push(`stanchion sweep: ${from}`);
-  lines.push(`  ${plan.table.cases.length} cases, ${axesText(plan)}; methods ${plan.methods.join(', ')}; seed ${plan.def.seed}`);
+  lines.push(`  ${plan.table.count} cases, ${axesText(plan)}; methods ${plan.methods.join(', ')}; seed ${plan.def.seed}`);
   const part = shard.count > 1 ? `shard ${shard.index}/${shard.count} (${run.shardCases} case${run.shardCases === 1 ? '' : 's'}): ` : '';
   lines.push(`  ${part}ran ${run.ran}, already finished ${run.skipped}, failed ${run.errors}; ${seconds.toFixed(1)} s with ${workers} worker${workers > 1 ? 's' : ''}`);
   const weakest = weakestCase(table);
   if (weakest && shard.count === 1) lines.push(`  ${weakest}`);
-  if (table.hasErrors) lines.push(`  ${table.rows.filter((r) => r.error !== undefined).length} case(s) failed: see the error column`);
+  if (table.hasErrors) lines.push(`  ${table.failed} case(s) failed: see the error column`);
   if (where.csv && where.json) {
     lines.push(`  results  ${where.csv}`);
     lines.push(`           ${where.json}`);
@@ -303,14 +340,24 @@ function humanSummary(plan: SweepPlan, run: RunSweepResult, table: SweepTable, w
   return `${lines.join('\n')}\n`;
 }
 
+/** --workers above the cores available only adds contention: cap it, and say so. */
+export function cappedWorkers(asked: number, cores: number = availableParallelism()): number {
+  if (asked <= cores) return asked;
+  process.stderr.write(`stanchion: --workers ${asked} capped at ${cores}, the number of cores available\n`);
+  return cores;
+}
+
 export async function runSweepCommand(file: string, opts: SweepOptions): Promise<void> {
   const plan = planSweep(file, opts);
   const shard = opts.shard ?? { index: 0, count: 1 };
   const out = opts.out ?? defaultOut(file);
   const stateDir = opts.state ?? join(out, '.state');
+  const writesOutputs = shard.count === 1;
+  if (writesOutputs) checkFolderTarget(out, '--out');
+  checkFolderTarget(stateDir, opts.state === undefined ? '--out' : '--state');
+  const workers = cappedWorkers(opts.workers);
   const identity = sweepIdentity(plan);
   const fingerprint = sweepFingerprint(plan.table, identity);
-  const writesOutputs = shard.count === 1;
   if (writesOutputs) guardOutputs(out, fingerprint, opts.force);
   // OUT/report is replaced only when stanchion wrote it: refuse anything else before a case runs
   if (writesOutputs) checkOutFolder(join(out, 'report'), { force: true, inputFiles: sweepInputFiles(file, plan) });
@@ -323,24 +370,34 @@ export async function runSweepCommand(file: string, opts: SweepOptions): Promise
   let progress: ((finished: number) => void) | null = null;
   const run = await runSweep({
     table: plan.table,
-    runCase: opts.workers > 1 ? columnCaseRecipe(args) : columnCaseRunner(args),
-    workers: opts.workers,
+    runCase: workers > 1 ? columnCaseRecipe(args) : columnCaseRunner(args),
+    workers,
     stateDir,
     shard,
     identity,
+    fingerprint,
+    definition: storedDefinition(plan.def),
     onCaseDone: (_record, finished, total) => {
       progress ??= progressReporter(total, finished - 1);
       progress(finished);
     },
   });
   const seconds = (performance.now() - started) / 1000;
-  const table = mergeSweep(run.journal);
+  // every journal row is checked against this sweep's cases before any output is written
+  const table = mergeSweepOf(plan.table, run.journal);
   const csv = writesOutputs ? join(out, CSV_NAME) : null;
   const json = writesOutputs ? join(out, JSON_NAME) : null;
-  if (csv && json) writeSweepOutputs(table, { csv, json });
+  if (csv && json) {
+    try {
+      writeSweepOutputs(table, { csv, json });
+    } catch (err) {
+      throw pathInputError(err, '--out', out);
+    }
+  }
   // the readable report of the whole sweep, regenerated from the journal at every complete run
   let report: string | null = null;
-  if (writesOutputs && table.missing.length === 0 && table.rows.length > 0) {
+  const complete = writesOutputs && table.missingCount === 0 && table.finished > 0;
+  if (complete && table.finished <= REPORT_CASES_LIMIT) {
     const written = await writeSweepReport({
       scenarioText: plan.scenarioText,
       scenarioFile: plan.scenarioFile,
@@ -352,12 +409,14 @@ export async function runSweepCommand(file: string, opts: SweepOptions): Promise
       meta: { version: toolVersion(), date: new Date().toISOString(), command: ['stanchion', ...process.argv.slice(2)].join(' ') },
     });
     report = join(written.dir, 'report.html');
+  } else if (complete) {
+    process.stderr.write(`stanchion: no report for more than ${REPORT_CASES_LIMIT} cases (it would list every case); the results are in ${csv}\n`);
   }
   if (run.errors > 0) process.stderr.write(`stanchion: ${run.errors} case(s) failed; their messages are in the error column\n`);
   if (opts.json) {
     const doc = {
       sweep: {
-        cases: plan.table.cases.length,
+        cases: plan.table.count,
         ran: run.ran,
         skipped: run.skipped,
         failed: run.errors,
@@ -373,6 +432,7 @@ export async function runSweepCommand(file: string, opts: SweepOptions): Promise
         design: plan.def.design,
         seed: plan.def.seed,
         methods: plan.methods,
+        workers,
         seconds,
         results: resultsJson(table),
       },
@@ -380,7 +440,7 @@ export async function runSweepCommand(file: string, opts: SweepOptions): Promise
     process.stdout.write(`${JSON.stringify(doc, null, 2)}\n`);
     return;
   }
-  process.stdout.write(humanSummary(plan, run, table, { csv, json, stateDir, out }, shard, seconds, opts.workers));
+  process.stdout.write(humanSummary(plan, run, table, { csv, json, stateDir, out }, shard, seconds, workers));
   if (report) process.stderr.write(`stanchion: sweep report written to ${report}\n`);
 }
 
@@ -389,46 +449,70 @@ function journalFiles(paths: string[]): string[] {
   const files: string[] = [];
   for (const p of paths) {
     if (!existsSync(p)) throw new InputError('STATE_DIR', `${p}: no such folder`);
-    if (statSync(p).isDirectory()) {
-      const found = readdirSync(p).filter((n) => /^journal-\d+-of-\d+\.jsonl$/.test(n)).sort();
-      if (found.length === 0) throw new InputError('STATE_DIR', `${p} holds no sweep journal`);
-      files.push(...found.map((n) => join(p, n)));
-    } else {
-      files.push(p);
+    try {
+      if (statSync(p).isDirectory()) {
+        const found = readdirSync(p).filter((n) => /^journal-\d+-of-\d+\.jsonl$/.test(n)).sort();
+        if (found.length === 0) throw new InputError('STATE_DIR', `${p} holds no sweep journal`);
+        files.push(...found.map((n) => join(p, n)));
+      } else {
+        readFileHead(p);
+        files.push(p);
+      }
+    } catch (err) {
+      if (err instanceof InputError) throw err;
+      throw new InputError('STATE_DIR', `${p}: cannot be read`);
     }
   }
   return [...new Set(files)];
 }
 
-function readJournalChecked(file: string): JournalContent {
+/** Opens the file for reading (an unreadable journal fails here, before anything is written). */
+function readFileHead(file: string): void {
+  closeSync(openSync(file, 'r'));
+}
+
+function readHeaderChecked(file: string): JournalHeader {
   try {
-    return readJournal(file);
+    return readJournalHeader(file);
   } catch (err) {
-    throw new InputError('STATE_DIR', err instanceof Error ? err.message : String(err));
+    if (err instanceof InputError) throw err;
+    throw new InputError('STATE_DIR', `${file}: cannot be read`);
   }
 }
 
 export function runMergeCommand(paths: string[], opts: MergeOptions): void {
   const files = journalFiles(paths);
-  const journals = files.map(readJournalChecked);
-  const fingerprint = journals[0].header.fingerprint;
-  const stranger = journals.findIndex((j) => j.header.fingerprint !== fingerprint);
+  const headers = files.map(readHeaderChecked);
+  const fingerprint = headers[0].fingerprint;
+  const stranger = headers.findIndex((h) => h.fingerprint !== fingerprint);
   if (stranger >= 0) throw new InputError('STATE_DIR', `${files[stranger]} belongs to a different sweep than ${files[0]}`);
+  checkFolderTarget(opts.out, '--out');
   guardOutputs(opts.out, fingerprint, opts.force);
-  const table = mergeSweep(...files);
+  // every line of every journal is checked here, before anything is written
+  let table: SweepTable;
+  try {
+    table = mergeSweep(...files);
+  } catch (err) {
+    throw pathInputError(err, 'STATE_DIR', paths.join(' '));
+  }
   const csv = join(opts.out, CSV_NAME);
   const json = join(opts.out, JSON_NAME);
-  writeSweepOutputs(table, { csv, json });
-  if (table.missing.length > 0) {
-    process.stderr.write(`stanchion: warning: ${table.missing.length} of ${journals[0].header.cases} cases have no result yet (a shard not run or not finished); sweep.json lists them under "missing"\n`);
+  try {
+    writeSweepOutputs(table, { csv, json });
+  } catch (err) {
+    throw pathInputError(err, '--out', opts.out);
+  }
+  if (table.missingCount > 0) {
+    process.stderr.write(`stanchion: warning: ${table.missingCount} of ${table.cases} cases have no result yet (a shard not run or not finished); sweep.json lists them under "missing"\n`);
   }
   if (opts.json) {
-    const doc = { merge: { journals: files, cases: journals[0].header.cases, finished: table.rows.length, missing: table.missing, csv, json, fingerprint, varied: table.varied, results: resultsJson(table) } };
+    const missing = table.missingCount > INLINE_RESULTS_LIMIT ? null : [...table.missing()];
+    const doc = { merge: { journals: files, cases: table.cases, finished: table.finished, missing, csv, json, fingerprint, varied: table.varied, results: resultsJson(table) } };
     process.stdout.write(`${JSON.stringify(doc, null, 2)}\n`);
     return;
   }
   const lines = [
-    `stanchion merge: ${files.length} journal${files.length > 1 ? 's' : ''}, ${table.rows.length} of ${journals[0].header.cases} cases finished`,
+    `stanchion merge: ${files.length} journal${files.length > 1 ? 's' : ''}, ${table.finished} of ${table.cases} cases finished`,
     `  results  ${csv}`,
     `           ${json}`,
     '',
@@ -457,7 +541,7 @@ export function registerSweep(program: Command, unitsOption: () => Option): void
     .addOption(new Option('--methods <list>', 'comma-separated: form, sorm, is, mc, subset (default form)').argParser(parseMethods))
     .addOption(new Option('--seed <n>', 'sweep seed; each case derives its own (default: the file\'s, else 1)').argParser(parseNonNegativeInteger))
     .addOption(new Option('--samples <n>', 'Monte Carlo samples per case (default: the scenario\'s mc_samples, else 100000)').argParser(parsePositiveInteger))
-    .addOption(new Option('--workers <n>', 'worker threads').argParser(parsePositiveInteger).default(1))
+    .addOption(new Option('--workers <n>', 'worker threads (at most the cores available; more are capped)').argParser(parsePositiveInteger).default(1))
     .addOption(new Option('--shard <I/N>', 'run only the cases with index % N == I; join shards with `stanchion merge`').argParser(parseShard))
     .option('--state <dir>', 'journal folder for resuming (default OUT/.state)')
     .option('--out <dir>', 'output folder (default sweep-out/<FILE name>)')
@@ -481,6 +565,11 @@ export function registerSweep(program: Command, unitsOption: () => Option): void
         '',
         'PATH is a scenario path (column.length, loads.dead) or a parameter of a random variable',
         '(column.ends.bottom.rotation.mean, loads.imposed.cov). Run the same command again to resume.',
+        '',
+        `Limits: at most ${MAX_SWEEP_CASES.toExponential(0)} cases (the journal, sweep.csv and sweep.json take a few`,
+        `hundred bytes per case each), a Latin hypercube at most 1e+6; the report only up to ${REPORT_CASES_LIMIT} cases,`,
+        `--json lists results inline up to ${INLINE_RESULTS_LIMIT} cases. Every value is checked before anything is`,
+        'written; a journal line that is damaged or not a case of this sweep is refused (exit 2, with its line).',
         '',
         CAUTION,
         '',

@@ -8,21 +8,49 @@ import { dirname } from 'node:path';
 import { removeStaleSiblings, siblingFileName, type Notify } from '../report/staleSiblings.js';
 
 export function writeFileAtomic(file: string, content: string, notify?: Notify): void {
+  writeFileAtomicStreamed(file, (write) => write(content), notify);
+}
+
+const FLUSH_AT = 1 << 20;
+
+/**
+ * The same for content produced piece by piece: `produce` calls `write` as often as it likes;
+ * pieces are buffered up to 1 MB, so a file of gigabytes never sits in memory. If `produce`
+ * throws, the temporary file is removed and the old file is left as it was.
+ */
+export function writeFileAtomicStreamed(file: string, produce: (write: (piece: string) => void) => void, notify?: Notify): void {
   mkdirSync(dirname(file), { recursive: true });
   removeStaleSiblings(file, notify);
   const temp = siblingFileName(file);
   rmSync(temp, { force: true }); // this process's own leftover; 'wx' below never follows a link
+  const fd = openSync(temp, 'wx');
+  let renamed = false;
   try {
-    const fd = openSync(temp, 'wx');
-    try {
-      writeSync(fd, content);
-      fsyncSync(fd);
-    } finally {
-      closeSync(fd);
-    }
+    let pending: string[] = [];
+    let size = 0;
+    const flush = (): void => {
+      if (pending.length > 0) writeSync(fd, pending.join(''));
+      pending = [];
+      size = 0;
+    };
+    produce((piece) => {
+      pending.push(piece);
+      size += piece.length;
+      if (size >= FLUSH_AT) flush();
+    });
+    flush();
+    fsyncSync(fd);
+    closeSync(fd);
     renameSync(temp, file);
-  } catch (e) {
-    rmSync(temp, { force: true });
-    throw e;
+    renamed = true;
+  } finally {
+    if (!renamed) {
+      try {
+        closeSync(fd);
+      } catch {
+        // already closed
+      }
+      rmSync(temp, { force: true });
+    }
   }
 }

@@ -3,12 +3,15 @@
  * case is journalled as soon as it finishes. With workers > 1 the cases go to worker
  * threads that rebuild the case runner from its recipe; each case carries its own seed, so
  * results do not depend on the number of workers or on which worker ran a case.
+ * Cases are built one at a time as they are handed out (iterateCases) and forgotten once
+ * journalled: memory does not grow with the number of cases.
  */
 import { Worker } from 'node:worker_threads';
 import { loadCaseRunner, runOneCase, type CaseRunner, type CaseRunnerRecipe } from './caseRunner.js';
 import { compiledModule } from '../runtime/compiledTwin.js';
+import { checkShard, iterateCases, shardSize } from './sweepDesign.js';
 import { sweepFingerprint } from './sweepFingerprint.js';
-import { SweepJournal } from './sweepJournal.js';
+import { SweepJournal, type StoredDefinition } from './sweepJournal.js';
 import type { CaseResult, CaseTable, Shard, SweepCase, SweepRecord } from './sweepTypes.js';
 
 export interface RunSweepOptions {
@@ -22,6 +25,10 @@ export interface RunSweepOptions {
   shard?: Shard;
   /** Extra identity folded into the fingerprint (methods, scenario hash, ...). */
   identity?: unknown;
+  /** The fingerprint of (table, identity) when the caller has computed it already. */
+  fingerprint?: string;
+  /** The definition the table was built from, kept in the journal header so that a merge can check every row. */
+  definition?: StoredDefinition;
   onCaseDone?: (record: SweepRecord, finished: number, total: number) => void;
 }
 
@@ -38,17 +45,14 @@ export interface RunSweepResult {
   errors: number;
 }
 
-export function shardCases(cases: SweepCase[], shard: Shard): SweepCase[] {
-  if (!(Number.isInteger(shard.count) && shard.count >= 1 && Number.isInteger(shard.index) && shard.index >= 0 && shard.index < shard.count)) {
-    throw new Error(`bad shard ${shard.index}/${shard.count}`);
-  }
-  return cases.filter((c) => c.index % shard.count === shard.index);
-}
-
 type Finish = (c: SweepCase, done: { result: CaseResult; error?: string }) => void;
 
-async function runInThread(runner: CaseRunner, todo: SweepCase[], finish: Finish): Promise<void> {
-  for (const c of todo) finish(c, await runOneCase(runner, c));
+/** The sweep loop in this thread: one case at a time, in index order. */
+async function runInThread(runner: CaseRunner, todo: Iterator<SweepCase>, finish: Finish): Promise<void> {
+  for (let next = todo.next(); !next.done; next = todo.next()) {
+    const c = next.value;
+    finish(c, await runOneCase(runner, c));
+  }
 }
 
 interface WorkerReply {
@@ -58,17 +62,17 @@ interface WorkerReply {
   error?: string;
 }
 
-function runInWorkers(recipe: CaseRunnerRecipe, todo: SweepCase[], workers: number, finish: Finish): Promise<void> {
+/** The sweep loop over worker threads: each idle worker takes the next case; only cases in flight are held. */
+function runInWorkers(recipe: CaseRunnerRecipe, todo: Iterator<SweepCase>, todoCount: number, workers: number, finish: Finish): Promise<void> {
   // under vitest this file is .ts: the worker must be the compiled twin
   const ext = import.meta.url.endsWith('.ts') ? '.ts' : '.js';
   const workerUrl = compiledModule(new URL(`./sweepWorker${ext}`, import.meta.url).href);
-  const byIndex = new Map(todo.map((c) => [c.index, c]));
-  const queue = [...todo];
-  const count = Math.min(workers, queue.length);
+  const byIndex = new Map<number, SweepCase>();
+  const count = Math.min(workers, todoCount);
   return new Promise((resolve, reject) => {
     const pool: Worker[] = [];
     let running = count;
-    let unfinished = todo.length;
+    let unfinished = todoCount;
     let failed = false;
     const fail = (error: unknown): void => {
       if (failed) return;
@@ -77,9 +81,13 @@ function runInWorkers(recipe: CaseRunnerRecipe, todo: SweepCase[], workers: numb
       reject(error instanceof Error ? error : new Error(String(error)));
     };
     const feed = (w: Worker): void => {
-      const next = queue.shift();
-      if (next) w.postMessage({ case: next });
-      else void w.terminate();
+      const next = todo.next();
+      if (next.done) {
+        void w.terminate();
+        return;
+      }
+      byIndex.set(next.value.index, next.value);
+      w.postMessage({ case: next.value });
     };
     for (let k = 0; k < count; k++) {
       const w = new Worker(workerUrl, { workerData: recipe });
@@ -117,17 +125,21 @@ export async function runSweep(opts: RunSweepOptions): Promise<RunSweepResult> {
   const shard = opts.shard ?? { index: 0, count: 1 };
   const workers = opts.workers ?? 1;
   if (!(Number.isInteger(workers) && workers >= 1)) throw new Error(`workers must be a whole number >= 1, got ${workers}`);
-  const mine = shardCases(opts.table.cases, shard);
-  const fingerprint = sweepFingerprint(opts.table, opts.identity);
+  checkShard(shard);
+  const mine = shardSize(opts.table.count, shard);
+  const fingerprint = opts.fingerprint ?? sweepFingerprint(opts.table, opts.identity);
   const journal = SweepJournal.open(opts.stateDir, {
     stanchion_sweep_journal: 1,
     fingerprint,
     varied: opts.table.varied,
-    cases: opts.table.cases.length,
+    cases: opts.table.count,
     shard,
+    ...(opts.definition ? { definition: opts.definition, identity: opts.identity ?? null } : {}),
   });
   try {
-    const todo = mine.filter((c) => !journal.done.has(c.index));
+    const skipped = journal.doneCount;
+    const todoCount = mine - skipped;
+    const todo = iterateCases(opts.table, shard, (k) => journal.isDone(k));
     let errors = 0;
     const finish: Finish = (c, done) => {
       const record: SweepRecord = { case: c.index, seed: c.seed, values: c.values, result: done.result };
@@ -136,7 +148,7 @@ export async function runSweep(opts: RunSweepOptions): Promise<RunSweepResult> {
         errors += 1;
       }
       journal.record(record);
-      opts.onCaseDone?.(record, journal.done.size, mine.length);
+      opts.onCaseDone?.(record, journal.doneCount, mine);
     };
     if (typeof opts.runCase === 'function') {
       if (workers > 1) throw new Error('runSweep: a case-runner function cannot cross threads; pass a recipe for workers > 1');
@@ -144,9 +156,9 @@ export async function runSweep(opts: RunSweepOptions): Promise<RunSweepResult> {
     } else if (workers === 1) {
       await runInThread(await loadCaseRunner(opts.runCase), todo, finish);
     } else {
-      await runInWorkers(opts.runCase, todo, workers, finish);
+      await runInWorkers(opts.runCase, todo, todoCount, workers, finish);
     }
-    return { journal: journal.file, fingerprint, shardCases: mine.length, ran: todo.length, skipped: mine.length - todo.length, errors };
+    return { journal: journal.file, fingerprint, shardCases: mine, ran: todoCount, skipped, errors };
   } finally {
     journal.close();
   }

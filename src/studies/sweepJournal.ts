@@ -1,14 +1,25 @@
 /**
  * The sweep journal: one JSON line per finished case, appended with a single write and
  * fsync'd, so a sweep killed at any moment loses nothing it reported finished. The first
- * line is a header naming the sweep (a fingerprint of its case table) and the shard.
+ * line is a header naming the sweep (a fingerprint of its case table, and the definition
+ * and identity it was computed from) and the shard.
  * On reopening, a torn last line (no newline: the kill hit mid-write) is cut off before
- * anything is appended; a malformed complete line means real damage and is an error.
+ * anything is appended. Every complete line must be a record of a case of this shard
+ * (index in range, index % N == I, seed and values of the right types, each case once):
+ * anything else is damage or a line from elsewhere, refused with its line number, because
+ * a row that does not belong must never reach the results and a silently skipped one would
+ * hide a lost case.
+ * The journal is read in chunks; what stays in memory is one bit per case.
  */
-import { closeSync, existsSync, fsyncSync, ftruncateSync, mkdirSync, openSync, readFileSync, writeSync } from 'node:fs';
+import { closeSync, existsSync, fsyncSync, ftruncateSync, mkdirSync, openSync, readSync, writeSync } from 'node:fs';
 import { dirname, join } from 'node:path';
 import { InputError } from '../scenario/inputError.js';
-import type { Shard, SweepRecord } from './sweepTypes.js';
+import { forEachLine } from './journalLines.js';
+import { pathInputError } from './pathErrors.js';
+import type { Shard, SweepDefinition, SweepRecord } from './sweepTypes.js';
+
+/** What a journal keeps of the definition: enough to rebuild the case table. */
+export type StoredDefinition = Pick<SweepDefinition, 'design' | 'seed' | 'cases' | 'vary' | 'list'>;
 
 export interface JournalHeader {
   stanchion_sweep_journal: 1;
@@ -17,40 +28,100 @@ export interface JournalHeader {
   /** Number of cases in the whole sweep (all shards). */
   cases: number;
   shard: Shard;
+  /** The sweep's definition and extra identity (absent in journals of older versions). */
+  definition?: StoredDefinition;
+  identity?: unknown;
 }
 
 export function journalPath(stateDir: string, shard: Shard): string {
   return join(stateDir, `journal-${shard.index}-of-${shard.count}.jsonl`);
 }
 
-/** Complete lines only; `kept` is the byte length of the intact prefix. */
-function completeLines(bytes: Buffer): { lines: string[]; kept: number } {
-  const end = bytes.lastIndexOf(0x0a) + 1;
-  const text = bytes.subarray(0, end).toString('utf8');
-  return { lines: text.split('\n').slice(0, -1), kept: end };
+function isPlain(x: unknown): x is Record<string, unknown> {
+  return typeof x === 'object' && x !== null && !Array.isArray(x);
 }
 
-function parseLine(file: string, line: string, lineNo: number): unknown {
+function journalError(file: string, line: number, message: string): InputError {
+  return new InputError(`sweep journal ${file}`, message, line);
+}
+
+function parseLine(file: string, text: string, line: number): unknown {
   try {
-    return JSON.parse(line);
+    return JSON.parse(text);
   } catch {
-    throw new Error(`sweep journal ${file} is damaged at line ${lineNo}`);
+    throw journalError(file, line, 'damaged: the line is not a JSON record (remove the journal to start again, or restore it)');
   }
 }
 
-export interface JournalContent {
-  header: JournalHeader;
-  records: SweepRecord[];
+/** The header's own shape (line 1). */
+export function checkHeader(file: string, raw: unknown): JournalHeader {
+  if (!isPlain(raw) || raw.stanchion_sweep_journal !== 1) throw journalError(file, 1, 'not a sweep journal header');
+  const shard = raw.shard as Shard | undefined;
+  const ok =
+    typeof raw.fingerprint === 'string' &&
+    Array.isArray(raw.varied) &&
+    raw.varied.every((p) => typeof p === 'string') &&
+    Number.isSafeInteger(raw.cases) &&
+    (raw.cases as number) >= 1 &&
+    isPlain(shard) &&
+    Number.isSafeInteger(shard.count) &&
+    Number.isSafeInteger(shard.index) &&
+    shard.count >= 1 &&
+    shard.index >= 0 &&
+    shard.index < shard.count;
+  if (!ok) throw journalError(file, 1, 'damaged header (fingerprint, varied, cases and shard are required)');
+  return raw as unknown as JournalHeader;
 }
 
-/** Read a journal (for merging); a torn last line is ignored. */
-export function readJournal(file: string): JournalContent {
-  const { lines } = completeLines(readFileSync(file));
-  if (lines.length === 0) throw new Error(`sweep journal ${file} has no header`);
-  const header = parseLine(file, lines[0], 1) as JournalHeader;
-  if (header.stanchion_sweep_journal !== 1) throw new Error(`${file} is not a sweep journal`);
-  const records = lines.slice(1).map((line, k) => parseLine(file, line, k + 2) as SweepRecord);
-  return { header, records };
+const SEED_LIMIT = 2147483648;
+
+function isSweepValue(v: unknown): boolean {
+  return (typeof v === 'number' && Number.isFinite(v)) || typeof v === 'string';
+}
+
+function isResultValue(v: unknown): boolean {
+  return typeof v === 'number' || typeof v === 'string' || typeof v === 'boolean' || v === null;
+}
+
+/** A record line checked against its journal's header: the case must exist and be this shard's. */
+export function checkRecord(file: string, header: JournalHeader, raw: unknown, line: number): SweepRecord {
+  if (!isPlain(raw)) throw journalError(file, line, 'damaged: expected a case record');
+  const index = raw.case;
+  if (!Number.isSafeInteger(index)) throw journalError(file, line, `damaged: 'case' is not a case number (${JSON.stringify(index)})`);
+  const k = index as number;
+  if (k < 0 || k >= header.cases) throw journalError(file, line, `case ${k} does not exist in this sweep (cases 0 to ${header.cases - 1})`);
+  const { index: shardIndex, count } = header.shard;
+  if (k % count !== shardIndex) throw journalError(file, line, `case ${k} does not belong to shard ${shardIndex}/${count} (index % ${count} is ${k % count})`);
+  if (!(Number.isInteger(raw.seed) && (raw.seed as number) >= 0 && (raw.seed as number) < SEED_LIMIT)) {
+    throw journalError(file, line, `damaged: case ${k} has no valid seed`);
+  }
+  const values = raw.values;
+  if (!isPlain(values) || Object.keys(values).length !== header.varied.length || !header.varied.every((p) => Object.hasOwn(values, p) && isSweepValue(values[p]))) {
+    throw journalError(file, line, `case ${k} does not set the sweep's varied paths (${header.varied.join(', ')})`);
+  }
+  if (!isPlain(raw.result) || !Object.values(raw.result).every(isResultValue)) throw journalError(file, line, `damaged: case ${k} has no valid result`);
+  if (raw.error !== undefined && typeof raw.error !== 'string') throw journalError(file, line, `damaged: case ${k} has an error that is not text`);
+  return raw as unknown as SweepRecord;
+}
+
+/** The first line of a journal (without reading the rest). */
+export function readJournalHeader(file: string): JournalHeader {
+  const fd = openSync(file, 'r');
+  try {
+    const buffer = Buffer.alloc(1 << 16);
+    let text = '';
+    for (let position = 0; ; ) {
+      const read = readSync(fd, buffer, 0, buffer.length, position);
+      if (read === 0) break;
+      position += read;
+      const nl = buffer.subarray(0, read).indexOf(0x0a);
+      if (nl >= 0) return checkHeader(file, parseLine(file, text + buffer.toString('utf8', 0, nl), 1));
+      text += buffer.toString('utf8', 0, read);
+    }
+    throw journalError(file, 1, 'has no header (an empty or torn journal)');
+  } finally {
+    closeSync(fd);
+  }
 }
 
 function fsyncDirectory(dir: string): void {
@@ -67,35 +138,68 @@ function appendDurably(fd: number, line: string): void {
   fsyncSync(fd);
 }
 
+/** One bit per case: which cases are finished. */
+class CaseBits {
+  private readonly bits: Uint8Array;
+  count = 0;
+
+  constructor(cases: number) {
+    this.bits = new Uint8Array(Math.ceil(cases / 8));
+  }
+
+  has(k: number): boolean {
+    return (this.bits[k >>> 3] & (1 << (k & 7))) !== 0;
+  }
+
+  add(k: number): void {
+    this.bits[k >>> 3] |= 1 << (k & 7);
+    this.count += 1;
+  }
+}
+
 export class SweepJournal {
   private constructor(
     readonly file: string,
     private fd: number,
-    readonly done: Map<number, SweepRecord>,
+    private readonly finished: CaseBits,
   ) {}
 
-  /** Open or create the journal for this sweep; refuses a journal of another sweep. */
+  /** Open or create the journal for this sweep; refuses a journal of another sweep or a bad line. */
   static open(stateDir: string, header: JournalHeader): SweepJournal {
-    mkdirSync(stateDir, { recursive: true });
     const file = journalPath(stateDir, header.shard);
-    const done = new Map<number, SweepRecord>();
-    const existed = existsSync(file);
-    const fd = openSync(file, existed ? 'r+' : 'w');
+    const finished = new CaseBits(header.cases);
+    let fd: number;
+    let existed: boolean;
     try {
-      const { lines, kept } = existed ? completeLines(readFileSync(file)) : { lines: [], kept: 0 };
-      if (lines.length === 0) {
+      mkdirSync(stateDir, { recursive: true });
+      existed = existsSync(file);
+      fd = openSync(file, existed ? 'r+' : 'w');
+    } catch (err) {
+      throw pathInputError(err, '--state', stateDir);
+    }
+    try {
+      let sawHeader = false;
+      const kept = existed
+        ? forEachLine(file, (text, line) => {
+            const raw = parseLine(file, text, line);
+            if (line === 1) {
+              const found = checkHeader(file, raw);
+              if (found.fingerprint !== header.fingerprint) {
+                throw new InputError('--state', `${file} belongs to a different sweep; use a new state directory`);
+              }
+              sawHeader = true;
+              return;
+            }
+            const record = checkRecord(file, header, raw, line);
+            if (finished.has(record.case)) throw journalError(file, line, `case ${record.case} is recorded twice`);
+            finished.add(record.case);
+          })
+        : 0;
+      if (!sawHeader) {
         ftruncateSync(fd, 0);
         appendDurably(fd, JSON.stringify(header));
         if (!existed) fsyncDirectory(dirname(file));
       } else {
-        const found = parseLine(file, lines[0], 1) as JournalHeader;
-        if (found.fingerprint !== header.fingerprint) {
-          throw new InputError('state directory', `${file} belongs to a different sweep; use a new state directory`);
-        }
-        lines.slice(1).forEach((line, k) => {
-          const record = parseLine(file, line, k + 2) as SweepRecord;
-          done.set(record.case, record);
-        });
         ftruncateSync(fd, kept); // drop a torn tail before appending
       }
     } catch (error) {
@@ -104,13 +208,23 @@ export class SweepJournal {
     }
     const appendFd = openSync(file, 'a');
     closeSync(fd);
-    return new SweepJournal(file, appendFd, done);
+    return new SweepJournal(file, appendFd, finished);
+  }
+
+  /** Case k is finished (recorded now or before). */
+  isDone(k: number): boolean {
+    return this.finished.has(k);
+  }
+
+  /** Number of finished cases of this shard. */
+  get doneCount(): number {
+    return this.finished.count;
   }
 
   record(entry: SweepRecord): void {
-    if (this.done.has(entry.case)) throw new Error(`case ${entry.case} is already in the journal`);
+    if (this.finished.has(entry.case)) throw new Error(`case ${entry.case} is already in the journal`);
     appendDurably(this.fd, JSON.stringify(entry));
-    this.done.set(entry.case, entry);
+    this.finished.add(entry.case);
   }
 
   close(): void {

@@ -43,7 +43,7 @@ export function sweepResults(table: SweepTable, methods: readonly Method[], colu
   if (table.varied.length < 1 || table.varied.length > 2) return undefined;
   const method = (['form', 'sorm', 'is', 'subset', 'mc'] as const).find((m) => methods.includes(m)) ?? 'form';
   const varied = table.varied.map((path) => ({ path, kind: kindOfSweptPath(path) }));
-  const rows = table.rows
+  const rows = [...table.rows()]
     .filter((r) => !r.error && typeof r.result[`beta_${method}`] === 'number')
     .map((r) => {
       const values: Record<string, number> = {};
@@ -78,7 +78,7 @@ export async function writeSweepReport(opts: {
   if (sweep) input.sweep = sweep;
   else input.cautions.push('The sweep varied more than two quantities: its results are in sweep.csv, not charted.');
   input.cautions.unshift('The sections before the sweep describe the base scenario (FORM and SORM); the sweep section lists every case.');
-  json.sweep = jsonSafe({ varied: opts.table.varied, rows: opts.table.rows.length, method: sweep?.method ?? null });
+  json.sweep = jsonSafe({ varied: opts.table.varied, rows: opts.table.finished, method: sweep?.method ?? null });
   // force: the sweep regenerates its own report at every complete run, and writeOutputs replaces only a marked folder
   return writeOutputs(opts.dir, input, json, { force: true, inputFiles: opts.inputFiles, units: opts.units ?? s.displayUnits });
 }

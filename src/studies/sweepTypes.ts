@@ -53,10 +53,19 @@ export interface SweepCase {
   values: Record<string, SweepValue>;
 }
 
+/**
+ * A sweep's cases, never held as an array: case i's values are computed from i alone
+ * (sweepDesign.ts); seeds come in index order from the sweep seed's stream (caseSeed.ts).
+ */
 export interface CaseTable {
   /** The varied paths, in column order. */
   varied: string[];
-  cases: SweepCase[];
+  /** Number of cases (at most MAX_SWEEP_CASES). */
+  count: number;
+  /** The sweep seed. */
+  seed: number;
+  /** Values of case `index` (0 <= index < count), computed on demand. */
+  valuesAt(index: number): Record<string, SweepValue>;
 }
 
 export type CaseResult = Record<string, ResultValue>;

@@ -6,7 +6,10 @@ import { InputError } from '../../src/scenario/inputError.js';
 import type { CaseRunner } from '../../src/studies/caseRunner.js';
 import { mergeSweep } from '../../src/studies/mergeSweep.js';
 import { runSweep } from '../../src/studies/runSweep.js';
-import { buildCaseTable } from '../../src/studies/sweepDesign.js';
+import { buildCaseTable, iterateCases } from '../../src/studies/sweepDesign.js';
+import type { CaseTable } from '../../src/studies/sweepTypes.js';
+
+const allCases = (t: CaseTable) => [...iterateCases(t)];
 import { sweepCsv, sweepJson } from '../../src/studies/sweepOutput.js';
 import { parseVaryOption } from '../../src/studies/varyOption.js';
 
@@ -40,10 +43,10 @@ describe('sweep journal and outputs (in-process runner)', () => {
     const csv = sweepCsv(merged);
     const lines = csv.split('\n');
     expect(lines[0]).toBe('case,x,L,y,tag,inf');
-    expect(lines[1]).toBe(`0,1,2 m,${2 + table.cases[0].seed / 2 ** 31},"a,""b""",Infinity`);
-    expect(merged.missing).toEqual([]);
+    expect(lines[1]).toBe(`0,1,2 m,${2 + allCases(table)[0].seed / 2 ** 31},"a,""b""",Infinity`);
+    expect(merged.missingCount).toBe(0);
     const json = JSON.parse(sweepJson(merged));
-    expect(json.sweep.cases[7]).toEqual({ case: 7, seed: table.cases[7].seed, values: { x: 4, L: '3 m' }, result: { y: 8 + table.cases[7].seed / 2 ** 31, tag: 'a,"b"', inf: 'Infinity' } });
+    expect(json.sweep.cases[7]).toEqual({ case: 7, seed: allCases(table)[7].seed, values: { x: 4, L: '3 m' }, result: { y: 8 + allCases(table)[7].seed / 2 ** 31, tag: 'a,"b"', inf: 'Infinity' } });
   });
 
   it('resumes a partly finished journal without repeating or losing cases', async () => {
@@ -76,7 +79,7 @@ describe('sweep journal and outputs (in-process runner)', () => {
     for (let index = 0; index < 3; index++) {
       shards.push((await runSweep({ table, runCase: runner, stateDir: join(root, 'g'), shard: { index, count: 3 } })).journal);
     }
-    expect(mergeSweep(shards[0]).missing.length).toBe(5);
+    expect(mergeSweep(shards[0]).missingCount).toBe(5);
     const merged = mergeSweep(...shards.reverse());
     expect(sweepCsv(merged)).toBe(sweepCsv(mergeSweep(single.journal)));
     expect(sweepJson(merged)).toBe(sweepJson(mergeSweep(single.journal)));

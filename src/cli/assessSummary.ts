@@ -3,6 +3,8 @@ import type { Assessment } from '../studies/columnAssessment.js';
 import { formatBeta, formatProbability, formatQuantity, type UnitSystem } from '../report/displayUnits.js';
 import { quantityKindOf } from '../limitState/quantityKind.js';
 import { CAUTION, textTable } from './textTable.js';
+import { designPointConnections } from '../studies/designPointConnections.js';
+import { connectionBasis, connectionLines } from './connectionText.js';
 
 const LABEL = { form: 'FORM', sorm: 'SORM', is: 'importance sampling', mc: 'Monte Carlo', subset: 'subset simulation' } as const;
 
@@ -110,6 +112,13 @@ export function formatAssessment(a: Assessment, system: UnitSystem): string {
   lines.push(textTable(dp, '    '));
   lines.push(...characteristicLines(a, system));
   lines.push(...strengthModelLines(a));
+  const joints = designPointConnections(a);
+  if (joints) {
+    lines.push('');
+    lines.push('  connection moments at the FORM design point (second order; the values to check each joint\'s moment resistance M_j,Rd against):');
+    lines.push(...connectionLines(joints, system, undefined, '    '));
+    lines.push(connectionBasis(joints, 'the design point', system));
+  }
   if (a.sensitivity) {
     lines.push('');
     lines.push('  what drives it (utilization at the 5 % / 95 % quantile of one variable, the rest at their means):');

@@ -5,6 +5,8 @@ import type { End, Scenario } from '../scenario/types.js';
 import { formatQuantity, type UnitSystem } from '../report/displayUnits.js';
 import { readScenarioText } from './readScenarioText.js';
 import { CAUTION, textTable } from './textTable.js';
+import { connectionBasis, connectionLines } from './connectionText.js';
+import { strengthUsesBow } from '../mechanics/strengthModelKind.js';
 
 export interface CheckOptions {
   json?: boolean;
@@ -67,6 +69,11 @@ export function formatCheck(s: Scenario, c: CheckResult, system: UnitSystem): st
   rows.push(['demand (sum of loads)', q(c.demand, 'force')]);
   rows.push(['utilization', `${c.utilization.toFixed(3)}  = demand / (model factor ${c.model_factor.toPrecision(3)} × capacity)`]);
   lines.push(textTable(rows));
+  lines.push('');
+  lines.push('  connection moments under the mean loads (second order; the values to check each joint\'s moment resistance M_j,Rd against):');
+  lines.push(...connectionLines(c.connections, system, c.jointClasses, '    '));
+  lines.push(connectionBasis(c.connections, 'the mean loads', system) + (c.connections.stable && c.connections.bow > 0 ? '. A serviceability-level value, not the capacity: `assess` gives them at the FORM design point.' : ''));
+  if (!strengthUsesBow(s.strength) && c.connections.bow > 0) lines.push('  (the bow is the geometric bow of the scenario; the strength curve itself does not use it)');
   if (c.modes.length > 1) {
     lines.push('');
     lines.push('  higher modes:');

@@ -16,6 +16,8 @@ export interface ColumnMatrices {
   K: Float64Array;
   /** geometric stiffness per unit P L²/EI, reduced likewise */
   Kg: Float64Array;
+  /** the full-model DOF (2·node + 0 for w, + 1 for θ) of each reduced row */
+  keep: number[];
 }
 
 /**
@@ -64,5 +66,5 @@ export function assembleColumn(frame: FeFrame, r: FeRestraint, elements: number)
       Kg[i * n + j] = Gf[keep[i] * N + keep[j]];
     }
   }
-  return { n, K, Kg };
+  return { n, K, Kg, keep };
 }

@@ -8,6 +8,8 @@ import { columnCapacity } from '../mechanics/columnCapacity.js';
 import { fixityFactor } from '../mechanics/restraint.js';
 import type { ColumnState } from '../mechanics/types.js';
 import type { ColumnModel } from './columnModel.js';
+import type { EndSpringMoments } from '../mechanics/endSpringMoments.js';
+import { classificationJson, classifyEnds, connectionJson, connectionResponseAt, type EndClassification } from './connectionResponse.js';
 
 export interface ModeSummary {
   mode: number;
@@ -38,6 +40,10 @@ export interface CheckResult {
   strength: string;
   model_factor: number;
   modes: ModeSummary[];
+  /** second-order moments and rotations of the end connections under the mean loads */
+  connections: EndSpringMoments;
+  /** EN 1993-1-8 §5.2.2.5 class of each end at the mean stiffness and at its 5 % fractile */
+  jointClasses: EndClassification[];
 }
 
 const SHAPE_POINTS = 41;
@@ -90,6 +96,8 @@ export function deterministicCheck(model: ColumnModel, modes = 3): CheckResult {
     strength: model.scenario.strength,
     model_factor: theta,
     modes: summaries,
+    connections: connectionResponseAt(model, x),
+    jointClasses: classifyEnds(model),
   };
 }
 
@@ -114,5 +122,7 @@ export function checkJson(c: CheckResult): Record<string, unknown> {
       inflection_points: m.inflection_points,
       effective_length: m.effective_length,
     })),
+    ...connectionJson(c.connections, 'means'),
+    joint_classification: classificationJson(c.jointClasses),
   };
 }

@@ -18,6 +18,7 @@ export type QuantityKind =
   | 'force' // N
   | 'rotationalStiffness' // N·m/rad
   | 'translationalStiffness' // N/m
+  | 'moment' // N·m
   | 'dimensionless';
 
 export type DistributionName = 'normal' | 'lognormal' | 'gumbel' | 'uniform' | 'truncnormal' | 'weibull' | 'beta';
@@ -296,6 +297,38 @@ export interface SweepResults {
   method: MethodName; // which method produced β
 }
 
+/** Second-order moments and rotations of the end connections at one point (magnitudes, SI). */
+export interface ConnectionValues {
+  load: number; // N, the axial load they were computed under
+  bow: number; // m, |e0|
+  amplification: number; // 1/(1 − P/Pcr); Infinity when P ≥ Pcr
+  stable: boolean; // false when P ≥ Pcr (every moment is then Infinity)
+  moment: { bottom: number; top: number }; // N·m, k·θ at each end (0 pinned, fixed-end moment when fixed)
+  rotation: { bottom: number; top: number }; // rad
+  memberMax: number; // N·m, largest |M| in the member
+  memberMaxAt: number | null; // m above the base
+}
+
+/** An end's joint class by stiffness, EN 1993-1-8 §5.2.2.5. */
+export interface JointClassRow {
+  end: EndName;
+  rule: 'given' | 'beam' | 'base' | 'none';
+  stiffnessMean: number; // N·m/rad (Infinity when fixed)
+  stiffnessLow: number; // at the 5 % fractile
+  classAtMean: string | null; // 'rigid' | 'semi-rigid' | 'nominally pinned'; null when no rule applies
+  classAtLow: string | null;
+  rigidFrom: number | null; // N·m/rad
+  pinnedUpTo: number | null; // N·m/rad
+  note: string;
+}
+
+export interface ConnectionResults {
+  atMean: ConnectionValues; // under the mean loads (serviceability level)
+  atDesignPoint?: ConnectionValues; // at the FORM design point
+  classes: JointClassRow[];
+  strengthUsesBow: boolean; // false for the code curves: the bow is then only the geometric bow
+}
+
 export interface ReportInput {
   meta: ReportMeta;
   inputs: InputRow[];
@@ -309,6 +342,7 @@ export interface ReportInput {
   resistanceFactor?: ResistanceFactorRow;
   strengthModels?: StrengthModelRow[];
   modelFactor?: ModelFactorNote;
+  connections?: ConnectionResults; // moments the end connections carry, and their joint classes
   samples?: SamplesSummary; // absent when no sampling method ran
   sweep?: SweepResults;
   /** Specific cautions for this run (the standing disclaimers are always added by the report). */

@@ -2,7 +2,7 @@
  * ReportInput → ReportDocument: the words and tables of every section. Numbers are only
  * formatted and compared here, never computed.
  */
-import type { EndDescription, InputRow, MethodName, ReportInput, StrengthModelName } from './reportInput.js';
+import type { ConnectionValues, EndDescription, InputRow, JointClassRow, MethodName, ReportInput, StrengthModelName } from './reportInput.js';
 import { displayUnit, formatBeta, formatNumber, formatProbability, formatQuantity, type UnitSystem } from './displayUnits.js';
 import { SECTION_TITLES, type Block, type ReportDocument, type Section, type SectionId } from './reportDocument.js';
 import type { ChartSpec } from './charts/chartSpec.js';
@@ -120,7 +120,44 @@ function columnSection(input: ReportInput, system: UnitSystem): Section {
     const k = c.lateralStiffness ?? 0;
     blocks.push({ kind: 'paragraph', text: k > 0 ? `Sway frame: the top is held sideways by a spring of ${formatQuantity(k, 'translationalStiffness', system)}.` : 'Sway frame: the top is free to move sideways.' });
   }
+  blocks.push(...connectionBlocks(input, system));
   return section('column', blocks);
+}
+
+/** The moments the end connections carry and their joint classes (EN 1993-1-8 §5.2.2.5). */
+function connectionBlocks(input: ReportInput, system: UnitSystem): Block[] {
+  const j = input.connections;
+  if (!j) return [];
+  const moment = (v: number) => (Number.isFinite(v) ? formatQuantity(v, 'moment', system) : '∞');
+  const mrad = (v: number) => (Number.isFinite(v) ? `${formatNumber(v * 1e3, 3)} mrad` : '∞');
+  const cls = (c: JointClassRow | undefined, which: 'classAtMean' | 'classAtLow') => (c?.[which] ?? '—');
+  const basis = (v: ConnectionValues, where: string) =>
+    !v.stable
+      ? `at ${where} the load ${formatQuantity(v.load, 'force', system)} reaches Pcr, so the moments are unbounded`
+      : `at ${where} P = ${formatQuantity(v.load, 'force', system)}, bow ${formatQuantity(v.bow, 'length', system)}, amplification ${formatNumber(v.amplification, 3)}, largest member moment ${moment(v.memberMax)}${v.memberMaxAt === null ? '' : ` at ${formatQuantity(v.memberMaxAt, 'length', system)} above the base`}`;
+  const dp = j.atDesignPoint;
+  const head = ['end', 'moment, mean loads', 'rotation, mean loads', ...(dp ? ['moment, design point', 'rotation, design point'] : []), 'class at mean k', 'class at 5 % k'];
+  const rows = (['bottom', 'top'] as const).map((e) => {
+    const c = j.classes.find((x) => x.end === e);
+    return [e, moment(j.atMean.moment[e]), mrad(j.atMean.rotation[e]), ...(dp ? [moment(dp.moment[e]), mrad(dp.rotation[e])] : []), cls(c, 'classAtMean'), cls(c, 'classAtLow')];
+  });
+  const notes = j.classes.map((c) => {
+    const limits: string[] = [];
+    if (c.rigidFrom !== null && Number.isFinite(c.rigidFrom)) limits.push(`rigid from ${formatQuantity(c.rigidFrom, 'rotationalStiffness', system)}`);
+    if (c.pinnedUpTo !== null && c.pinnedUpTo > 0) limits.push(`nominally pinned up to ${formatQuantity(c.pinnedUpTo, 'rotationalStiffness', system)}`);
+    return `${c.end}: ${c.note}${limits.length ? ` (${limits.join(', ')})` : ''}.`;
+  });
+  const text =
+    'Second-order moments k·θ the end connections carry (zero at a pinned end, the fixed-end moment at a fixed end): these are the values with which each joint\'s moment resistance M_j,Rd is checked. ' +
+    'The bow is affine to the first buckling mode, so the whole shape is amplified by 1/(1 − P/Pcr). ' +
+    `Mean loads: ${basis(j.atMean, 'the mean loads')}; a serviceability-level value, not the capacity. ` +
+    (dp ? `FORM design point: ${basis(dp, 'the design point')}. ` : '') +
+    (j.strengthUsesBow ? '' : 'The strength curve does not use the bow; the moments use the geometric bow of the scenario. ') +
+    `Joint classes by stiffness (EN 1993-1-8 §5.2.2.5) at the mean stiffness and at its 5 % fractile — ${notes.join(' ')}`;
+  return [
+    { kind: 'table', caption: 'End connections: moments k·θ (magnitudes) and joint classes', head, rows, numeric: [false, true, true, ...(dp ? [true, true] : []), false, false] },
+    { kind: 'paragraph', text },
+  ];
 }
 
 type TableBlock = Extract<Block, { kind: 'table' }>;

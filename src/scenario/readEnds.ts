@@ -3,15 +3,38 @@ import type { PathSegment } from './rawTree.js';
 import { fail, readScalar, type ReadContext, type RawScalar } from './readScalar.js';
 import { restraintRatio } from './restraintRatio.js';
 import { meanOf } from './readScalar.js';
-import type { End, Frame, Scalar } from './types.js';
+import type { Beam, End, Frame, Scalar } from './types.js';
 
-export type RawEndValue = 'pinned' | 'fixed' | { rotation: RawScalar } | { fixity: RawScalar } | { alignment_g: RawScalar };
+export interface RawBeam {
+  E?: string | undefined;
+  inertia: string;
+  length: string;
+}
+export type RawEndValue =
+  | 'pinned'
+  | 'fixed'
+  | { rotation: RawScalar; beam?: RawBeam | undefined }
+  | { fixity: RawScalar }
+  | { alignment_g: RawScalar };
+
+function readBeam(raw: RawBeam, path: PathSegment[], ctx: ReadContext): Beam {
+  const value = (v: string, kind: 'stress' | 'inertia' | 'length', key: string): number => {
+    const s = readScalar(v, { kind, domain: 'positive' }, [...path, key], ctx);
+    return s.kind === 'fixed' ? s.value : fail(ctx, [...path, key], 'must be a fixed quantity, not a random variable');
+  };
+  return {
+    ...(raw.E !== undefined ? { E: value(raw.E, 'stress', 'E') } : {}),
+    inertia: value(raw.inertia, 'inertia', 'inertia'),
+    length: value(raw.length, 'length', 'length'),
+  };
+}
 
 export function readEnd(raw: RawEndValue, frame: Frame, path: PathSegment[], ctx: ReadContext): End {
   if (raw === 'pinned') return { type: 'pinned' };
   if (raw === 'fixed') return { type: 'fixed' };
   if ('rotation' in raw) {
-    return { type: 'rotation', k: readScalar(raw.rotation, { kind: 'rotationalStiffness', domain: 'nonnegative' }, [...path, 'rotation'], ctx) };
+    const k = readScalar(raw.rotation, { kind: 'rotationalStiffness', domain: 'nonnegative' }, [...path, 'rotation'], ctx);
+    return raw.beam === undefined ? { type: 'rotation', k } : { type: 'rotation', k, beam: readBeam(raw.beam, [...path, 'beam'], ctx) };
   }
   const from = 'fixity' in raw ? 'fixity' : 'alignment_g';
   const given = 'fixity' in raw ? raw.fixity : raw.alignment_g;

@@ -180,11 +180,21 @@ function choice<const T extends readonly [string, ...string[]]>(values: T, what:
   });
 }
 
+/** The beam a spring end connects to, for the joint classification (fixed quantities only). */
+const beamSchema = strict(
+  {
+    E: quantitySchema('stress').optional().meta({ description: "the beam's Young's modulus (default: the column's mean E)" }),
+    inertia: quantitySchema('inertia').meta({ description: "the beam's second moment of area about its bending axis" }),
+    length: quantitySchema('length').meta({ description: "the beam's span" }),
+  },
+  'the connected beam {inertia: Q, length: Q, E: Q (optional)}',
+).meta({ description: 'the beam this connection joins the column to: classifies the joint by stiffness (EN 1993-1-8 §5.2.2.5)' });
+
 const endSchema = z
   .union(
     [
       choice(END_TYPES, 'an end condition'),
-      strict({ rotation: quantityScalar('rotationalStiffness') }, 'a rotational spring {rotation: Q}'),
+      strict({ rotation: quantityScalar('rotationalStiffness'), beam: beamSchema.optional() }, 'a rotational spring {rotation: Q, beam: {...} (optional)}'),
       strict({ fixity: numberScalar('a fixity factor X = R/(R+3) in [0, 1)') }, 'a fixity factor {fixity: X}'),
       strict({ alignment_g: numberScalar('an alignment-chart G factor (>= 0)') }, 'an alignment-chart factor {alignment_g: G}'),
     ],

@@ -40,8 +40,18 @@ export type Scalar = { readonly kind: 'fixed'; readonly value: number } | { read
 export type End =
   | { readonly type: 'pinned' }
   | { readonly type: 'fixed' }
-  | { readonly type: 'rotation'; readonly k: Scalar }
+  | { readonly type: 'rotation'; readonly k: Scalar; readonly beam?: Beam }
   | { readonly type: 'ratio'; readonly from: 'fixity' | 'alignment_g'; readonly input: Scalar; readonly R: number };
+
+/**
+ * The beam a rotational spring connects the column to (optional; used only to classify the joint by
+ * stiffness, EN 1993-1-8 §5.2.2.5). SI: E in Pa (absent: the column's mean E), inertia m⁴, length m.
+ */
+export interface Beam {
+  readonly E?: number;
+  readonly inertia: number;
+  readonly length: number;
+}
 
 export interface Load {
   readonly name: string;

@@ -5,6 +5,8 @@
 import { checkJson } from '../limitState/deterministicCheck.js';
 import type { Assessment } from './columnAssessment.js';
 import { restraintJson } from './columnRestraint.js';
+import { connectionJson } from '../limitState/connectionResponse.js';
+import { designPointConnections } from './designPointConnections.js';
 
 export interface RunMeta {
   version: string;
@@ -78,6 +80,8 @@ export function reliabilityJson(a: Assessment): Record<string, unknown> {
       reason: f.reason,
       ...characteristicJson(a),
     };
+    const joints = designPointConnections(a);
+    if (joints) Object.assign(r.form as Record<string, unknown>, connectionJson(joints, 'form design point'));
   }
   if (a.sorm) {
     r.sorm = {

@@ -15,6 +15,23 @@ import type {
 } from '../report/reportInput.js';
 import { fixityFactor } from '../mechanics/restraint.js';
 import type { Assessment } from './columnAssessment.js';
+import type { EndSpringMoments } from '../mechanics/endSpringMoments.js';
+import type { ConnectionValues } from '../report/reportInput.js';
+import { designPointConnections } from './designPointConnections.js';
+import { strengthUsesBow } from '../mechanics/strengthModelKind.js';
+
+function connectionValues(m: EndSpringMoments): ConnectionValues {
+  return {
+    load: m.load,
+    bow: m.bow,
+    amplification: m.amplification,
+    stable: m.stable,
+    moment: { bottom: Math.abs(m.springMoment.bottom), top: Math.abs(m.springMoment.top) },
+    rotation: { bottom: Math.abs(m.rotation.bottom), top: Math.abs(m.rotation.top) },
+    memberMax: m.memberMax,
+    memberMaxAt: Number.isFinite(m.memberMaxAt) ? m.memberMaxAt : null,
+  };
+}
 import type { RunMeta } from './assessmentJson.js';
 
 const TARGET_SOURCES: readonly TargetSource[] = ['EN 1990 Annex B', 'EN 1990 Annex C', 'ISO 2394', 'ISO 13822'];
@@ -237,6 +254,22 @@ export function assessmentReportInput(a: Assessment, meta: RunMeta): ReportInput
       note: m.note,
     })),
     modelFactor: { ...a.modelFactor },
+    connections: {
+      atMean: connectionValues(c.connections),
+      atDesignPoint: ((m) => (m ? connectionValues(m) : undefined))(designPointConnections(a)),
+      classes: c.jointClasses.map((j) => ({
+        end: j.end,
+        rule: j.rule,
+        stiffnessMean: j.stiffnessMean,
+        stiffnessLow: j.stiffnessLow,
+        classAtMean: j.classAtMean,
+        classAtLow: j.classAtLow,
+        rigidFrom: j.boundaries ? j.boundaries.rigidFrom : null,
+        pinnedUpTo: j.boundaries ? j.boundaries.pinnedUpTo : null,
+        note: j.note,
+      })),
+      strengthUsesBow: strengthUsesBow(s.strength),
+    },
     samples: {
       resistance: a.samples.resistance,
       demand: a.samples.demand,

@@ -28,6 +28,7 @@ function kindOfSweptPath(path: string): QuantityKind {
 function siValue(v: SweepValue, kind: QuantityKind, columnLength: number): number {
   if (typeof v === 'number') return v;
   if (kind === 'dimensionless') return Number(v);
+  if (kind === 'moment') return NaN; // a report-only kind: no scenario value is a moment
   try {
     return readQuantity(v, kind, columnLength).value;
   } catch {

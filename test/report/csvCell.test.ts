@@ -33,16 +33,23 @@ describe('csvCell', () => {
 
   it('is what the report tables and sweep.csv use', () => {
     expect(toCsv(['variable', 'value'], [['=cmd', -0.9], ['@x', 2]])).toBe("variable,value\n'=cmd,-0.9\n'@x,2\n");
+    const records = [
+      { case: 0, seed: 1, values: { 'loads.dead.mean': '-5 kN' }, result: { beta_form: -0.9 } },
+      { case: 1, seed: 2, values: { 'loads.dead.mean': -3 }, result: { beta_form: 'Infinity' }, error: '=1+1 failed' },
+    ];
     const table: SweepTable = {
       fingerprint: 'f',
       varied: ['loads.dead.mean'],
+      cases: 2,
       columns: ['beta_form'],
-      rows: [
-        { case: 0, seed: 1, values: { 'loads.dead.mean': '-5 kN' }, result: { beta_form: -0.9 } },
-        { case: 1, seed: 2, values: { 'loads.dead.mean': -3 }, result: { beta_form: 'Infinity' }, error: '=1+1 failed' },
-      ],
-      missing: [],
+      finished: 2,
+      failed: 1,
       hasErrors: true,
+      missingCount: 0,
+      *rows() {
+        yield* records;
+      },
+      *missing() {},
     };
     expect(sweepCsv(table)).toBe("case,loads.dead.mean,beta_form,error\n0,'-5 kN,-0.9,\n1,-3,Infinity,'=1+1 failed\n");
   });

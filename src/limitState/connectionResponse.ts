@@ -1,0 +1,145 @@
+/**
+ * What the end connections carry, and how stiff they are by EN 1993-1-8's joint classes, at one point
+ * x of the variables (the means for `check`, the FORM design point for `assess`). The numbers come
+ * from mechanics/endSpringMoments.ts and mechanics/jointClassification.ts; this file only picks the
+ * inputs out of the scenario.
+ */
+import { endSpringMoments, type EndSpringMoments } from '../mechanics/endSpringMoments.js';
+import {
+  beamJointBoundaries, classifyJoint, columnBaseBoundaries, pinnedRelativeSlenderness,
+  type JointBoundaries, type JointClass,
+} from '../mechanics/jointClassification.js';
+import type { End } from '../scenario/types.js';
+import type { ColumnModel } from './columnModel.js';
+
+export type EndKey = 'bottom' | 'top';
+const END_KEYS: readonly EndKey[] = ['bottom', 'top'];
+
+/** Second-order moments and rotations at x; the load is the demand (sum of loads) at x. */
+export function connectionResponseAt(model: ColumnModel, x: Float64Array): EndSpringMoments {
+  const st = model.state(x);
+  return endSpringMoments(st.E * st.I, st.L, st.frame, st.r, st.bow, model.demand(x));
+}
+
+/**
+ * The JSON blocks (SI): `connection_moments` (contract keys bottom, top, member_max: magnitudes in N·m,
+ * the values a joint's moment resistance M_j,Rd is checked against), `connection_rotations` (rad,
+ * magnitudes) and `connection_response` (what they were computed from). Non-finite values (load at or
+ * above Pcr) become null through jsonSafe / JSON.stringify callers.
+ */
+export function connectionJson(m: EndSpringMoments, at: 'means' | 'form design point'): Record<string, unknown> {
+  const nullIfInfinite = (v: number) => (Number.isFinite(v) ? v : null);
+  return {
+    connection_moments: {
+      bottom: nullIfInfinite(Math.abs(m.springMoment.bottom)),
+      top: nullIfInfinite(Math.abs(m.springMoment.top)),
+      member_max: nullIfInfinite(m.memberMax),
+      member_max_at: Number.isFinite(m.memberMaxAt) ? m.memberMaxAt : null,
+    },
+    connection_rotations: { bottom: nullIfInfinite(Math.abs(m.rotation.bottom)), top: nullIfInfinite(Math.abs(m.rotation.top)) },
+    connection_response: {
+      at,
+      stable: m.stable,
+      axial_load: m.load,
+      bow: m.bow,
+      critical_load: m.Pcr,
+      amplification: nullIfInfinite(m.amplification),
+    },
+  };
+}
+
+export interface EndClassification {
+  end: EndKey;
+  /** 'given': the scenario says pinned or fixed; 'beam' / 'base': EN 1993-1-8 §5.2.2.5 (1)–(2) / (4); 'none': no rule applies */
+  rule: 'given' | 'beam' | 'base' | 'none';
+  /** rotational stiffness at the means and at its lower 5 % fractile (N·m/rad; Infinity for fixed) */
+  stiffnessMean: number;
+  stiffnessLow: number;
+  classAtMean: JointClass | null;
+  classAtLow: JointClass | null;
+  boundaries: JointBoundaries | null;
+  note: string;
+}
+
+/** The x of the means with this end's stiffness variable moved to its adverse 5 % fractile. */
+function lowStiffnessPoint(model: ColumnModel, end: End, path: string): Float64Array {
+  const x = Float64Array.from(model.mean);
+  const variable = end.type === 'rotation' ? `${path}.rotation` : end.type === 'ratio' ? `${path}.${end.from}` : null;
+  const i = variable === null ? -1 : model.names.indexOf(variable);
+  if (i >= 0 && end.type === 'ratio' && end.from === 'alignment_g') x[i] = model.dists[i].quantile(0.95); // larger G, softer end
+  else if (i >= 0) x[i] = model.dists[i].quantile(0.05);
+  return x;
+}
+
+/** Joint class of each end at the mean stiffness and at its 5 % fractile (EN 1993-1-8 §5.2.2.5). */
+export function classifyEnds(model: ColumnModel): EndClassification[] {
+  const s = model.scenario;
+  const st = model.state(model.mean);
+  const EIc = st.E * st.I;
+  const L = st.L;
+  const lambda0 = pinnedRelativeSlenderness(st.A, st.fy, EIc, L);
+  return END_KEYS.map((key): EndClassification => {
+    const end = s.column.ends[key];
+    const path = `column.ends.${key}`;
+    const xLow = lowStiffnessPoint(model, end, path);
+    let kMean: number;
+    let kLow: number;
+    if (end.type === 'rotation') {
+      // read k itself, so that a stiffness given as 1.2 MN m/rad reads back exactly
+      const i = model.names.indexOf(`${path}.rotation`);
+      kMean = end.k.kind === 'fixed' ? end.k.value : model.mean[i];
+      kLow = end.k.kind === 'fixed' ? end.k.value : xLow[i];
+    } else {
+      const low = model.state(xLow);
+      kMean = (st.r[key] * EIc) / L;
+      kLow = (low.r[key] * (low.E * low.I)) / L;
+    }
+    if (end.type === 'pinned' || end.type === 'fixed') {
+      const cls: JointClass = end.type === 'pinned' ? 'nominally pinned' : 'rigid';
+      return { end: key, rule: 'given', stiffnessMean: kMean, stiffnessLow: kLow, classAtMean: cls, classAtLow: cls, boundaries: null, note: `given as ${end.type}` };
+    }
+    let boundaries: JointBoundaries;
+    let note: string;
+    const beam = end.type === 'rotation' ? end.beam : undefined;
+    if (beam) {
+      const EIb = (beam.E ?? st.E) * beam.inertia;
+      boundaries = beamJointBoundaries(s.column.frame, EIb, beam.length, EIc, L);
+      note = `beam-to-column joint, E·I_b/L_b = ${(EIb / beam.length).toPrecision(4)} N·m/rad`;
+    } else if (key === 'bottom') {
+      boundaries = columnBaseBoundaries(s.column.frame, lambda0, EIc, L);
+      note = `column base, λ̄0 = ${lambda0.toFixed(3)}`;
+    } else {
+      return {
+        end: key, rule: 'none', stiffnessMean: kMean, stiffnessLow: kLow, classAtMean: null, classAtLow: null, boundaries: null,
+        note: 'no beam given: add beam: {inertia, length} to this end to classify the joint',
+      };
+    }
+    return {
+      end: key,
+      rule: boundaries.rule,
+      stiffnessMean: kMean,
+      stiffnessLow: kLow,
+      classAtMean: classifyJoint(kMean, boundaries),
+      classAtLow: classifyJoint(kLow, boundaries),
+      boundaries,
+      note,
+    };
+  });
+}
+
+export function classificationJson(c: EndClassification[]): Record<string, unknown> {
+  const out: Record<string, unknown> = {};
+  for (const e of c) {
+    out[e.end] = {
+      rule: e.rule,
+      stiffness_mean: e.stiffnessMean,
+      stiffness_5pct: e.stiffnessLow,
+      class_at_mean: e.classAtMean,
+      class_at_5pct: e.classAtLow,
+      rigid_from: e.boundaries ? e.boundaries.rigidFrom : null,
+      pinned_up_to: e.boundaries ? e.boundaries.pinnedUpTo : null,
+      note: e.note,
+    };
+  }
+  return out;
+}

@@ -11,7 +11,7 @@ import { makeDistribution } from '../probability/makeDistribution.js';
 import { formatQuantity, type UnitSystem } from '../report/displayUnits.js';
 import { InputError } from '../scenario/inputError.js';
 import type { Scalar, Scenario } from '../scenario/types.js';
-import { scenarioForm, scenarioFormChecked } from './columnForm.js';
+import { scenarioForm, scenarioFormChecked, type BetaPoint, type CheckedBetaPoint } from './columnForm.js';
 import { restraintStudy, type RestraintStudyInput, type RestraintStudyResult } from './restraintStudy.js';
 import { restraintSentence } from './restraintSentence.js';
 
@@ -57,8 +57,12 @@ export interface RestraintVerification {
   verifiedBeta: number | null;
 }
 
-/** The checks use the scenario seed plus this (the same at every factor: common random numbers). */
-const RESTRAINT_CHECK_SEED_OFFSET = 0;
+
+/** FORM β and its sampling check at one factor of a study. */
+export interface RestraintEvaluators {
+  form: (factor: number) => BetaPoint;
+  checked: (factor: number) => CheckedBetaPoint;
+}
 
 /**
  * The study with FORM β, then FORM checked by sampling where it decides: at the requirement (or
@@ -66,30 +70,33 @@ const RESTRAINT_CHECK_SEED_OFFSET = 0;
  * anywhere, the whole study is redone on the check's own estimate (same seed and stream at
  * every factor: common random numbers across the root solve) and says so.
  */
-function verifiedRestraintStudy(
-  build: (factor: number) => Scenario,
+export function verifiedRestraintStudy(
+  evaluate: RestraintEvaluators,
   input: Omit<RestraintStudyInput, 'betaAtFactor'>,
-  seed: number,
 ): { study: RestraintStudyResult; verification: RestraintVerification } {
-  const formStudy = restraintStudy({ ...input, betaAtFactor: (f) => scenarioForm(build(f)) });
-  const deciding = decidingPoints(formStudy);
+  const formStudy = restraintStudy({ ...input, betaAtFactor: evaluate.form });
   const checkAt = (role: RestraintCheckPoint['role'], factor: number): RestraintCheckPoint => {
-    const p = scenarioFormChecked(build(factor), seed + RESTRAINT_CHECK_SEED_OFFSET);
+    const p = evaluate.checked(factor);
     const agrees = p.check ? p.check.agrees : true;
     return { role, factor, formBeta: p.beta, checkBeta: p.checkBeta, checkMethod: p.check?.method ?? 'none (nothing random)', agrees };
   };
-  const checks = deciding.map(([role, f]) => checkAt(role, f));
+  const checks = decidingPoints(formStudy).map(([role, f]) => checkAt(role, f));
   const required = checks.find((c) => c.role === 'required');
   if (checks.every((c) => c.agrees)) {
     return { study: formStudy, verification: { method: 'form', checks, verifiedBeta: required ? required.checkBeta : null } };
   }
   const study = restraintStudy({ ...input, betaAtFactor: (f) => {
-    const p = scenarioFormChecked(build(f), seed + RESTRAINT_CHECK_SEED_OFFSET);
+    const p = evaluate.checked(f);
     return { beta: p.checkBeta, pf: p.checkPf };
   } });
   const again = decidingPoints(study).map(([role, f]) => checkAt(role, f));
   const req = again.find((c) => c.role === 'required');
   return { study, verification: { method: 'is', checks: [...checks, ...again.filter((c) => c.role === 'required')], verifiedBeta: req ? req.checkBeta : null } };
+}
+
+/** FORM and its check on the scenario at each factor. */
+function scenarioEvaluators(build: (factor: number) => Scenario, seed: number): RestraintEvaluators {
+  return { form: (f) => scenarioForm(build(f)), checked: (f) => scenarioFormChecked(build(f), seed) };
 }
 
 /** The factors whose β decides the outcome of a study, and the assessed one. */
@@ -170,7 +177,7 @@ export function columnRestraint(
   for (const e of ends) baseStiffness[e] = meanValue(base[e]);
 
   const seed = s.analysis.seed ?? 1;
-  const { study, verification } = verifiedRestraintStudy((f) => edited(f), { baseStiffness, target: s.targetBeta }, seed);
+  const { study, verification } = verifiedRestraintStudy(scenarioEvaluators((f) => edited(f), seed), { baseStiffness, target: s.targetBeta });
 
   const kWith = (t: Scenario): number => {
     const model = buildColumnModel(t);
@@ -195,7 +202,7 @@ export function columnRestraint(
   // the same study with the studied springs known exactly: the K a deterministic check may use
   const fixedBase: Record<string, Scalar> = {};
   for (const e of ends) fixedBase[e] = { kind: 'fixed', value: baseStiffness[e] };
-  const { study: exact, verification: exactVerification } = verifiedRestraintStudy((fct) => edited(fct, fixedBase), { baseStiffness, target: s.targetBeta }, seed);
+  const { study: exact, verification: exactVerification } = verifiedRestraintStudy(scenarioEvaluators((fct) => edited(fct, fixedBase), seed), { baseStiffness, target: s.targetBeta });
   if (exactVerification.method !== 'form') {
     notes.push(`with the connections known exactly, FORM disagreed with its sampling check; that K comes from importance sampling`);
   }

@@ -80,6 +80,9 @@ export function formatAssessment(a: Assessment, system: UnitSystem): string {
   const rows: string[][] = [['method', 'β', 'pf', 'uncertainty', 'calls']];
   const f = a.form;
   if (a.methods.includes('form')) rows.push(['FORM', formatBeta(f.beta), formatProbability(f.pf), f.converged ? 'converged' : 'NOT converged', String(f.calls)]);
+  if (a.methods.includes('form') && f.system.designPoints.length > 1) {
+    rows.push([`FORM system (${f.system.designPoints.length} points)`, formatBeta(f.system.beta), formatProbability(f.system.pf), `bounds [${formatProbability(f.system.bounds.lower)}, ${formatProbability(f.system.bounds.upper)}]`, '']);
+  }
   if (a.sorm) rows.push([`SORM (${a.sorm.used})`, formatBeta(a.sorm.beta), formatProbability(a.sorm.pf), '', String(a.sorm.calls)]);
   if (a.is) rows.push(['importance sampling', formatBeta(a.is.beta), formatProbability(a.is.pf), pct(a.is.cov), String(a.is.calls)]);
   if (a.mc) {
@@ -91,6 +94,10 @@ export function formatAssessment(a: Assessment, system: UnitSystem): string {
       `${a.mc.samples} (${a.mc.failures} failed)`,
     ]);
   }
+  if (a.formCheck) {
+    const c = a.formCheck;
+    rows.push([`FORM self-check (${c.method === 'Monte Carlo' ? 'MC' : 'IS'})`, formatBeta(c.beta), formatProbability(c.pf), `${pct(c.cov)}, ${c.agrees ? 'agrees' : 'DISAGREES'}`, `${c.calls} (${c.failures} failed)`]);
+  }
   if (a.subset) rows.push(['subset simulation', formatBeta(a.subset.beta), formatProbability(a.subset.pf), pct(a.subset.cov), String(a.subset.calls)]);
   lines.push(textTable(rows));
   lines.push('');
@@ -98,7 +105,7 @@ export function formatAssessment(a: Assessment, system: UnitSystem): string {
   const g = a.governing;
   const meets = g.beta >= s.targetBeta;
   lines.push(
-    `  verdict: β = ${formatBeta(g.beta)} (${LABEL[g.method]}) against the target ${s.targetBeta}${s.targetSource ? ` (${s.targetSource})` : ''}: ` +
+    `  verdict: β = ${formatBeta(g.beta)} (${g.basis ?? LABEL[g.method]}) against the target ${s.targetBeta}${s.targetSource ? ` (${s.targetSource})` : ''}: ` +
       (meets ? 'MEETS the target.' : 'does NOT meet the target.'),
   );
   lines.push('');

@@ -37,7 +37,8 @@ export async function runRestraint(file: string, opts: RestraintOptions): Promis
     return;
   }
   const ends = r.study.ends;
-  const rows: string[][] = [[...ends.map((e) => `${e} mean k`), 'FORM β', 'pf', '']];
+  const betaLabel = r.verification.method === 'form' ? 'FORM β' : 'β (IS check)';
+  const rows: string[][] = [[...ends.map((e) => `${e} mean k`), betaLabel, 'pf', '']];
   // the root solve adds its iterates to the curve: show the grid once, plus the point nearest the root
   const required = r.study.requiredFactor;
   const hasRoot = required !== null && Number.isFinite(required) && required > 0;
@@ -60,7 +61,7 @@ export async function runRestraint(file: string, opts: RestraintOptions): Promis
   }
   const out = [
     `stanchion restraint: ${scenario.title}`,
-    `  FORM β as the mean stiffness of the ${ends.join(' and ')} connection${ends.length > 1 ? 's' : ''} is scaled (coefficient of variation kept); target β = ${r.study.target}`,
+    `  ${betaLabel} as the mean stiffness of the ${ends.join(' and ')} connection${ends.length > 1 ? 's' : ''} is scaled (coefficient of variation kept); target β = ${r.study.target}`,
     '',
     textTable(rows),
     '',

@@ -10,6 +10,9 @@ export const DEFAULT_STEP: Record<DifferenceScheme, number> = { central: 1e-5, f
 /**
  * Writes ∇G(u) into `out`. `gAtU` = G(u), already known (used by forward differences).
  * `work` is a scratch vector of the same length. u is left unchanged.
+ * With `sides`, also writes the one-sided differences: forward into sides[i], backward into
+ * sides[n + i] (NaN for the forward scheme, which has no backward point). They cost nothing
+ * extra with central differences and tell a kink (|u_i|-like effect) from a smooth slope.
  */
 export function finiteDifferenceGradient(
   G: (u: Float64Array) => number,
@@ -19,7 +22,9 @@ export function finiteDifferenceGradient(
   h: number,
   out: Float64Array,
   work: Float64Array,
+  sides?: Float64Array,
 ): void {
+  const n = u.length;
   work.set(u);
   for (let i = 0; i < u.length; i++) {
     const ui = u[i];
@@ -29,9 +34,33 @@ export function finiteDifferenceGradient(
       work[i] = ui - h;
       const down = G(work);
       out[i] = (up - down) / (2 * h);
+      if (sides) {
+        sides[i] = (up - gAtU) / h;
+        sides[n + i] = (gAtU - down) / h;
+      }
     } else {
       out[i] = (up - gAtU) / h;
+      if (sides) {
+        sides[i] = out[i];
+        sides[n + i] = Number.NaN;
+      }
     }
     work[i] = ui;
   }
+}
+
+/**
+ * Components whose one-sided differences do not agree in sign, a zero among them: the gradient
+ * vanishes or has a kink there (an effect symmetric in u_i, such as that of |u_i|), so a search
+ * that follows ∇g cannot tell which way along u_i the failure lies.
+ */
+export function doubtfulComponents(sides: Float64Array): number[] {
+  const n = sides.length / 2;
+  const out: number[] = [];
+  for (let i = 0; i < n; i++) {
+    const f = sides[i];
+    const b = sides[n + i];
+    if (!(f * b > 0)) out.push(i);
+  }
+  return out;
 }

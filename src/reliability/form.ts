@@ -1,16 +1,25 @@
 /**
- * First-order reliability method: improved HL-RF from the origin of u-space, then a few
- * deterministic restarts to look for other design points.
+ * First-order reliability method: improved HL-RF from the origin of u-space, then searches from
+ * other starts for further design points, combined as a series system.
  *
  * β = ‖u*‖ when g(0) > 0; when g(0) <= 0 the origin already fails and β = −‖u*‖ (pf > ½).
  * pf = Φ(−β), computed as normalSf(β) (never 1 − Φ(β)). α = u* / β, importance α² (sums to 1).
+ *
+ * Doubtful searches. A gradient component that vanishes, or whose one-sided differences differ
+ * in sign (an effect symmetric in u_i, e.g. of |u_i|: a bow whose sign is unknown), gives HL-RF
+ * no direction along u_i: it converges where that component is zero, which may be a saddle of
+ * the distance on the limit state rather than its closest point. Every such direction, at the
+ * start and at each converged point, is searched again from starts offset along it, both signs.
+ * The converged points whose Φ(−β) is not negligible beside the nearest one's are combined as a
+ * linearised series system (seriesSystem.ts). Without doubt, only the mirror image −u* is tried.
  */
 import { normalSf } from '../probability/normal.js';
-import type { DesignPointCandidate, FormResult, ReliabilityProblem } from './types.js';
+import type { DesignPointCandidate, FormResult, FormSystem, ReliabilityProblem } from './types.js';
 import { checkedLimitState } from './checkedLimitState.js';
-import { DEFAULT_STEP, type DifferenceScheme } from './finiteDifferenceGradient.js';
+import { DEFAULT_STEP, doubtfulComponents, type DifferenceScheme } from './finiteDifferenceGradient.js';
 import { improvedHlrf, type HlrfOutcome, type HlrfSettings } from './improvedHlrf.js';
 import { gammaImportance } from './gammaImportance.js';
+import { seriesSystemFailure } from './seriesSystem.js';
 import { norm } from './vector.js';
 
 export interface FormOptions {
@@ -24,14 +33,27 @@ export interface FormOptions {
   differences?: DifferenceScheme;
   /** Finite-difference step in u (default 1e-5 central, 1e-7 forward). */
   step?: number;
-  /** Extra starts searching for other design points (default 4; 0 turns the check off). */
+  /**
+   * Extra starts that do not depend on doubt: the mirror image −u*, then ±b along each axis.
+   * Default 1 (the mirror) after a converged search, 4 after a failed one; 0 turns them off.
+   */
   restarts?: number;
+  /** Search again along doubtful directions (default true; see the file comment). */
+  probeDoubtful?: boolean;
   /** Starting point in u-space (default the origin). */
   start?: ArrayLike<number>;
+  /** Seed of the multinormal integration when three or more design points count (default fixed). */
+  seed?: number;
 }
 
-/** Another design point counts when its Φ(−β) is at least this share of the main one's. */
-const SIMILAR_PF_SHARE = 0.1;
+/** A design point enters the series system when its Φ(−β) is at least this share of the nearest one's. */
+export const SYSTEM_PF_SHARE = 0.01;
+/** Blind restarts after a failed search from the origin. */
+const RESCUE_RESTARTS = 4;
+/** Offset of the doubtful-direction starts, in standard deviations. */
+const PROBE_OFFSET = 1;
+/** At most this many doubtful directions are searched (kinks before flat components). */
+const MAX_PROBE_DIRECTIONS = 8;
 
 export function form(problem: ReliabilityProblem, opts: FormOptions = {}): FormResult {
   const n = problem.transform.n;
@@ -53,12 +75,11 @@ export function form(problem: ReliabilityProblem, opts: FormOptions = {}): FormR
   const start = opts.start ?? origin;
   const main = improvedHlrf(G, start, opts.start === undefined ? g0 : undefined, settings);
   const warnings: string[] = [];
-
-  // Restarts: the mirror image of the design point, then ±b along each axis. They also rescue
-  // a search that failed from the origin (e.g. a gradient that vanishes there).
   const found: HlrfOutcome[] = [main];
-  const restarts = originFails ? 0 : opts.restarts ?? 4;
   const b = main.converged ? Math.max(1, norm(main.u)) : 1;
+
+  // Blind restarts: the mirror image of the design point, then ±b along each axis.
+  const restarts = originFails ? 0 : opts.restarts ?? (main.converged ? 1 : RESCUE_RESTARTS);
   const starts: Float64Array[] = [];
   if (restarts > 0 && main.converged && norm(main.u) > 0) starts.push(main.u.map((v) => -v));
   for (let i = 0; starts.length < restarts && i < n; i++) {
@@ -69,36 +90,64 @@ export function form(problem: ReliabilityProblem, opts: FormOptions = {}): FormR
       starts.push(s);
     }
   }
-  for (const s of starts) {
-    const r = improvedHlrf(G, s, undefined, settings);
-    if (r.converged) found.push(r);
+  for (const s of starts) found.push(improvedHlrf(G, s, undefined, settings));
+
+  // Doubtful directions: at the start, and at every converged point, searched once each.
+  const doubtful = new Set<number>();
+  if (!originFails && opts.probeDoubtful !== false) {
+    const probed = new Set<number>();
+    const directionsAt = (r: HlrfOutcome, atStart: boolean): number[] => {
+      const sides = atStart ? r.sidesAtStart : scheme === 'central' ? r.sides : centralSides(G, r.u, r.g, DEFAULT_STEP.central);
+      return rankDoubtful(sides);
+    };
+    const probeAround = (centre: Float64Array, dirs: number[]): void => {
+      for (const i of dirs) {
+        doubtful.add(i);
+        if (probed.has(i) || probed.size >= MAX_PROBE_DIRECTIONS) continue;
+        probed.add(i);
+        for (const sign of [1, -1]) {
+          const s = Float64Array.from(centre);
+          s[i] += sign * PROBE_OFFSET;
+          const r = improvedHlrf(G, s, undefined, settings);
+          found.push(r);
+          if (r.converged) probeAround(r.u, directionsAt(r, false));
+        }
+      }
+    };
+    probeAround(main.converged ? main.u : Float64Array.from(start), directionsAt(main, true));
+    for (const r of found.slice()) if (r.converged) probeAround(r.u, directionsAt(r, false));
   }
-  // The nearest converged point is the design point; keep distinct others.
+
+  // The nearest converged point is the design point.
   let best = main;
   for (const r of found) {
-    if (r === main) continue;
+    if (r === main || !r.converged) continue;
     if (!best.converged || norm(r.u) < norm(best.u) - 1e-9 * b) best = r;
   }
   if (best !== main) {
     warnings.push(main.converged
-      ? `a restart found a closer design point than the search from the origin (β ${norm(main.u).toPrecision(6)} → ${norm(best.u).toPrecision(6)})`
+      ? `another start found a closer design point than the search from the origin (β ${norm(main.u).toPrecision(6)} → ${norm(best.u).toPrecision(6)})`
       : `the search from the origin failed (${main.reason}); a restart converged`);
   }
   const betaBest = norm(best.u);
   const others: DesignPointCandidate[] = [];
   const x = new Float64Array(n);
-  for (const r of found) {
-    if (r === best || !r.converged) continue;
-    if (norm(r.u.map((v, i) => v - best.u[i])) <= 1e-3 * b) continue;
-    if (others.some((o) => norm(r.u.map((v, i) => v - o.designPointU[i])) <= 1e-3 * b)) continue;
-    const beta = norm(r.u);
-    if (normalSf(beta) < SIMILAR_PF_SHARE * normalSf(betaBest)) continue;
-    problem.transform.toPhysical(r.u, x);
-    others.push({ beta, designPointU: Array.from(r.u), designPointX: Array.from(x) });
+  if (!originFails) {
+    for (const r of found) {
+      if (r === best || !r.converged) continue;
+      if (norm(r.u.map((v, i) => v - best.u[i])) <= 1e-3 * b) continue;
+      if (others.some((o) => norm(r.u.map((v, i) => v - o.designPointU[i])) <= 1e-3 * b)) continue;
+      const beta = norm(r.u);
+      if (!(beta > 0) || normalSf(beta) < SYSTEM_PF_SHARE * normalSf(betaBest)) continue;
+      problem.transform.toPhysical(r.u, x);
+      others.push({ beta, designPointU: Array.from(r.u), designPointX: Array.from(x), alpha: Array.from(r.u, (v) => v / beta) });
+    }
+    others.sort((p, q) => p.beta - q.beta);
   }
   const multipleDesignPoints = others.length > 0;
-  if (multipleDesignPoints) {
-    warnings.push(`${others.length + 1} design points with similar β (${[betaBest, ...others.map((o) => o.beta)].map((v) => v.toPrecision(4)).join(', ')}): FORM and SORM see only one; check with simulation`);
+  const doubtfulNames = [...doubtful].sort((i, j) => i - j).map((i) => problem.names[i]);
+  if (doubtfulNames.length > 0) {
+    warnings.push(`the gradient of g vanishes or changes sign along ${doubtfulNames.join(', ')}: searched again from starts offset along ${doubtfulNames.length === 1 ? 'it' : 'them'}`);
   }
   if (!best.converged) warnings.push(`FORM did not converge: ${best.reason}`);
   if (originFails) warnings.push(`g at the origin of u-space is ${g0} <= 0: the median point already fails, β is negative`);
@@ -107,14 +156,19 @@ export function form(problem: ReliabilityProblem, opts: FormOptions = {}): FormR
   const gradNorm = norm(best.gradient);
   const alpha = beta !== 0 ? Array.from(best.u, (v) => v / beta) : Array.from(best.gradient, (v) => -v / gradNorm);
   problem.transform.toPhysical(best.u, x);
+  const governing: DesignPointCandidate = { beta, designPointU: Array.from(best.u), designPointX: Array.from(x), alpha };
+  const system = formSystem(governing, others, opts.seed);
+  if (multipleDesignPoints) {
+    warnings.push(`${others.length + 1} design points (β ${[betaBest, ...others.map((o) => o.beta)].map((v) => v.toPrecision(4)).join(', ')}): as a series system β = ${system.beta.toPrecision(4)}, pf = ${system.pf.toPrecision(3)} (${system.method}); SORM sees only the nearest`);
+  }
   const result: FormResult = {
     names: problem.names.slice(),
     beta,
     pf: normalSf(beta),
     converged: best.converged,
     iterations: best.iterations,
-    designPointU: Array.from(best.u),
-    designPointX: Array.from(x),
+    designPointU: governing.designPointU,
+    designPointX: governing.designPointX,
     alpha,
     importance: alpha.map((a) => a * a),
     gamma: gammaImportance(problem.transform, best.u, alpha),
@@ -125,8 +179,43 @@ export function form(problem: ReliabilityProblem, opts: FormOptions = {}): FormR
     originFails,
     multipleDesignPoints,
     otherDesignPoints: others,
+    doubtfulDirections: doubtfulNames,
+    system,
     warnings,
   };
   if (best.reason !== undefined) result.reason = best.reason;
   return result;
+}
+
+/** The series system of the design points that count; one point gives exactly FORM's β and pf. */
+function formSystem(governing: DesignPointCandidate, others: DesignPointCandidate[], seed: number | undefined): FormSystem {
+  const points = [governing, ...others];
+  if (others.length === 0 || !(governing.beta > 0)) {
+    const pf = normalSf(governing.beta);
+    return { beta: governing.beta, pf, method: 'one design point: Φ(−β)', bounds: { lower: pf, upper: pf }, designPoints: [governing] };
+  }
+  const s = seriesSystemFailure(points.map((p) => p.beta), points.map((p) => p.alpha), seed === undefined ? undefined : { seed });
+  return { ...s, designPoints: points };
+}
+
+/** Doubtful components, kinks (one-sided differences of opposite sign) before flat ones. */
+function rankDoubtful(sides: Float64Array): number[] {
+  const n = sides.length / 2;
+  const kink = (i: number): number => (sides[i] * sides[n + i] < 0 ? 0 : 1);
+  return doubtfulComponents(sides).sort((i, j) => kink(i) - kink(j) || i - j);
+}
+
+/** One-sided differences at u by an extra central pass (the forward scheme has no backward point). */
+function centralSides(G: (u: Float64Array) => number, u: Float64Array, g: number, h: number): Float64Array {
+  const n = u.length;
+  const sides = new Float64Array(2 * n);
+  const work = Float64Array.from(u);
+  for (let i = 0; i < n; i++) {
+    work[i] = u[i] + h;
+    sides[i] = (G(work) - g) / h;
+    work[i] = u[i] - h;
+    sides[n + i] = (g - G(work)) / h;
+    work[i] = u[i];
+  }
+  return sides;
 }

@@ -34,6 +34,9 @@ export interface HlrfOutcome {
   reason?: string;
   iterations: number;
   history: FormStep[];
+  /** One-sided differences at the start and at the returned point (forward, then backward; see finiteDifferenceGradient). */
+  sidesAtStart: Float64Array;
+  sides: Float64Array;
 }
 
 const ARMIJO_A = 1e-4;
@@ -52,13 +55,15 @@ export function improvedHlrf(
   const d = new Float64Array(n);
   const trial = new Float64Array(n);
   let g = gAtStart ?? G(u);
-  finiteDifferenceGradient(G, u, g, s.scheme, s.step, grad, work);
+  const sides = new Float64Array(2 * n);
+  finiteDifferenceGradient(G, u, g, s.scheme, s.step, grad, work, sides);
+  const sidesAtStart = sides.slice();
   const history: FormStep[] = [{ iteration: 0, beta: s.betaSign * norm(u), g, step: 0 }];
 
   for (let k = 1; ; k++) {
     const gradNorm = norm(grad);
     if (!(gradNorm > 0)) {
-      return { u, g, gradient: grad, converged: false, reason: 'the gradient of g vanished (flat limit state)', iterations: k - 1, history };
+      return { u, g, gradient: grad, converged: false, reason: 'the gradient of g vanished (flat limit state)', iterations: k - 1, history, sidesAtStart, sides };
     }
     const along = dot(grad, u) / gradNorm;
     let offAxis = 0;
@@ -68,11 +73,11 @@ export function improvedHlrf(
     }
     const uNorm = norm(u);
     if (Math.abs(g) <= s.tolG * s.gScale && Math.sqrt(offAxis) <= s.tolU * Math.max(1, uNorm)) {
-      return { u, g, gradient: grad, converged: true, iterations: k - 1, history };
+      return { u, g, gradient: grad, converged: true, iterations: k - 1, history, sidesAtStart, sides };
     }
     if (k > s.maxIterations) {
       return {
-        u, g, gradient: grad, converged: false, iterations: k - 1, history,
+        u, g, gradient: grad, converged: false, iterations: k - 1, history, sidesAtStart, sides,
         reason: `no convergence in ${s.maxIterations} iterations (|g|/scale = ${(Math.abs(g) / s.gScale).toExponential(2)})`,
       };
     }
@@ -96,7 +101,7 @@ export function improvedHlrf(
     }
     u.set(trial);
     g = gTrial;
-    finiteDifferenceGradient(G, u, g, s.scheme, s.step, grad, work);
+    finiteDifferenceGradient(G, u, g, s.scheme, s.step, grad, work, sides);
     history.push({ iteration: k, beta: s.betaSign * norm(u), g, step: lambda });
   }
 }

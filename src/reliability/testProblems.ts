@@ -53,6 +53,22 @@ export function paraboloid(args: { n: number; beta: number; kappa: number }): Re
   };
 }
 
+/**
+ * g = c − u1 − k|u2| (+ n − 2 variables without effect): a load u1 made worse by an effect of
+ * unknown sign, like a bow of either direction. Two design points, on the half-planes
+ * u1 ± k u2 ≥ c: β = c/√(1 + k²) each, α·α' = (1 − k²)/(1 + k²). At every point with u2 = 0 the
+ * gradient along u2 has one-sided differences of opposite sign. Exact pf = ∫ φ(t) Φ(−(c − k|t|)) dt.
+ */
+export function symmetricKink(args: { c: number; k: number; n?: number }): ReliabilityProblem {
+  const { c, k } = args;
+  const n = args.n ?? 2;
+  return {
+    names: Array.from({ length: n }, (_, i) => `u${i + 1}`),
+    transform: identity(n),
+    g: (x) => c - x[0] - k * Math.abs(x[1]),
+  };
+}
+
 /** g = R − S, optionally correlated (Nataf). */
 export function resistanceMinusLoad(args: { r: DistSpec; s: DistSpec; rho?: number }): ReliabilityProblem {
   const rho = args.rho ?? 0;

@@ -38,6 +38,19 @@ export interface DesignPointCandidate {
   beta: number;
   designPointU: number[];
   designPointX: number[];
+  /** u* / β. */
+  alpha: number[];
+}
+
+/** FORM's design points combined as a linearised series system (seriesSystem.ts). */
+export interface FormSystem {
+  beta: number;
+  pf: number;
+  method: string;
+  /** Ditlevsen's bounds on pf. */
+  bounds: { lower: number; upper: number };
+  /** The governing design point first, then the others by increasing β. */
+  designPoints: DesignPointCandidate[];
 }
 
 export interface FormResult {
@@ -73,6 +86,10 @@ export interface FormResult {
   /** A distinct design point with a similar β was found from another start. */
   multipleDesignPoints: boolean;
   otherDesignPoints: DesignPointCandidate[];
+  /** Variables along which the gradient vanished or changed sign (searched again from offset starts). */
+  doubtfulDirections: string[];
+  /** All design points that count, as a series system; with one point, β and pf of FORM itself. */
+  system: FormSystem;
   warnings: string[];
 }
 

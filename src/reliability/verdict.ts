@@ -7,6 +7,8 @@
  * (the one with the smallest CoV) when |ln p − ln p_ref| <= max(k·s_ref, ln 1.1), i.e. within
  * the simulation's noise or within 10 %, whichever is wider. Monte Carlo with no failure gives
  * only an upper bound (its Wilson limit): the others agree with it when they lie below it.
+ * FORM enters with the pf of its series system of design points (equal to Φ(−β) when there is
+ * one); SORM corrects only the nearest design point, so with several FORM's system is preferred.
  */
 import type { FormResult, IsResult, McResult, SormResult, SubsetResult } from './types.js';
 
@@ -91,7 +93,8 @@ export function verdict(input: VerdictInput, opts: VerdictOptions = {}): Verdict
     comparisons.push(c);
     return c;
   };
-  const cForm = form ? compare('form', form.pf, null) : null;
+  const formPf = form ? form.system.pf : NaN;
+  const cForm = form ? compare('form', formPf, null) : null;
   const cSorm = sorm ? compare('sorm', sorm.pf, null) : null;
   for (const s of sims) compare(s.method, s.pf, s.cov);
   if (mc && mc.failures === 0) {
@@ -103,7 +106,8 @@ export function verdict(input: VerdictInput, opts: VerdictOptions = {}): Verdict
   const agree = comparisons.every((c) => c.consistent !== false);
   const base = { agree, reference: ref ? ref.method : null, comparisons };
   const formOk = form !== undefined && form.converged;
-  const approx: MethodName | null = sorm && sorm.used !== 'form' ? 'sorm' : formOk ? 'form' : null;
+  const severalPoints = form !== undefined && form.system.designPoints.length > 1;
+  const approx: MethodName | null = sorm && sorm.used !== 'form' && !severalPoints ? 'sorm' : formOk ? 'form' : null;
 
   // No usable simulation.
   if (!ref || ref.cov > maxUsefulCov) {
@@ -111,18 +115,21 @@ export function verdict(input: VerdictInput, opts: VerdictOptions = {}): Verdict
     if (mcBound !== null && mc) {
       const head = `MC has 0 failures in ${mc.samples} samples: its pf is only an upper bound (≤ ${mcBound.toExponential(2)})`;
       if (approx) {
-        const p = approx === 'sorm' ? sorm!.pf : form!.pf;
+        const p = approx === 'sorm' ? sorm!.pf : formPf;
         return { ...base, trust: approx, reason: `${head}; ${LABEL[approx]} ${p <= mcBound ? 'lies below it' : 'exceeds it, so one of them is wrong'}.` };
       }
       return { ...base, trust: 'mc', reason: `${head}.` };
     }
-    if (form && sorm && approx) {
-      const d = sorm.pf / form.pf - 1;
+    if (form && sorm && approx && !severalPoints) {
+      const d = sorm.pf / formPf - 1;
       const extra = noisy ? `; ${noisy}` : '';
-      if (Math.abs(Math.log(sorm.pf / form.pf)) > RELATIVE_FLOOR) {
+      if (Math.abs(Math.log(sorm.pf / formPf)) > RELATIVE_FLOOR) {
         return { ...base, agree: false, trust: approx, reason: `FORM and SORM differ by ${pct(d)}: curvature matters, trust SORM (better, confirm with IS)${extra}.` };
       }
       return { ...base, trust: approx, reason: `FORM and SORM agree within ${pct(d)}: the limit state is nearly flat at the design point${extra}.` };
+    }
+    if (approx === 'form' && severalPoints) {
+      return { ...base, trust: 'form', reason: `FORM found ${form!.system.designPoints.length} design points and combines them as a series system${sorm ? ' (SORM corrects only the nearest)' : ''}; its error is unknown without a simulation${noisy ? ` (${noisy})` : ''}.` };
     }
     if (approx) return { ...base, trust: approx, reason: `Only ${LABEL[approx]} gave a usable estimate; its error is unknown without a simulation${noisy ? ` (${noisy})` : ''}.` };
     if (ref) return { ...base, trust: ref.method, reason: `${LABEL[ref.method]} is the only estimate, and a noisy one (CoV ${pct(ref.cov)}).` };

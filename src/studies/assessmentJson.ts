@@ -79,9 +79,24 @@ export function reliabilityJson(a: Assessment): Record<string, unknown> {
       origin_fails: f.originFails,
       reason: f.reason,
       ...characteristicJson(a),
+      doubtful_directions: f.doubtfulDirections,
+      system: {
+        beta: f.system.beta,
+        pf: f.system.pf,
+        method: f.system.method,
+        bounds: f.system.bounds,
+        design_points: f.system.designPoints.map((p) => ({ beta: p.beta, design_point: byName(f.names, p.designPointX), alpha: byName(f.names, p.alpha) })),
+      },
     };
     const joints = designPointConnections(a);
     if (joints) Object.assign(r.form as Record<string, unknown>, connectionJson(joints, 'form design point'));
+    if (a.formCheck) {
+      const c = a.formCheck;
+      (r.form as Record<string, unknown>).check = {
+        method: c.method, pf: c.pf, cov: c.cov, beta: c.beta, samples: c.samples, failures: c.failures, seed: c.seed,
+        beta_band: c.betaBand, upper_bound: c.upperBound, agrees: c.agrees, reason: c.reason,
+      };
+    }
   }
   if (a.sorm) {
     r.sorm = {

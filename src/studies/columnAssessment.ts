@@ -9,6 +9,7 @@ import { deterministicCheck, type CheckResult } from '../limitState/deterministi
 import { withMoments, withScalar } from '../limitState/scenarioEdits.js';
 import { normalStream } from '../probability/rng.js';
 import { form } from '../reliability/form.js';
+import { checkEstimate, checkForm, withinCheckBand, type FormCheckResult } from '../reliability/formCheck.js';
 import { importanceSamplingAtDesignPoint } from '../reliability/importanceSampling.js';
 import { monteCarlo } from '../reliability/monteCarlo.js';
 import { sorm } from '../reliability/sorm.js';
@@ -87,7 +88,10 @@ export interface Assessment {
   mc?: McResult;
   subset?: SubsetResult;
   verdict: Verdict;
-  governing: { method: Method; beta: number; pf: number };
+  /** The estimate put against the target; `basis` says why when it is not the method's own result. */
+  governing: { method: Method; beta: number; pf: number; basis?: string };
+  /** FORM's self-check, run whenever FORM or SORM would decide the verdict alone. */
+  formCheck?: FormCheckResult;
   sensitivity?: SensitivityStudy;
   restraint?: ColumnRestraintResult;
   samples: SamplesSummary;
@@ -168,7 +172,8 @@ function samplesSummary(problem: ReliabilityProblem, model: ColumnModel, seed: n
 /** The estimate put against the target: the one the verdict trusts, else the best available. */
 function governingEstimate(a: Pick<Assessment, 'form' | 'sorm' | 'is' | 'mc' | 'subset' | 'methods'>, v: Verdict) {
   const pick = (m: Method) => {
-    const r = a[m];
+    // FORM stands for its series system of design points (its own β when there is one).
+    const r = m === 'form' ? a.form.system : a[m];
     return r ? { method: m, beta: r.beta, pf: r.pf } : undefined;
   };
   if (v.trust) {
@@ -179,7 +184,37 @@ function governingEstimate(a: Pick<Assessment, 'form' | 'sorm' | 'is' | 'mc' | '
     const g = pick(m);
     if (g && a.methods.includes(m)) return g;
   }
-  return { method: 'form' as Method, beta: a.form.beta, pf: a.form.pf };
+  return { method: 'form' as Method, beta: a.form.system.beta, pf: a.form.system.pf };
+}
+
+/**
+ * When FORM or SORM would decide alone, check it by sampling; if the check disagrees the
+ * verdict rests on the check's estimate instead, and says so in one plain line.
+ */
+export function checkedGoverning(
+  problem: ReliabilityProblem,
+  f: FormResult,
+  v: Verdict,
+  governing: Assessment['governing'],
+  seed: number,
+): { governing: Assessment['governing']; verdict: Verdict; check?: FormCheckResult; warning?: string } {
+  if (governing.method !== 'form' && governing.method !== 'sorm') return { governing, verdict: v };
+  const check = checkForm(problem, f, { seed });
+  const label = governing.method === 'form' ? 'FORM' : 'SORM';
+  if (withinCheckBand(check, governing.beta)) {
+    return { governing, verdict: { ...v, reason: `${v.reason} ${check.reason}` }, check };
+  }
+  const estimate = checkEstimate(check);
+  const bound = check.upperBound !== null;
+  const line = `${label} (β = ${governing.beta.toFixed(2)}) disagrees with its self-check (${check.method}, ${check.samples} samples: ` +
+    `${bound ? `no failure, pf below about ${estimate.pf.toPrecision(2)}, β above ${estimate.beta.toFixed(2)}` : `β = ${estimate.beta.toFixed(2)}`}); the verdict rests on the check, not on ${label}.`;
+  const method: Method = check.method === 'Monte Carlo' ? 'mc' : 'is';
+  return {
+    governing: { method, ...estimate, basis: `${label}'s self-check by ${check.method}${bound ? ', upper bound' : ''}` },
+    verdict: { ...v, agree: false, trust: method, reason: `${v.reason} ${line}` },
+    check,
+    warning: line,
+  };
 }
 
 export async function assessColumn(given: Scenario, opts: AssessOptions = {}): Promise<Assessment> {
@@ -250,7 +285,9 @@ export async function assessColumn(given: Scenario, opts: AssessOptions = {}): P
     subset: out.subset,
   });
   const base = { form: formResult, ...out, methods };
-  const governing = governingEstimate(base, v);
+  const checked = checkedGoverning(problem, formResult, v, governingEstimate(base, v), seed);
+  const governing = checked.governing;
+  if (checked.warning) warnings.unshift(checked.warning);
 
   let sensitivity: SensitivityStudy | undefined;
   let restraint: ColumnRestraintResult | undefined;
@@ -271,8 +308,9 @@ export async function assessColumn(given: Scenario, opts: AssessOptions = {}): P
     workers,
     form: formResult,
     ...out,
-    verdict: v,
+    verdict: checked.verdict,
     governing,
+    formCheck: checked.check,
     sensitivity,
     restraint,
     samples: samplesSummary(problem, model, seed, formResult),

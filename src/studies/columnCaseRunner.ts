@@ -9,6 +9,7 @@ import { buildColumnModel, type ColumnModel } from '../limitState/columnModel.js
 import { problemFromModel } from '../limitState/columnRecipe.js';
 import { deterministicCheck } from '../limitState/deterministicCheck.js';
 import { form } from '../reliability/form.js';
+import { checkEstimate, checkForm } from '../reliability/formCheck.js';
 import { importanceSamplingAtDesignPoint } from '../reliability/importanceSampling.js';
 import { monteCarlo } from '../reliability/monteCarlo.js';
 import { sorm } from '../reliability/sorm.js';
@@ -40,7 +41,7 @@ function formOrCertain(model: ColumnModel, problem: ReliabilityProblem | null): 
   if (problem === null) {
     return model.g(model.mean) > 0 ? { beta: Infinity, pf: 0, converged: true } : { beta: -Infinity, pf: 1, converged: true };
   }
-  // restarts: 0 — a sweep wants the trend; `assess` looks for other design points
+  // restarts: 0 — no blind restarts; doubtful directions are still searched (form.ts)
   return form(problem, { restarts: 0 });
 }
 
@@ -61,9 +62,23 @@ async function runCase(args: ColumnCaseArgs, base: ReturnType<typeof parseSweepB
   const problem = certain ? null : problemFromModel(model);
   const f = needsForm ? formOrCertain(model, problem) : null;
   if (f && methods.includes('form')) {
-    out.beta_form = f.beta;
-    out.pf_form = f.pf;
-    out.converged_form = f.converged;
+    if (problem && 'designPointU' in f) {
+      // FORM's series system, checked by sampling; a row where they disagree carries the check's value.
+      const check = checkForm(problem, f, { seed: c.seed });
+      const e = checkEstimate(check);
+      out.beta_form = check.agrees ? f.system.beta : e.beta;
+      out.pf_form = check.agrees ? f.system.pf : e.pf;
+      out.converged_form = f.converged;
+      out.form_check = check.agrees ? 'agrees' : 'disagrees: beta_form is the sampling check';
+      out.beta_form_unchecked = f.system.beta;
+      out.beta_form_check = check.beta;
+      out.design_points_form = f.system.designPoints.length;
+    } else {
+      out.beta_form = f.beta;
+      out.pf_form = f.pf;
+      out.converged_form = f.converged;
+      out.form_check = 'certain';
+    }
   }
   if (methods.includes('sorm') && f) {
     if (problem && 'designPointU' in f) {

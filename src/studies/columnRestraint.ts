@@ -11,8 +11,8 @@ import { makeDistribution } from '../probability/makeDistribution.js';
 import { formatQuantity, type UnitSystem } from '../report/displayUnits.js';
 import { InputError } from '../scenario/inputError.js';
 import type { Scalar, Scenario } from '../scenario/types.js';
-import { scenarioForm } from './columnForm.js';
-import { restraintStudy, type RestraintStudyResult } from './restraintStudy.js';
+import { scenarioForm, scenarioFormChecked, type BetaPoint, type CheckedBetaPoint } from './columnForm.js';
+import { restraintStudy, type RestraintStudyInput, type RestraintStudyResult } from './restraintStudy.js';
 import { restraintSentence } from './restraintSentence.js';
 
 export type EndChoice = 'bottom' | 'top' | 'both';
@@ -32,8 +32,94 @@ export interface ColumnRestraintResult {
    * exactly (no scatter) and just reach the target β; null when even rigid ends fall short.
    */
   kDeterministic: number | null;
+  /** How the requirement's β was established and checked. */
+  verification: RestraintVerification;
   sentence: string;
   notes: string[];
+}
+
+/** One FORM β that decides the study, against its sampling check. */
+export interface RestraintCheckPoint {
+  /** Why this point decides: the requirement, the assessed stiffness, pinned or rigid ends. */
+  role: 'required' | 'assessed' | 'pinned' | 'fixed';
+  factor: number;
+  formBeta: number;
+  checkBeta: number;
+  checkMethod: string;
+  agrees: boolean;
+}
+
+export interface RestraintVerification {
+  /** 'form' when FORM's β agreed with its check at every deciding point; 'is' when the study was redone with the check's estimates. */
+  method: 'form' | 'is';
+  checks: RestraintCheckPoint[];
+  /** The check's β at the reported requirement (null when there is no finite requirement). */
+  verifiedBeta: number | null;
+}
+
+
+/** FORM β and its sampling check at one factor of a study. */
+export interface RestraintEvaluators {
+  form: (factor: number) => BetaPoint;
+  checked: (factor: number) => CheckedBetaPoint;
+}
+
+/**
+ * The study with FORM β, then FORM checked by sampling where it decides: at the requirement (or
+ * at the ideal end that decides) and at the assessed stiffness (factor 1). If the check disagrees
+ * anywhere, the whole study is redone on the check's own estimate (same seed and stream at
+ * every factor: common random numbers across the root solve) and says so.
+ */
+export function verifiedRestraintStudy(
+  evaluate: RestraintEvaluators,
+  input: Omit<RestraintStudyInput, 'betaAtFactor'>,
+): { study: RestraintStudyResult; verification: RestraintVerification } {
+  const formStudy = restraintStudy({ ...input, betaAtFactor: evaluate.form });
+  const checkAt = (role: RestraintCheckPoint['role'], factor: number): RestraintCheckPoint => {
+    const p = evaluate.checked(factor);
+    const agrees = p.check ? p.check.agrees : true;
+    return { role, factor, formBeta: p.beta, checkBeta: p.checkBeta, checkMethod: p.check?.method ?? 'none (nothing random)', agrees };
+  };
+  const checks = decidingPoints(formStudy).map(([role, f]) => checkAt(role, f));
+  const required = checks.find((c) => c.role === 'required');
+  if (checks.every((c) => c.agrees)) {
+    return { study: formStudy, verification: { method: 'form', checks, verifiedBeta: required ? required.checkBeta : null } };
+  }
+  const study = restraintStudy({ ...input, betaAtFactor: (f) => {
+    const p = evaluate.checked(f);
+    return { beta: p.checkBeta, pf: p.checkPf };
+  } });
+  const again = decidingPoints(study).map(([role, f]) => checkAt(role, f));
+  const req = again.find((c) => c.role === 'required');
+  return { study, verification: { method: 'is', checks: [...checks, ...again.filter((c) => c.role === 'required')], verifiedBeta: req ? req.checkBeta : null } };
+}
+
+/** FORM and its check on the scenario at each factor. */
+function scenarioEvaluators(build: (factor: number) => Scenario, seed: number): RestraintEvaluators {
+  return { form: (f) => scenarioForm(build(f)), checked: (f) => scenarioFormChecked(build(f), seed) };
+}
+
+/** The factors whose β decides the outcome of a study, and the assessed one. */
+function decidingPoints(study: RestraintStudyResult): [RestraintCheckPoint['role'], number][] {
+  const out: [RestraintCheckPoint['role'], number][] = [];
+  if (study.outcome === 'reached' && study.requiredFactor !== null) out.push(['required', study.requiredFactor]);
+  if (study.outcome === 'pinned-suffices') out.push(['pinned', 0]);
+  if (study.outcome === 'fixed-only' || study.outcome === 'unreachable') out.push(['fixed', Infinity]);
+  out.push(['assessed', 1]);
+  return out;
+}
+
+function verificationSentence(v: RestraintVerification): string {
+  const bad = v.checks.filter((c) => !c.agrees);
+  if (v.method === 'form') {
+    return `FORM's β was confirmed by a sampling check at ${v.checks.map((c) => roleText(c)).join(' and ')}.`;
+  }
+  const where = bad.map((c) => `${roleText(c)} (FORM β ${c.formBeta.toFixed(2)}, check ${c.checkBeta.toFixed(2)})`).join(' and ');
+  return `FORM disagreed with its sampling check at ${where}, so the requirement could not be established by FORM: the study above uses the check's importance-sampling β at every point (common random numbers).`;
+}
+
+function roleText(c: RestraintCheckPoint): string {
+  return c.role === 'required' ? 'the requirement' : c.role === 'assessed' ? 'the assessed stiffness' : c.role === 'pinned' ? 'pinned ends' : 'rigid ends';
 }
 
 /** The ends the study varies: the requested ones, else every end given as a rotational spring. */
@@ -90,14 +176,8 @@ export function columnRestraint(
   const baseStiffness: Record<string, number> = {};
   for (const e of ends) baseStiffness[e] = meanValue(base[e]);
 
-  const study = restraintStudy({
-    betaAtFactor: (f) => {
-      const p = scenarioForm(edited(f));
-      return { beta: p.beta, pf: p.pf };
-    },
-    baseStiffness,
-    target: s.targetBeta,
-  });
+  const seed = s.analysis.seed ?? 1;
+  const { study, verification } = verifiedRestraintStudy(scenarioEvaluators((f) => edited(f), seed), { baseStiffness, target: s.targetBeta });
 
   const kWith = (t: Scenario): number => {
     const model = buildColumnModel(t);
@@ -122,14 +202,10 @@ export function columnRestraint(
   // the same study with the studied springs known exactly: the K a deterministic check may use
   const fixedBase: Record<string, Scalar> = {};
   for (const e of ends) fixedBase[e] = { kind: 'fixed', value: baseStiffness[e] };
-  const exact = restraintStudy({
-    betaAtFactor: (fct) => {
-      const p = scenarioForm(edited(fct, fixedBase));
-      return { beta: p.beta, pf: p.pf };
-    },
-    baseStiffness,
-    target: s.targetBeta,
-  });
+  const { study: exact, verification: exactVerification } = verifiedRestraintStudy(scenarioEvaluators((fct) => edited(fct, fixedBase), seed), { baseStiffness, target: s.targetBeta });
+  if (exactVerification.method !== 'form') {
+    notes.push(`with the connections known exactly, FORM disagreed with its sampling check; that K comes from importance sampling`);
+  }
   const kDeterministic = exact.requiredFactor === null ? null : kWith(edited(exact.requiredFactor, fixedBase));
   const system = opts.units ?? s.displayUnits;
   const studySentence = restraintSentence(study, {
@@ -145,11 +221,12 @@ export function columnRestraint(
     },
     endLabel: (e) => `the ${e} connection`,
   });
-  const sentence =
+  const withK =
     kDeterministic !== null && Number.isFinite(kDeterministic)
       ? `${studySentence} With the connections known exactly, the target is reached at K = ${kDeterministic.toFixed(2)}: the largest effective length factor a deterministic check may use.`
       : studySentence;
-  return { study, base, fixityAtRequired, kAtRequired, kAtCharacteristic, kDeterministic, sentence, notes };
+  const sentence = `${withK} ${verificationSentence(verification)}`;
+  return { study, base, fixityAtRequired, kAtRequired, kAtCharacteristic, kDeterministic, verification, sentence, notes };
 }
 
 const finite = (v: number): number | null => (Number.isFinite(v) ? v : null);
@@ -162,10 +239,16 @@ export function restraintJson(r: ColumnRestraintResult): Record<string, unknown>
     const v = study.required[e];
     required[e] = v === null || v === undefined || !Number.isFinite(v) ? null : v;
   }
+  const v = r.verification;
   return {
     ends: study.ends,
     target_beta: study.target,
     required,
+    method: v.method,
+    verified: { method: 'is', beta: v.verifiedBeta },
+    checks: v.checks.map((c) => ({
+      role: c.role, factor: finite(c.factor), form_beta: finite(c.formBeta), check_beta: finite(c.checkBeta), check_method: c.checkMethod, agrees: c.agrees,
+    })),
     curve: study.curve.map((p) => {
       const point: Record<string, unknown> = {};
       for (const e of study.ends) point[e] = finite(p.stiffness[e]);

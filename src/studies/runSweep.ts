@@ -7,6 +7,7 @@
 import { Worker } from 'node:worker_threads';
 import { loadCaseRunner, runOneCase, type CaseRunner, type CaseRunnerRecipe } from './caseRunner.js';
 import { compiledModule } from '../runtime/compiledTwin.js';
+import { interruptedDuring, interruptFlagBuffer, interruptRequested, throwIfInterrupted, whenInterrupted } from '../runtime/interruptFlag.js';
 import { sweepFingerprint } from './sweepFingerprint.js';
 import { SweepJournal } from './sweepJournal.js';
 import type { CaseResult, CaseTable, Shard, SweepCase, SweepRecord } from './sweepTypes.js';
@@ -48,11 +49,16 @@ export function shardCases(cases: SweepCase[], shard: Shard): SweepCase[] {
 type Finish = (c: SweepCase, done: { result: CaseResult; error?: string }) => void;
 
 async function runInThread(runner: CaseRunner, todo: SweepCase[], finish: Finish): Promise<void> {
-  for (const c of todo) finish(c, await runOneCase(runner, c));
+  for (const c of todo) {
+    throwIfInterrupted('the sweep');
+    finish(c, await runOneCase(runner, c));
+  }
 }
 
 interface WorkerReply {
   ready?: boolean;
+  /** Ctrl-C stopped the case: nothing of it is journalled. */
+  interrupted?: boolean;
   index: number;
   result: CaseResult;
   error?: string;
@@ -73,19 +79,24 @@ function runInWorkers(recipe: CaseRunnerRecipe, todo: SweepCase[], workers: numb
     const fail = (error: unknown): void => {
       if (failed) return;
       failed = true;
+      stopWatching();
       for (const w of pool) void w.terminate();
-      reject(error instanceof Error ? error : new Error(String(error)));
+      // after Ctrl-C a worker's own failure is part of the stop, not a fault
+      const reason = interruptRequested() ? interruptedDuring('the sweep') : error;
+      reject(reason instanceof Error ? reason : new Error(String(reason)));
     };
+    const stopWatching = whenInterrupted(() => fail(interruptedDuring('the sweep')));
     const feed = (w: Worker): void => {
       const next = queue.shift();
       if (next) w.postMessage({ case: next });
       else void w.terminate();
     };
     for (let k = 0; k < count; k++) {
-      const w = new Worker(workerUrl, { workerData: recipe });
+      const w = new Worker(workerUrl, { workerData: { recipe, interruptFlag: interruptFlagBuffer() } });
       pool.push(w);
       w.on('message', (reply: WorkerReply) => {
         if (failed) return;
+        if (reply.interrupted) return fail(interruptedDuring('the sweep'));
         if (!reply.ready) {
           const c = byIndex.get(reply.index);
           if (!c) return fail(new Error(`worker answered an unknown case ${reply.index}`));
@@ -103,13 +114,17 @@ function runInWorkers(recipe: CaseRunnerRecipe, todo: SweepCase[], workers: numb
       w.on('exit', () => {
         running -= 1;
         if (running === 0 && !failed) {
+          stopWatching();
           // a worker that exits by itself (process.exit in a runner) leaves its case unfinished
           if (unfinished > 0) fail(new Error('workers stopped before the sweep finished'));
           else resolve();
         }
       });
     }
-    if (count === 0) resolve();
+    if (count === 0) {
+      stopWatching();
+      resolve();
+    }
   });
 }
 

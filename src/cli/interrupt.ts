@@ -1,26 +1,19 @@
 /**
- * Ctrl-C during a long run: the first SIGINT asks the samplers to stop at their next chunk
- * (well within a second); they return what they did and the command writes nothing.
- * A second Ctrl-C exits at once.
+ * Ctrl-C for the samplers that stop gracefully (Monte Carlo, importance sampling): they take an
+ * AbortSignal, return what they did, and the command says how far it got. The signal is
+ * aborted soon after the shared flag is set (runtime/interruptFlag.ts); everything else stops
+ * by throwing InterruptedError at its next check.
  */
-export class InterruptedError extends Error {
-  constructor(message: string) {
-    super(message);
-    this.name = 'InterruptedError';
-  }
-}
+import { whenInterrupted } from '../runtime/interruptFlag.js';
+
+export { InterruptedError } from '../runtime/interruptFlag.js';
 
 export async function withInterrupt<T>(run: (signal: AbortSignal) => Promise<T>): Promise<T> {
   const controller = new AbortController();
-  const onSigint = () => {
-    if (controller.signal.aborted) process.exit(130);
-    process.stderr.write('\nstanchion: stopping (Ctrl-C again to quit at once)…\n');
-    controller.abort();
-  };
-  process.on('SIGINT', onSigint);
+  const stopWatching = whenInterrupted(() => controller.abort());
   try {
     return await run(controller.signal);
   } finally {
-    process.off('SIGINT', onSigint);
+    stopWatching();
   }
 }

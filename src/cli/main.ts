@@ -1,18 +1,27 @@
 #!/usr/bin/env node
 /**
- * stanchion's command line: parse options, call a study, write outputs. One file per command.
+ * The stanchion executable. A signal handler runs only when its thread returns to the event
+ * loop, and a FORM search, a Sobol study or a report rendering keeps its thread busy for
+ * minutes; so the command runs in a worker thread (commandWorker.ts) and this thread keeps only
+ * the Ctrl-C handler. It imports nothing heavy, so start-up stays short.
+ *
+ * First Ctrl-C: set the shared flag; every long loop stops at its next check, removes what it
+ * had started writing and ends with exit code 130. If the command thread has not ended after
+ * GRACE_MS, or on a second Ctrl-C, it is stopped here, the temporaries it noted are removed
+ * and the process exits with 130 at once.
  */
-import { Command, CommanderError, Option } from 'commander';
-import { toolVersion } from './version.js';
-import { EXIT_INPUT, EXIT_OK, reportFailure } from './failure.js';
-import { parseEnd, parseUnits } from './optionParsers.js';
-import { runCheck } from './checkCommand.js';
-import { runRestraint, type RestraintOptions } from './restraintCommand.js';
-import { registerSweep } from './sweepCommand.js';
-import { registerNew } from './newCommand.js';
-import { registerAssess } from './assessCommand.js';
-import { CAUTION } from './textTable.js';
-import { boundLines } from '../scenario/shortenEcho.js';
+import { rmSync } from 'node:fs';
+import { Worker } from 'node:worker_threads';
+import { createInterruptFlag, requestInterrupt, useInterruptFlag } from '../runtime/interruptFlag.js';
+import { createTemporaryRegistry, heldTemporaries } from '../runtime/temporaryPaths.js';
+import type { CommandWorkerData } from './commandWorker.js';
+
+const EXIT_INTERNAL = 1;
+const EXIT_INTERRUPTED = 130;
+/** Time the command thread has to stop by itself; the whole stop stays under a second. */
+const GRACE_MS = 700;
+/** How long to wait for the thread to die before removing its temporaries anyway. */
+const TERMINATE_WAIT_MS = 200;
 
 // `stanchion ... | head` closes the pipe early: that is the reader's choice, not a failure.
 for (const stream of [process.stdout, process.stderr]) {
@@ -22,67 +31,53 @@ for (const stream of [process.stdout, process.stderr]) {
   });
 }
 
-const program = new Command();
+const interruptFlag = createInterruptFlag();
+useInterruptFlag(interruptFlag);
+const temporaries = createTemporaryRegistry();
+const workerData: CommandWorkerData = {
+  interruptFlag,
+  temporaries,
+  stdoutIsTTY: Boolean(process.stdout.isTTY),
+  stderrIsTTY: Boolean(process.stderr.isTTY),
+};
+const worker = new Worker(new URL('./commandWorker.js', import.meta.url), { argv: process.argv.slice(2), workerData });
 
-program
-  .name('stanchion')
-  .description(
-    'Reliability of an existing column whose end connections are neither pinned nor fixed: ' +
-      'failure probability, reliability index, what drives it, and the end restraint the verdict relies on.',
-  )
-  .version(toolVersion(), '-V, --version')
-  .exitOverride()
-  .configureOutput({ writeErr: (s) => process.stderr.write(boundLines(s)) })
-  .addHelpText('after', `\n${CAUTION}\n`);
+let reportedCode: number | undefined;
+let grace: NodeJS.Timeout | undefined;
+let stopping = false;
 
-const unitsOption = () =>
-  new Option('--units <system>', 'display units for people: si (kN, m, MPa) or us (kip, ft, ksi)').argParser(parseUnits);
-
-program
-  .command('check')
-  .description('deterministic check with every random variable at its mean')
-  .argument('<FILE>', 'scenario (.yaml, .yml, .json, or - for stdin)')
-  .option('--json', 'print one JSON document (SI units) on stdout')
-  .addOption(unitsOption())
-  .addHelpText(
-    'after',
-    `\nExamples:\n  stanchion check scenarios/braced-base-plate.yaml\n  stanchion check scenarios/sway-canopy-post.yaml --json\n  stanchion new | stanchion check -\n\n${CAUTION}\n`,
-  )
-  .action((file: string, opts: { json?: boolean; units?: 'si' | 'us' }) => runCheck(file, opts));
-
-registerAssess(program, unitsOption);
-
-program
-  .command('restraint')
-  .description('how much end restraint the target reliability needs (FORM β against connection stiffness)')
-  .argument('<FILE>', 'scenario (.yaml, .yml, .json, or - for stdin)')
-  .option('--json', 'print one JSON document (SI units) on stdout')
-  .addOption(new Option('--end <end>', 'which connection to study: bottom, top or both (default: the ends given as springs)').argParser(parseEnd))
-  .option('--out <DIR>', 'also write the report (HTML, Markdown, JSON, CSV, charts) into the new folder DIR, whole or not at all')
-  .option('--force', 'replace DIR when it is a report folder stanchion wrote (it holds .stanchion-output.json); nothing else is ever replaced')
-  .addOption(unitsOption())
-  .addHelpText(
-    'after',
-    `\nExamples:\n  stanchion restraint scenarios/braced-base-plate.yaml\n  stanchion restraint scenarios/sway-canopy-post.yaml --end bottom --json\n  stanchion restraint scenarios/braced-base-plate.yaml --out reports/c3-restraint\n\n${CAUTION}\n`,
-  )
-  .action((file: string, opts: RestraintOptions) => runRestraint(file, opts));
-
-registerSweep(program, unitsOption);
-registerNew(program);
-
-async function main(argv: string[]): Promise<number> {
-  try {
-    await program.parseAsync(argv);
-    return EXIT_OK;
-  } catch (err) {
-    if (err instanceof CommanderError) {
-      // --help and --version end through here with exit code 0; usage errors were already printed.
-      return err.exitCode === 0 ? EXIT_OK : EXIT_INPUT;
-    }
-    return reportFailure(err);
-  }
+async function stopNow(): Promise<void> {
+  if (stopping) return;
+  stopping = true;
+  await Promise.race([worker.terminate(), new Promise((resolve) => setTimeout(resolve, TERMINATE_WAIT_MS))]);
+  for (const path of heldTemporaries(temporaries)) rmSync(path, { recursive: true, force: true });
+  process.stderr.write('stanchion: interrupted; nothing half-written was left behind\n');
+  process.exit(EXIT_INTERRUPTED);
 }
 
-main(process.argv).then((code) => {
-  process.exitCode = code;
+function onSigint(): void {
+  if (grace === undefined) {
+    requestInterrupt();
+    grace = setTimeout(() => void stopNow(), GRACE_MS);
+    return;
+  }
+  void stopNow();
+}
+process.on('SIGINT', onSigint);
+
+worker.on('message', (message: { exitCode?: number }) => {
+  if (typeof message.exitCode === 'number') reportedCode = message.exitCode;
+});
+worker.on('error', (err) => {
+  // an error no command caught (a bug): one line, like reportFailure
+  process.stderr.write(`stanchion: internal error: ${err instanceof Error ? err.message : String(err)}\n`);
+  if (process.env.STANCHION_DEBUG && err instanceof Error && err.stack) process.stderr.write(`${err.stack}\n`);
+  reportedCode = EXIT_INTERNAL;
+});
+worker.on('exit', (code) => {
+  if (stopping) return;
+  if (grace !== undefined) clearTimeout(grace);
+  process.off('SIGINT', onSigint);
+  // the worker's output is already queued on this thread's stdout/stderr: let it drain, then exit
+  process.exitCode = reportedCode ?? (code === 0 ? 0 : EXIT_INTERNAL);
 });

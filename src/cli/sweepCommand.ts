@@ -32,6 +32,7 @@ import { sweepJsonEntry, writeSweepOutputs } from '../studies/sweepOutput.js';
 import { writeSweepReport } from '../studies/sweepReport.js';
 import { checkOutFolder } from '../report/outputFolder.js';
 import { toolVersion } from './version.js';
+import { InterruptedError, isInterruptedError } from '../runtime/interruptFlag.js';
 import type { SweepTable } from '../studies/sweepTable.js';
 import type { CaseTable, Shard, SweepDefinition, SweepRecord } from '../studies/sweepTypes.js';
 import { parseVaryOption } from '../studies/varyOption.js';
@@ -381,6 +382,10 @@ export async function runSweepCommand(file: string, opts: SweepOptions): Promise
       progress ??= progressReporter(total, finished - 1);
       progress(finished);
     },
+  }).catch((err: unknown) => {
+    if (!isInterruptedError(err)) throw err;
+    // finished cases are complete journal lines: they are kept, and the same command resumes
+    throw new InterruptedError(`interrupted during the sweep; no results were written, finished cases stay in ${journalPath(stateDir, shard)} (run the same command again to resume)`);
   });
   const seconds = (performance.now() - started) / 1000;
   // every journal row is checked against this sweep's cases before any output is written

@@ -3,10 +3,13 @@
  * stored row-major in a Float64Array (n × n, upper part zero). Returns null when the matrix
  * is not positive definite (a pivot ≤ tolerance · diagonal), leaving the message to callers.
  */
+import { throwIfInterrupted } from '../runtime/interruptFlag.js';
+
 export function choleskyLower(matrix: ArrayLike<ArrayLike<number>>, relativePivotTolerance = 1e-12): Float64Array | null {
   const n = matrix.length;
   const L = new Float64Array(n * n);
   for (let i = 0; i < n; i++) {
+    throwIfInterrupted('the Nataf transformation'); // O(n³) in all: seconds for a thousand variables
     for (let j = 0; j <= i; j++) {
       let sum = matrix[i][j];
       for (let k = 0; k < j; k++) sum -= L[i * n + k] * L[j * n + k];

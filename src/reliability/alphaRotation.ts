@@ -3,6 +3,7 @@
  * unit axes), so that y = R u puts the design-point direction on the last axis.
  */
 import { norm } from './vector.js';
+import { throwIfInterrupted } from '../runtime/interruptFlag.js';
 
 export function alphaRotation(alpha: ArrayLike<number>): number[][] {
   const n = alpha.length;
@@ -14,6 +15,7 @@ export function alphaRotation(alpha: ArrayLike<number>): number[][] {
   const axes = Array.from({ length: n }, (_, i) => i).sort((i, j) => Math.abs(a[i]) - Math.abs(a[j]));
   for (const k of axes) {
     if (basis.length === n) break;
+    throwIfInterrupted('SORM'); // O(n³) in all: seconds for a thousand variables
     const v = Array.from({ length: n }, (_, i) => (i === k ? 1 : 0));
     for (let pass = 0; pass < 2; pass++) {
       // Twice: classical Gram–Schmidt re-orthogonalised keeps orthogonality to rounding.

@@ -10,6 +10,10 @@
 import { normalStream } from '../probability/rng.js';
 import type { ReliabilityProblem } from './types.js';
 import { describeThrown, isFiniteNumber } from './limitStateError.js';
+import { interruptRequested } from '../runtime/interruptFlag.js';
+
+/** Samples between looks at the Ctrl-C flag (a chunk of a many-variable problem takes seconds). */
+const INTERRUPT_CHECK_MASK = 255;
 
 export interface SamplingSpec {
   kind: 'mc' | 'is';
@@ -42,6 +46,8 @@ export interface ChunkOutcome {
   /** Σ weight²·1[g <= 0] (MC: = failures). */
   sumW2: number;
   fault?: ChunkFault;
+  /** Ctrl-C stopped the chunk part-way: its sums are partial and must not be merged. */
+  interrupted?: true;
 }
 
 export type ChunkKernel = (job: ChunkJob) => ChunkOutcome;
@@ -60,6 +66,7 @@ export function makeChunkKernel(problem: ReliabilityProblem, spec: SamplingSpec)
       let v = 0;
       try {
         for (; s < job.count; s++) {
+          if ((s & INTERRUPT_CHECK_MASK) === INTERRUPT_CHECK_MASK && interruptRequested()) return stopped(job, s);
           for (let i = 0; i < n; i++) u[i] = normal();
           transform.toPhysical(u, x);
           v = g(x);
@@ -86,6 +93,7 @@ export function makeChunkKernel(problem: ReliabilityProblem, spec: SamplingSpec)
     let v = 0;
     try {
       for (; s < job.count; s++) {
+        if ((s & INTERRUPT_CHECK_MASK) === INTERRUPT_CHECK_MASK && interruptRequested()) return stopped(job, s);
         let zc = 0;
         for (let i = 0; i < n; i++) {
           const z = normal();
@@ -107,6 +115,10 @@ export function makeChunkKernel(problem: ReliabilityProblem, spec: SamplingSpec)
     }
     return { index: job.index, count: job.count, failures, sumW, sumW2 };
   };
+}
+
+function stopped(job: ChunkJob, s: number): ChunkOutcome {
+  return { index: job.index, count: s, failures: 0, sumW: 0, sumW2: 0, interrupted: true };
 }
 
 function faulted(job: ChunkJob, x: Float64Array, value: number | null, cause: string | undefined, s: number): ChunkOutcome {

@@ -9,6 +9,7 @@ import type { ProblemRecipe, ReliabilityProblem } from './types.js';
 import { makeChunkKernel, type ChunkJob, type ChunkOutcome, type SamplingSpec } from './chunkKernel.js';
 import { compiledTwin, requireCompiled } from '../runtime/compiledTwin.js';
 import { LimitStateError } from './limitStateError.js';
+import { interruptedDuring, interruptFlagBuffer, interruptRequested, whenInterrupted } from '../runtime/interruptFlag.js';
 
 export interface ChunkRunOptions {
   problem: ReliabilityProblem;
@@ -17,6 +18,11 @@ export interface ChunkRunOptions {
   chunkSize: number;
   workers: number;
   recipe?: ProblemRecipe;
+  /**
+   * With a signal, an abort or Ctrl-C (runtime/interruptFlag.ts) ends the run early with
+   * stopReason 'aborted' and the chunks merged so far; without one, Ctrl-C throws
+   * InterruptedError (a caller that cannot use a partial result must not receive one).
+   */
   signal?: AbortSignal;
   /** Called in chunk order; return true to stop (e.g. the target CoV is reached). */
   onChunk: (outcome: ChunkOutcome) => boolean;
@@ -57,12 +63,19 @@ function toError(o: ChunkRunOptions, names: string[], outcome: ChunkOutcome): Li
   return new LimitStateError(names, f.x, f.value ?? undefined, { sampleIndex: f.sampleIndex, cause: f.cause, method: o.method });
 }
 
+/** Stopped by an abort or by Ctrl-C: 'aborted' for a caller with a signal, else InterruptedError. */
+function stopped(o: ChunkRunOptions): 'aborted' {
+  if (o.signal === undefined) throw interruptedDuring(o.method);
+  return 'aborted';
+}
+
 async function runInProcess(o: ChunkRunOptions, chunks: number): Promise<StopReason> {
   const kernel = makeChunkKernel(o.problem, o.spec);
   let lastYield = performance.now();
   for (let c = 0; c < chunks; c++) {
-    if (o.signal?.aborted) return 'aborted';
+    if (o.signal?.aborted || interruptRequested()) return stopped(o);
     const outcome = kernel(chunkJob(c, o.total, o.chunkSize));
+    if (outcome.interrupted) return stopped(o);
     if (outcome.fault) throw toError(o, o.problem.names, outcome);
     if (o.onChunk(outcome)) return 'target-cov';
     if (performance.now() - lastYield > YIELD_EVERY_MS) {
@@ -87,24 +100,30 @@ function runOnWorkers(o: ChunkRunOptions, chunks: number, count: number, recipe:
       if (finished) return;
       finished = true;
       o.signal?.removeEventListener('abort', onAbort);
+      stopWatching();
       void Promise.all(pool.map((w) => w.terminate())).then(
         () => (err ? reject(err) : resolve(reason)),
         () => (err ? reject(err) : resolve(reason)),
       );
     };
-    const onAbort = (): void => finish(null, 'aborted');
-    if (o.signal?.aborted) {
-      resolve('aborted');
-      return;
-    }
+    const onAbort = (): void => {
+      try {
+        finish(null, stopped(o));
+      } catch (e) {
+        finish(e as Error);
+      }
+    };
+    let stopWatching = (): void => {};
+    if (o.signal?.aborted || interruptRequested()) return onAbort();
     o.signal?.addEventListener('abort', onAbort);
+    stopWatching = whenInterrupted(onAbort);
 
     const send = (w: Worker): void => {
       if (nextToSend < chunks) w.postMessage(chunkJob(nextToSend++, o.total, o.chunkSize));
     };
 
     for (let k = 0; k < count; k++) {
-      const w = new Worker(script, { workerData: { recipe, spec: o.spec, n } });
+      const w = new Worker(script, { workerData: { recipe, spec: o.spec, n, interruptFlag: interruptFlagBuffer() } });
       pool.push(w);
       w.on('message', (msg: { ready?: boolean; loadError?: string; outcome?: ChunkOutcome }) => {
         if (finished) return;
@@ -114,6 +133,7 @@ function runOnWorkers(o: ChunkRunOptions, chunks: number, count: number, recipe:
           return;
         }
         const outcome = msg.outcome!;
+        if (outcome.interrupted) return onAbort();
         pending.set(outcome.index, outcome);
         while (pending.has(nextToMerge)) {
           const next = pending.get(nextToMerge)!;
@@ -125,7 +145,7 @@ function runOnWorkers(o: ChunkRunOptions, chunks: number, count: number, recipe:
         if (nextToMerge >= chunks) return finish(null, undefined);
         send(w);
       });
-      w.on('error', (e) => finish(e instanceof Error ? e : new Error(String(e))));
+      w.on('error', (e) => (interruptRequested() ? onAbort() : finish(e instanceof Error ? e : new Error(String(e)))));
       w.on('exit', (code) => {
         if (!finished && code !== 0) finish(new Error(`sampling worker exited with code ${code}`));
       });

@@ -7,16 +7,20 @@ import { makeChunkKernel, type ChunkJob, type SamplingSpec } from './chunkKernel
 import { loadRecipe } from './loadRecipe.js';
 import type { ProblemRecipe } from './types.js';
 import { describeThrown } from './limitStateError.js';
+import { useInterruptFlag } from '../runtime/interruptFlag.js';
 
 interface SamplingWorkerData {
   recipe: ProblemRecipe;
   spec: SamplingSpec;
   n: number;
+  /** The Ctrl-C flag of the thread that started this one (runtime/interruptFlag.ts). */
+  interruptFlag?: SharedArrayBuffer;
 }
 
 const port = parentPort;
 if (port === null) throw new Error('samplingWorker must run in a worker thread');
 const data = workerData as SamplingWorkerData;
+useInterruptFlag(data.interruptFlag);
 
 try {
   const problem = await loadRecipe(data.recipe);

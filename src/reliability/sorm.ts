@@ -10,6 +10,7 @@ import { checkedLimitState } from './checkedLimitState.js';
 import { alphaRotation } from './alphaRotation.js';
 import { symmetricEigenvalues } from './symmetricEigenvalues.js';
 import { breitung, hohenbichlerRackwitz, tvedt } from './sormFormulas.js';
+import { throwIfInterrupted } from '../runtime/interruptFlag.js';
 import { betaFromPf } from './monteCarlo.js';
 import { norm } from './vector.js';
 
@@ -93,20 +94,22 @@ export function principalCurvatures(hessian: number[][], alpha: ArrayLike<number
   if (n < 2) return [];
   const R = alphaRotation(alpha);
   const m = n - 1;
-  const RH: number[][] = Array.from({ length: m }, (_, i) =>
-    Array.from({ length: n }, (_, j) => {
+  const RH: number[][] = Array.from({ length: m }, (_, i) => {
+    throwIfInterrupted('SORM');
+    return Array.from({ length: n }, (_, j) => {
       let s = 0;
       for (let k = 0; k < n; k++) s += R[i][k] * hessian[k][j];
       return s;
-    }),
-  );
-  const block: number[][] = Array.from({ length: m }, (_, i) =>
-    Array.from({ length: m }, (_, j) => {
+    });
+  });
+  const block: number[][] = Array.from({ length: m }, (_, i) => {
+    throwIfInterrupted('SORM');
+    return Array.from({ length: m }, (_, j) => {
       let s = 0;
       for (let k = 0; k < n; k++) s += RH[i][k] * R[j][k];
       return s / gradNorm;
-    }),
-  );
+    });
+  });
   for (let i = 0; i < m; i++) for (let j = 0; j < i; j++) block[i][j] = block[j][i] = (block[i][j] + block[j][i]) / 2;
   return symmetricEigenvalues(block);
 }

@@ -3,6 +3,8 @@
  * Matrix Computations, §8.5): slow for large n but simple and accurate to rounding for the
  * (n−1)×(n−1) curvature matrices SORM needs. Returned in increasing order.
  */
+import { throwIfInterrupted } from '../runtime/interruptFlag.js';
+
 export function symmetricEigenvalues(input: number[][]): number[] {
   const n = input.length;
   const a = input.map((row) => row.slice());
@@ -15,6 +17,7 @@ export function symmetricEigenvalues(input: number[][]): number[] {
     }
     if (off <= 1e-30 * (scale + off) || off === 0) break;
     for (let p = 0; p < n; p++) {
+      throwIfInterrupted('SORM'); // a sweep is O(n³): seconds for a thousand variables
       for (let q = p + 1; q < n; q++) {
         if (a[p][q] === 0) continue;
         // Rotation zeroing a[p][q]: t = tan θ chosen as the smaller root.

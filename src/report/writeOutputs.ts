@@ -6,6 +6,8 @@
 import { promises as fsp } from 'node:fs';
 import { dirname, join, resolve } from 'node:path';
 import { InputError } from '../scenario/inputError.js';
+import { throwIfInterrupted } from '../runtime/interruptFlag.js';
+import { holdTemporary } from '../runtime/temporaryPaths.js';
 import type { ReportInput } from './reportInput.js';
 import type { UnitSystem } from './displayUnits.js';
 import { buildCharts } from './charts/allCharts.js';
@@ -47,7 +49,11 @@ export async function renderReportFiles(
   const files = new Map<string, string | Uint8Array>();
   const charts = buildCharts(input, system);
   const svgs: Record<string, string> = {};
-  for (const c of charts) svgs[c.name] = await chartToSvg(c.spec);
+  const stopOnCtrlC = (): void => throwIfInterrupted('the report rendering');
+  for (const c of charts) {
+    stopOnCtrlC();
+    svgs[c.name] = await chartToSvg(c.spec);
+  }
   const sketchSvg = columnSketchSvg(input.column, input.check.demand, input.check.modeShapes[0], system);
   const doc = buildReportDocument(input, system, charts);
 
@@ -57,6 +63,7 @@ export async function renderReportFiles(
   for (const [name, text] of Object.entries(csvTables(input))) files.set(name, text);
   const allSvgs: Record<string, string> = { ...svgs, 'column-sketch': sketchSvg };
   for (const [name, svg] of Object.entries(allSvgs)) {
+    stopOnCtrlC();
     files.set(`charts/${name}.svg`, svg);
     if (options.png ?? true) files.set(`charts/${name}.png`, svgToPng(svg, { scale: options.pngScale ?? 2 }));
   }
@@ -97,21 +104,28 @@ export async function writeOutputs(
 
   removeStaleSiblings(dir, options.notify);
   const temp = siblingFolderName(dir, 'partial');
+  const release = holdTemporary(temp); // removed by the main thread if this thread is stopped hard
   try {
     await fsp.mkdir(temp);
   } catch (e) {
+    release();
     if (isErrno(e, 'ENOENT', 'ENOTDIR')) throw new InputError('--out', `the parent folder of ${dir} does not exist`);
     if (isErrno(e, 'EACCES', 'EPERM', 'EROFS')) throw new InputError('--out', `cannot write next to ${dir}: ${(e as Error).message}`);
     throw e;
   }
   try {
     await fsp.mkdir(join(temp, 'charts'));
-    for (const [rel, data] of files) await write(join(temp, rel), data);
+    for (const [rel, data] of files) {
+      throwIfInterrupted('the report rendering');
+      await write(join(temp, rel), data);
+    }
     await moveIntoPlace(temp, outDir, rules);
   } catch (e) {
     await fsp.rm(temp, { recursive: true, force: true });
+    release();
     throw e;
   }
+  release();
   return { dir, files: [...files.keys()].sort() };
 }
 

@@ -6,6 +6,7 @@
  * connection) could move β.
  */
 import type { Distribution } from '../probability/distribution.js';
+import { throwIfInterrupted } from '../runtime/interruptFlag.js';
 import { bySwingDescending, checkedLevels, checkSameLength, type QuantileLevels } from './quantilePair.js';
 
 export interface ConditionalBetaEntry {
@@ -31,6 +32,7 @@ export function conditionalBeta(
   checkSameLength(names, dists, 'distributions');
   const { lowQ, highQ } = checkedLevels(opts);
   const entries = dists.map((dist, i): ConditionalBetaEntry => {
+    throwIfInterrupted('the conditional β study');
     const lowValue = dist.quantile(lowQ);
     const highValue = dist.quantile(highQ);
     const betaLow = betaWithFixed(i, lowValue);

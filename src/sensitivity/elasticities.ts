@@ -10,6 +10,8 @@
  *   (resistances α < 0). Hohenbichler & Rackwitz 1986 (from memory); follows from
  *   ∂β/∂θ = (∂g/∂θ)/|∇_u g| at the design point with x = μ + σu.
  */
+import { throwIfInterrupted } from '../runtime/interruptFlag.js';
+
 export interface MomentSensitivity {
   variable: string;
   dBetaDMean: number;
@@ -61,6 +63,7 @@ export function betaElasticities(
   if (!(relStep > 0)) throw new Error(`relStep must be positive, got ${relStep}`);
   const beta = betaOf({});
   const entries = names.map((name, i) => {
+    throwIfInterrupted('the β elasticities');
     const m = moments[i];
     if (!(m.sd > 0)) throw new Error(`${name}: sd must be positive for a sensitivity, got ${m.sd}`);
     const h = relStep * m.sd;

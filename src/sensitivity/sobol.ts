@@ -6,6 +6,7 @@
  */
 import type { Distribution } from '../probability/distribution.js';
 import { uniformStream } from '../probability/rng.js';
+import { throwIfInterrupted } from '../runtime/interruptFlag.js';
 import { sortedPercentile } from './percentile.js';
 import { sobolEstimates } from './sobolEstimators.js';
 import { evaluateDesign, sampleMatrix, SOBOL_STREAM_A, SOBOL_STREAM_B, SOBOL_STREAM_BOOTSTRAP } from './sobolSample.js';
@@ -74,6 +75,7 @@ export function sobolIndices(
   const t = new Float64Array(d);
   const uniform = uniformStream(opts.seed, SOBOL_STREAM_BOOTSTRAP);
   for (let r = 0; r < resamples; r++) {
+    throwIfInterrupted('the Sobol study');
     for (let k = 0; k < n; k++) rows[k] = Math.floor(uniform() * n);
     sobolEstimates(outputs, n, d, rows, f, t);
     for (let i = 0; i < d; i++) {

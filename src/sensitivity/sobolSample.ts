@@ -3,6 +3,7 @@
  * row-major Float64Array blocks, drawn by inverse CDF from seeded uniform streams
  * (A from stream 0, B from stream 1 of `seed`). Independent inputs only.
  */
+import { throwIfInterrupted } from '../runtime/interruptFlag.js';
 import type { Distribution } from '../probability/distribution.js';
 import { uniformStream } from '../probability/rng.js';
 
@@ -41,6 +42,7 @@ export function evaluateDesign(
     return value;
   };
   for (let row = 0; row < n; row++) {
+    throwIfInterrupted('the Sobol study'); // d + 2 model calls per row
     const base = row * d;
     for (let col = 0; col < d; col++) x[col] = a[base + col];
     fA[row] = checked(model(x), 'A', row);

@@ -4,6 +4,7 @@
  * first (CONTRACT §4 uses utilization as the response; capacity works the same way).
  */
 import type { Distribution } from '../probability/distribution.js';
+import { throwIfInterrupted } from '../runtime/interruptFlag.js';
 import { bySwingDescending, checkedLevels, checkSameLength, type QuantileLevels } from './quantilePair.js';
 
 export interface TornadoEntry {
@@ -33,6 +34,7 @@ export function tornado(
   const x = Float64Array.from(dists, (d) => d.mean);
   const entries: TornadoEntry[] = [];
   for (let i = 0; i < dists.length; i++) {
+    throwIfInterrupted('the tornado study');
     const lowValue = dists[i].quantile(lowQ);
     const highValue = dists[i].quantile(highQ);
     x[i] = lowValue;

@@ -6,6 +6,7 @@
 import { closeSync, fsyncSync, mkdirSync, openSync, renameSync, rmSync, writeSync } from 'node:fs';
 import { dirname } from 'node:path';
 import { removeStaleSiblings, siblingFileName, type Notify } from '../report/staleSiblings.js';
+import { holdTemporary } from '../runtime/temporaryPaths.js';
 
 export function writeFileAtomic(file: string, content: string, notify?: Notify): void {
   writeFileAtomicStreamed(file, (write) => write(content), notify);
@@ -23,13 +24,16 @@ export function writeFileAtomicStreamed(file: string, produce: (write: (piece: s
   removeStaleSiblings(file, notify);
   const temp = siblingFileName(file);
   rmSync(temp, { force: true }); // this process's own leftover; 'wx' below never follows a link
-  const fd = openSync(temp, 'wx');
+  const release = holdTemporary(temp); // removed by the main thread if this thread is stopped hard
   let renamed = false;
+  let fd: number | undefined;
   try {
+    fd = openSync(temp, 'wx');
+    const out = fd;
     let pending: string[] = [];
     let size = 0;
     const flush = (): void => {
-      if (pending.length > 0) writeSync(fd, pending.join(''));
+      if (pending.length > 0) writeSync(out, pending.join(''));
       pending = [];
       size = 0;
     };
@@ -39,18 +43,14 @@ export function writeFileAtomicStreamed(file: string, produce: (write: (piece: s
       if (size >= FLUSH_AT) flush();
     });
     flush();
-    fsyncSync(fd);
-    closeSync(fd);
+    fsyncSync(out);
+    closeSync(out);
+    fd = undefined;
     renameSync(temp, file);
     renamed = true;
   } finally {
-    if (!renamed) {
-      try {
-        closeSync(fd);
-      } catch {
-        // already closed
-      }
-      rmSync(temp, { force: true });
-    }
+    if (fd !== undefined) closeSync(fd);
+    if (!renamed) rmSync(temp, { force: true });
+    release();
   }
 }

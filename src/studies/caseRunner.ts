@@ -5,6 +5,7 @@
  * `exportName` is `(args) => CaseRunner`; `args` must survive structured cloning.
  */
 import { compiledModule } from '../runtime/compiledTwin.js';
+import { isInterruptedError } from '../runtime/interruptFlag.js';
 import type { CaseResult, ResultValue, SweepCase } from './sweepTypes.js';
 
 export type CaseRunner = (c: SweepCase) => CaseResult | Promise<CaseResult>;
@@ -40,11 +41,12 @@ export function normaliseResult(result: unknown): CaseResult {
   return out;
 }
 
-/** Run one case; a throw becomes a recorded error so the sweep goes on. */
+/** Run one case; a throw becomes a recorded error so the sweep goes on, except Ctrl-C, which stops it. */
 export async function runOneCase(runner: CaseRunner, c: SweepCase): Promise<{ result: CaseResult; error?: string }> {
   try {
     return { result: normaliseResult(await runner(c)) };
   } catch (error) {
+    if (isInterruptedError(error)) throw error;
     return { result: {}, error: error instanceof Error ? error.message : String(error) };
   }
 }

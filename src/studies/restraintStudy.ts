@@ -9,6 +9,7 @@
  * the first grid interval where β crosses the target (the grid is extended by decades when
  * the crossing lies beyond it) — the answer is not read off the grid.
  */
+import { throwIfInterrupted } from '../runtime/interruptFlag.js';
 import { findRootBracketed } from '../probability/rootBracketed.js';
 
 export interface BetaPoint {
@@ -102,6 +103,7 @@ export function restraintStudy(input: RestraintStudyInput): RestraintStudyResult
   const at = (factor: number): BetaPoint => {
     const known = computed.get(factor);
     if (known) return known;
+    throwIfInterrupted('the restraint study');
     const point = input.betaAtFactor(factor);
     if (!Number.isFinite(point.beta) && Math.abs(point.beta) !== Infinity) {
       throw new Error(`restraintStudy: β is ${point.beta} at factor ${factor}`);

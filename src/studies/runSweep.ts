@@ -10,6 +10,7 @@ import { Worker } from 'node:worker_threads';
 import { loadCaseRunner, runOneCase, type CaseRunner, type CaseRunnerRecipe } from './caseRunner.js';
 import { compiledModule } from '../runtime/compiledTwin.js';
 import { checkShard, iterateCases, shardSize } from './sweepDesign.js';
+import { interruptedDuring, interruptFlagBuffer, interruptRequested, throwIfInterrupted, whenInterrupted } from '../runtime/interruptFlag.js';
 import { sweepFingerprint } from './sweepFingerprint.js';
 import { SweepJournal, type StoredDefinition } from './sweepJournal.js';
 import type { CaseResult, CaseTable, Shard, SweepCase, SweepRecord } from './sweepTypes.js';
@@ -51,12 +52,15 @@ type Finish = (c: SweepCase, done: { result: CaseResult; error?: string }) => vo
 async function runInThread(runner: CaseRunner, todo: Iterator<SweepCase>, finish: Finish): Promise<void> {
   for (let next = todo.next(); !next.done; next = todo.next()) {
     const c = next.value;
+    throwIfInterrupted('the sweep');
     finish(c, await runOneCase(runner, c));
   }
 }
 
 interface WorkerReply {
   ready?: boolean;
+  /** Ctrl-C stopped the case: nothing of it is journalled. */
+  interrupted?: boolean;
   index: number;
   result: CaseResult;
   error?: string;
@@ -77,9 +81,13 @@ function runInWorkers(recipe: CaseRunnerRecipe, todo: Iterator<SweepCase>, todoC
     const fail = (error: unknown): void => {
       if (failed) return;
       failed = true;
+      stopWatching();
       for (const w of pool) void w.terminate();
-      reject(error instanceof Error ? error : new Error(String(error)));
+      // after Ctrl-C a worker's own failure is part of the stop, not a fault
+      const reason = interruptRequested() ? interruptedDuring('the sweep') : error;
+      reject(reason instanceof Error ? reason : new Error(String(reason)));
     };
+    const stopWatching = whenInterrupted(() => fail(interruptedDuring('the sweep')));
     const feed = (w: Worker): void => {
       const next = todo.next();
       if (next.done) {
@@ -90,10 +98,11 @@ function runInWorkers(recipe: CaseRunnerRecipe, todo: Iterator<SweepCase>, todoC
       w.postMessage({ case: next.value });
     };
     for (let k = 0; k < count; k++) {
-      const w = new Worker(workerUrl, { workerData: recipe });
+      const w = new Worker(workerUrl, { workerData: { recipe, interruptFlag: interruptFlagBuffer() } });
       pool.push(w);
       w.on('message', (reply: WorkerReply) => {
         if (failed) return;
+        if (reply.interrupted) return fail(interruptedDuring('the sweep'));
         if (!reply.ready) {
           const c = byIndex.get(reply.index);
           if (!c) return fail(new Error(`worker answered an unknown case ${reply.index}`));
@@ -111,13 +120,17 @@ function runInWorkers(recipe: CaseRunnerRecipe, todo: Iterator<SweepCase>, todoC
       w.on('exit', () => {
         running -= 1;
         if (running === 0 && !failed) {
+          stopWatching();
           // a worker that exits by itself (process.exit in a runner) leaves its case unfinished
           if (unfinished > 0) fail(new Error('workers stopped before the sweep finished'));
           else resolve();
         }
       });
     }
-    if (count === 0) resolve();
+    if (count === 0) {
+      stopWatching();
+      resolve();
+    }
   });
 }
 

@@ -11,6 +11,7 @@ export { monteCarlo, betaFromPf, crudeCov, MC_CHUNK_SIZE, type MonteCarloOptions
 export { importanceSampling, importanceSamplingAtDesignPoint, IS_CHUNK_SIZE, type ImportanceSamplingOptions } from './importanceSampling.js';
 export { subsetSimulation, type SubsetOptions } from './subsetSimulation.js';
 export { verdict, type Verdict, type VerdictInput, type VerdictOptions, type MethodComparison, type MethodName } from './verdict.js';
+export { seriesSystemFailure, type SeriesSystemResult } from './seriesSystem.js';
 export { wilsonInterval } from './wilson.js';
 export { loadRecipe } from './loadRecipe.js';
 export { compiledTwin } from '../runtime/compiledTwin.js';

@@ -6,3 +6,5 @@
 export const MC_STREAM_BASE = 0;
 export const IS_STREAM_BASE = 2 ** 32;
 export const SUBSET_STREAM_BASE = 2 ** 33;
+/** Random shifts of the lattice rules in seriesSystem.ts (stream base + term index). */
+export const SERIES_STREAM_BASE = 3 * 2 ** 32;

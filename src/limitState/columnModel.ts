@@ -4,7 +4,8 @@
  * g(x) = θ·capacity(x) − Σ loads (CONTRACT.md §3). Hot path: no allocation per call.
  */
 import type { Distribution } from '../probability/distribution.js';
-import { makeDistribution } from '../probability/makeDistribution.js';
+import { combinationDistributions, defaultCombination } from '../loads/combinationDistributions.js';
+import type { LoadCombination } from '../loads/loadCombinations.js';
 import { columnCapacity } from '../mechanics/columnCapacity.js';
 import { makeFastCapacityFromRatio } from '../mechanics/fastColumn.js';
 import type { ColumnState } from '../mechanics/types.js';
@@ -20,6 +21,8 @@ interface Slot {
 
 export interface ColumnModel {
   readonly scenario: Scenario;
+  /** the load combination whose marginals `dists` holds */
+  readonly combination: LoadCombination;
   /** contract paths of the random variables, in the order of x */
   readonly names: string[];
   readonly dists: Distribution[];
@@ -90,10 +93,11 @@ function correlationMatrix(s: Scenario, names: readonly string[]): number[][] | 
   return R;
 }
 
-export function buildColumnModel(s: Scenario): ColumnModel {
+/** `combination` (default: defaultCombination) sets each load's period; see loads/. */
+export function buildColumnModel(s: Scenario, combination: LoadCombination = defaultCombination(s)): ColumnModel {
   const vars = randomVariables(s);
   const names = vars.map((v) => v.path);
-  const dists = vars.map((v) => makeDistribution(v.spec));
+  const dists = combinationDistributions(vars, combination);
   const mean = Float64Array.from(dists, (d) => d.mean);
   const c = s.column;
   const L = c.length;
@@ -151,6 +155,7 @@ export function buildColumnModel(s: Scenario): ColumnModel {
 
   return {
     scenario: s,
+    combination,
     names,
     dists,
     correlation: correlationMatrix(s, names),

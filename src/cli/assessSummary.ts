@@ -20,7 +20,7 @@ function targetLine(a: Assessment): string {
   const t = s.target;
   const source = [t.source, t.consequenceClass].filter((x) => x !== undefined).join('; ');
   return (
-    `  target: β = ${formatBeta(t.betaReferencePeriod)} over the ${years(s.referencePeriodYears)} reference period (annual ${formatBeta(t.betaAnnual)}` +
+    `  target: β = ${formatBeta(t.betaReferencePeriod)} over the ${Number(s.referencePeriodYears.toPrecision(6))}-year reference period (annual ${formatBeta(t.betaAnnual)}` +
     `${t.periodYears !== 1 && t.periodYears !== s.referencePeriodYears ? `; stated ${formatBeta(t.beta)} over ${years(t.periodYears)}` : ''})` +
     `${source ? `, from ${source}` : ''}`
   );
@@ -34,7 +34,7 @@ function combinationLines(a: Assessment): string[] {
     rows.push([`${k.leading}${i === c.governing ? ' (lowest β)' : ''}`, formatBeta(k.form.beta), formatProbability(k.form.pf), ...(k.sorm ? [formatBeta(k.sorm.beta)] : [])]),
   );
   return [
-    `  load combinations (Turkstra's rule: the leading load at its ${T} maximum, the others at companion values):`,
+    `  load combinations (Turkstra's rule: the leading load at its maximum over ${T}, the others at companion values):`,
     textTable(rows, '    '),
     `  series system of the combinations: β = ${formatBeta(a.governing.beta)}, pf = ${formatProbability(a.governing.pf)} (${LABEL[a.governing.method]})`,
     '',

@@ -9,8 +9,9 @@ import { isTimeVarying } from './loadCombinations.js';
 /** Targets outside this range are unusual for structural members (warned, not refused). */
 export const USUAL_TARGET_BETA = [1.5, 5.5] as const;
 
+/** "50-year", "1-year": the period as an adjective. */
 function years(y: number): string {
-  return `${Number(y.toPrecision(6))} year${y === 1 ? '' : 's'}`;
+  return `${Number(y.toPrecision(6))}-year`;
 }
 
 export function loadTimeNotes(s: Scenario): string[] {
@@ -25,12 +26,12 @@ export function loadTimeNotes(s: Scenario): string[] {
   const unnamed = unstated.filter((l) => l.kind === undefined);
   if (unnamed.length >= 2 || (unnamed.length === 1 && s.loads.some(isTimeVarying))) {
     notes.push(
-      `${unnamed.map((l) => l.path).join(', ')}: no kind or time basis given, so ${unnamed.length > 1 ? 'they are' : 'it is'} summed as given, as if ${unnamed.length > 1 ? 'their' : 'its'} maxima over the ${years(T)} reference period coincided with the other loads'. ` +
-        'State kind and maximum_over (or point_in_time) to combine time-varying loads by Turkstra\'s rule.',
+      `${unnamed.map((l) => l.path).join(', ')}: no kind or time basis given, so ${unnamed.length > 1 ? 'each is' : 'it is'} taken as given for the ${years(T)} reference period ` +
+        'and summed as if the maxima of all loads coincided. State kind and maximum_over (or point_in_time) to combine time-varying loads by Turkstra\'s rule.',
     );
   }
   const [lo, hi] = USUAL_TARGET_BETA;
   const b = s.target.betaReferencePeriod;
-  if (b < lo || b > hi) notes.push(`The target β = ${b.toFixed(2)} over ${years(T)} is outside the usual range ${lo} to ${hi}: check the target and its period.`);
+  if (b < lo || b > hi) notes.push(`The target β = ${b.toFixed(2)} over the ${years(T)} reference period is outside the usual range ${lo} to ${hi}: check the target and its period.`);
   return notes;
 }

@@ -69,21 +69,61 @@ function strengthModelLines(a: Assessment): string[] {
   return ['', '  β by strength model (same column; each with its own model factor):', textTable(rows, '    ')];
 }
 
+function years(y: number): string {
+  return `${Number(y.toPrecision(6))} year${y === 1 ? '' : 's'}`;
+}
+
+/** The target as stated and over the reference period, with its source verbatim. */
+function targetLine(a: Assessment): string {
+  const s = a.scenario;
+  const t = s.target;
+  const source = [t.source, t.consequenceClass].filter((x) => x !== undefined).join('; ');
+  return (
+    `  target: β = ${formatBeta(t.betaReferencePeriod)} over the ${Number(s.referencePeriodYears.toPrecision(6))}-year reference period (annual ${formatBeta(t.betaAnnual)}` +
+    `${t.periodYears !== 1 && t.periodYears !== s.referencePeriodYears ? `; stated ${formatBeta(t.beta)} over ${years(t.periodYears)}` : ''})` +
+    `${source ? `, from ${source}` : ''}`
+  );
+}
+
+function combinationLines(a: Assessment): string[] {
+  const c = a.combinations!;
+  const T = years(a.scenario.referencePeriodYears);
+  const rows: string[][] = [['leading load', 'FORM β', 'pf', ...(c.sormSystem ? ['SORM β'] : [])]];
+  c.combinations.forEach((k, i) =>
+    rows.push([`${k.leading}${i === c.governing ? ' (lowest β)' : ''}`, formatBeta(k.form.beta), formatProbability(k.form.pf), ...(k.sorm ? [formatBeta(k.sorm.beta)] : [])]),
+  );
+  return [
+    `  load combinations (Turkstra's rule: the leading load at its maximum over ${T}, the others at companion values):`,
+    textTable(rows, '    '),
+    `  series system of the combinations: β = ${formatBeta(a.governing.beta)}, pf = ${formatProbability(a.governing.pf)} (${LABEL[a.governing.method]})`,
+    '',
+  ];
+}
+
 export function formatAssessment(a: Assessment, system: UnitSystem): string {
   const s = a.scenario;
   const lines: string[] = [];
   lines.push(`stanchion assess: ${s.title}`);
   lines.push(`  ${s.column.frame} column, strength model ${s.strength}; seed ${a.seed}; ${a.model.names.length} random variables`);
   lines.push(`  at the means: capacity ${formatQuantity(a.check.capacity, 'force', system)}, demand ${formatQuantity(a.check.demand, 'force', system)}, utilization ${a.check.utilization.toFixed(3)}, K = ${a.check.effective_length_factor.toFixed(3)}`);
+  lines.push(targetLine(a));
   lines.push(`  ${modelFactorLine(a)}`);
   lines.push('');
+  const combos = a.combinations;
+  if (combos) lines.push(...combinationLines(a));
   const rows: string[][] = [['method', 'β', 'pf', 'uncertainty', 'calls']];
   const f = a.form;
-  if (a.methods.includes('form')) rows.push(['FORM', formatBeta(f.beta), formatProbability(f.pf), f.converged ? 'converged' : 'NOT converged', String(f.calls)]);
-  if (a.methods.includes('form') && f.system.designPoints.length > 1) {
-    rows.push([`FORM system (${f.system.designPoints.length} points)`, formatBeta(f.system.beta), formatProbability(f.system.pf), `bounds [${formatProbability(f.system.bounds.lower)}, ${formatProbability(f.system.bounds.upper)}]`, '']);
+  if (combos) {
+    const fs = combos.formSystem;
+    if (a.methods.includes('form')) rows.push(['FORM, series system', formatBeta(fs.beta), formatProbability(fs.pf), fs.method, String(combos.combinations.reduce((n, c) => n + c.form.calls, 0))]);
+    if (combos.sormSystem) rows.push(['SORM, series system', formatBeta(combos.sormSystem.beta), formatProbability(combos.sormSystem.pf), '', String(combos.combinations.reduce((n, c) => n + (c.sorm?.calls ?? 0), 0))]);
+  } else {
+    if (a.methods.includes('form')) rows.push(['FORM', formatBeta(f.beta), formatProbability(f.pf), f.converged ? 'converged' : 'NOT converged', String(f.calls)]);
+    if (a.methods.includes('form') && f.system.designPoints.length > 1) {
+      rows.push([`FORM system (${f.system.designPoints.length} points)`, formatBeta(f.system.beta), formatProbability(f.system.pf), `bounds [${formatProbability(f.system.bounds.lower)}, ${formatProbability(f.system.bounds.upper)}]`, '']);
+    }
+    if (a.sorm) rows.push([`SORM (${a.sorm.used})`, formatBeta(a.sorm.beta), formatProbability(a.sorm.pf), '', String(a.sorm.calls)]);
   }
-  if (a.sorm) rows.push([`SORM (${a.sorm.used})`, formatBeta(a.sorm.beta), formatProbability(a.sorm.pf), '', String(a.sorm.calls)]);
   if (a.is) rows.push(['importance sampling', formatBeta(a.is.beta), formatProbability(a.is.pf), pct(a.is.cov), String(a.is.calls)]);
   if (a.mc) {
     rows.push([
@@ -105,7 +145,7 @@ export function formatAssessment(a: Assessment, system: UnitSystem): string {
   const g = a.governing;
   const meets = g.beta >= s.targetBeta;
   lines.push(
-    `  verdict: β = ${formatBeta(g.beta)} (${g.basis ?? LABEL[g.method]}) against the target ${s.targetBeta}${s.targetSource ? ` (${s.targetSource})` : ''}: ` +
+    `  verdict: β = ${formatBeta(g.beta)} (${g.basis ?? LABEL[g.method]}) against the target ${formatBeta(s.targetBeta)} over ${years(s.referencePeriodYears)}${s.targetSource ? ` (${s.targetSource})` : ''}: ` +
       (meets ? 'MEETS the target.' : 'does NOT meet the target.'),
   );
   lines.push('');

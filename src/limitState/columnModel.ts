@@ -4,7 +4,8 @@
  * g(x) = θ·capacity(x) − Σ loads (CONTRACT.md §3). Hot path: no allocation per call.
  */
 import type { Distribution } from '../probability/distribution.js';
-import { makeDistribution } from '../probability/makeDistribution.js';
+import { combinationDistributions, defaultCombination } from '../loads/combinationDistributions.js';
+import type { LoadCombination } from '../loads/loadCombinations.js';
 import { columnCapacity } from '../mechanics/columnCapacity.js';
 import { makeFastCapacityFromRatio } from '../mechanics/fastColumn.js';
 import type { ColumnState } from '../mechanics/types.js';
@@ -26,6 +27,8 @@ export interface ColumnModel {
   readonly modelFactorUsed: ModelFactorUsed;
   /** the bow was random but the strength model ignores it: it is fixed at its mean */
   readonly bowDropped: boolean;
+  /** the load combination whose marginals `dists` holds */
+  readonly combination: LoadCombination;
   /** contract paths of the random variables, in the order of x */
   readonly names: string[];
   readonly dists: Distribution[];
@@ -96,12 +99,13 @@ function correlationMatrix(s: Scenario, names: readonly string[]): number[][] | 
   return R;
 }
 
-export function buildColumnModel(given: Scenario): ColumnModel {
+/** `combination` (default: defaultCombination) sets each load's period; see loads/. */
+export function buildColumnModel(given: Scenario, combination: LoadCombination = defaultCombination(given)): ColumnModel {
   const resolved = resolveStrengthModel(given);
   const s = resolved.scenario;
   const vars = randomVariables(s);
   const names = vars.map((v) => v.path);
-  const dists = vars.map((v) => makeDistribution(v.spec));
+  const dists = combinationDistributions(vars, combination);
   const mean = Float64Array.from(dists, (d) => d.mean);
   const c = s.column;
   const L = c.length;
@@ -161,6 +165,7 @@ export function buildColumnModel(given: Scenario): ColumnModel {
     scenario: s,
     modelFactorUsed: resolved.modelFactor,
     bowDropped: resolved.bowDropped,
+    combination,
     names,
     dists,
     correlation: correlationMatrix(s, names),

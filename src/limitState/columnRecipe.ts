@@ -8,9 +8,12 @@ import { compiledTwin } from '../runtime/compiledTwin.js';
 import type { ProblemRecipe, ReliabilityProblem } from '../reliability/types.js';
 import type { Scenario } from '../scenario/types.js';
 import { buildColumnModel, type ColumnModel } from './columnModel.js';
+import { combinationModels, combinationSystemProblem } from './combinationSystem.js';
 
 export interface ColumnRecipeArgs {
   scenario: Scenario;
+  /** the series system of every load combination instead of the default one */
+  system?: boolean;
 }
 
 export function problemFromModel(model: ColumnModel): ReliabilityProblem {
@@ -23,13 +26,14 @@ export function problemFromModel(model: ColumnModel): ReliabilityProblem {
 
 /** The export named in the recipe: (args) => ReliabilityProblem. */
 export function buildColumnProblem(args: ColumnRecipeArgs): ReliabilityProblem {
+  if (args.system) return combinationSystemProblem(combinationModels(args.scenario));
   return problemFromModel(buildColumnModel(args.scenario));
 }
 
-export function columnRecipe(scenario: Scenario): ProblemRecipe {
+export function columnRecipe(scenario: Scenario, system = false): ProblemRecipe {
   return {
     module: compiledTwin(import.meta.url, 'columnRecipe.js').href,
     exportName: 'buildColumnProblem',
-    args: { scenario } satisfies ColumnRecipeArgs,
+    args: (system ? { scenario, system } : { scenario }) satisfies ColumnRecipeArgs,
   };
 }

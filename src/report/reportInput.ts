@@ -24,7 +24,8 @@ export type QuantityKind =
 export type DistributionName = 'normal' | 'lognormal' | 'gumbel' | 'uniform' | 'truncnormal' | 'weibull' | 'beta';
 export type MethodName = 'form' | 'sorm' | 'is' | 'mc' | 'subset';
 export type EndName = 'bottom' | 'top';
-export type TargetSource = 'EN 1990 Annex B' | 'EN 1990 Annex C' | 'ISO 2394' | 'ISO 13822';
+/** Where the target comes from, as the user wrote it (echoed verbatim, never rewritten). */
+export type TargetSource = string;
 export type StrengthModelName =
   | 'first-yield'
   | 'aisc360-e3'
@@ -174,6 +175,9 @@ export interface ReliabilityResults {
   /** Whether the methods agree within their uncertainty, in one or two sentences. */
   agreement: { consistent: boolean; text: string };
   target: { beta: number; source: TargetSource; note?: string }; // note e.g. 'RC2, 50-year reference period'
+  /** Two or more time-varying loads: FORM β of each load combination (Turkstra) and the series system. */
+  combinations?: { leading: string; beta: number; pf: number; governing: boolean }[];
+  system?: { beta: number; pf: number; method: MethodName };
 }
 
 /** Value with one variable at its 5 % and 95 % quantile, others at their means. */

@@ -245,7 +245,22 @@ function methodsSection(input: ReportInput, charts: ChartSpec[]): Section {
   if (r.is) rows.push([METHOD_LABELS.is, formatBeta(r.is.beta), formatProbability(r.is.pf), `CoV ${(100 * r.is.cov).toFixed(1)} %`, formatNumber(r.is.calls, 6), 'centred on the design point']);
   if (r.mc) rows.push([METHOD_LABELS.mc, formatBeta(r.mc.beta), formatProbability(r.mc.pf), `CoV ${(100 * r.mc.cov).toFixed(1)} %; 95 % CI ${formatProbability(r.mc.ci95[0])} to ${formatProbability(r.mc.ci95[1])}`, formatNumber(r.mc.samples, 6), `${formatNumber(r.mc.failures, 6)} failures`]);
   if (r.subset) rows.push([METHOD_LABELS.subset, formatBeta(r.subset.beta), formatProbability(r.subset.pf), `CoV ${(100 * r.subset.cov).toFixed(1)} %`, formatNumber(r.subset.calls, 6), r.subset.levels !== undefined ? `${r.subset.levels} levels` : '']);
+  const combos: Block[] = r.combinations
+    ? [
+        {
+          kind: 'table',
+          caption: "Load combinations (Turkstra's rule): the leading load at its reference-period maximum, the others at companion values; FORM β of each. The system β is that of their series system.",
+          head: ['leading load', 'β', 'pf'],
+          rows: [
+            ...r.combinations.map((c) => [c.governing ? `${c.leading} (lowest β)` : c.leading, formatBeta(c.beta), formatProbability(c.pf)]),
+            ...(r.system ? [[`series system (${METHOD_LABELS[r.system.method]})`, formatBeta(r.system.beta), formatProbability(r.system.pf)]] : []),
+          ],
+          numeric: [false, true, true],
+        },
+      ]
+    : [];
   return section('methods', [
+    ...combos,
     {
       kind: 'table',
       caption: 'β of the sampling methods is the generalised index −Φ⁻¹(pf)',

@@ -8,11 +8,74 @@ import { fail, readScalar, type ReadContext } from './readScalar.js';
 import { PURE_NUMBER_UNIT, readQuantity, type DisplayUnit } from './quantity.js';
 import { ExpressionError } from './quantityExpression.js';
 import type { ScenarioShape } from './scenarioShape.js';
-import type { Load, Method, Scalar, Scenario } from './types.js';
+import type { Load, LoadBasis, Method, Scalar, Scenario, Target } from './types.js';
+import { parsePeriod } from './readPeriod.js';
+import { betaOverPeriods } from '../probability/logProbability.js';
+import type { PathSegment } from './rawTree.js';
 import { listScalars } from './variables.js';
 
 const LOAD_NAME = /^[\p{L}_][\p{L}\p{N}_-]{0,63}$/u;
 const DEFAULT_TARGET_BETA = 3.8;
+const DEFAULT_REFERENCE_PERIOD_YEARS = 50;
+/** Targets outside these bounds are refused; outside the inner ones they draw a warning. */
+export const TARGET_BETA_LIMITS = { refuse: [0.5, 8], warn: [1.5, 5.5] } as const;
+
+type RawLoad = ScenarioShape['loads'][string];
+
+function periodAt(ctx: ReadContext, path: readonly PathSegment[], text: unknown): number {
+  const p = parsePeriod(text);
+  if ('error' in p) fail(ctx, path, p.error);
+  return p.years;
+}
+
+/** The load's kind and time basis, and its value without those keys. */
+function readLoadTime(raw: RawLoad, path: readonly PathSegment[], ctx: ReadContext): { value: RawLoad; kind?: Load['kind']; basis: LoadBasis } {
+  if (typeof raw === 'string') return { value: raw, basis: { type: 'unstated' } };
+  const { kind, maximum_over, point_in_time, renewal_period, ...value } = raw;
+  if (maximum_over !== undefined && point_in_time === true) {
+    fail(ctx, [...path, 'point_in_time'], 'give either maximum_over or point_in_time: true, not both (one load has one time basis)');
+  }
+  if (renewal_period !== undefined && point_in_time !== true) {
+    fail(ctx, [...path, 'renewal_period'], 'only applies with point_in_time: true (how often a point-in-time load takes a new value)');
+  }
+  let basis: LoadBasis = { type: 'unstated' };
+  if (maximum_over !== undefined) basis = { type: 'maximum', years: periodAt(ctx, [...path, 'maximum_over'], maximum_over) };
+  else if (point_in_time === true) {
+    basis =
+      renewal_period === undefined
+        ? { type: 'point-in-time' }
+        : { type: 'point-in-time', renewalYears: periodAt(ctx, [...path, 'renewal_period'], renewal_period) };
+  }
+  if (kind !== 'permanent' && basis.type === 'point-in-time' && basis.renewalYears === undefined) {
+    fail(ctx, [...path, 'renewal_period'], 'is missing: a time-varying point-in-time load needs how often it takes an independent new value (e.g. renewal_period: 1 year), so that its maximum over the reference period is known');
+  }
+  if (kind === 'permanent' && basis.type === 'maximum') {
+    fail(ctx, [...path, 'maximum_over'], 'a permanent load has no maximum over a period: drop maximum_over, or give the load another kind');
+  }
+  return { value: value as RawLoad, ...(kind !== undefined ? { kind } : {}), basis };
+}
+
+function readTarget(shape: ScenarioShape, referenceYears: number, ctx: ReadContext): Target {
+  const t = shape.target;
+  if (t !== undefined && shape.target_beta !== undefined) fail(ctx, ['target_beta'], 'give the target once: either target: {beta, ...} or target_beta, not both');
+  if (t !== undefined && shape.target_source !== undefined) fail(ctx, ['target_source'], 'give the source inside target: {beta, period, source}, not also as target_source');
+  const beta = t?.beta ?? shape.target_beta ?? DEFAULT_TARGET_BETA;
+  const field: PathSegment[] = t !== undefined ? ['target', 'beta'] : ['target_beta'];
+  const [lo, hi] = TARGET_BETA_LIMITS.refuse;
+  if (!(beta >= lo && beta <= hi)) fail(ctx, field, `must be a reliability index between ${lo} and ${hi}, got ${beta}`);
+  const periodYears = t?.period === undefined ? referenceYears : periodAt(ctx, ['target', 'period'], t.period);
+  const betaAnnual = betaOverPeriods(beta, 1 / periodYears);
+  const betaReferencePeriod = betaOverPeriods(beta, referenceYears / periodYears);
+  const source = t?.source ?? shape.target_source;
+  return {
+    beta,
+    periodYears,
+    betaAnnual,
+    betaReferencePeriod,
+    ...(source !== undefined ? { source } : {}),
+    ...(t?.consequence_class !== undefined ? { consequenceClass: t.consequence_class } : {}),
+  };
+}
 
 export interface Provenance {
   readonly fileName: string;
@@ -69,15 +132,17 @@ export function buildScenario(shape: ScenarioShape, lines: ReadonlyMap<string, n
     if (!LOAD_NAME.test(name)) {
       fail(ctx, ['loads', name], `'${name}' is not a usable load name: use letters, digits, _ and - (starting with a letter or _, at most 64 characters)`);
     }
-    return { name, path: `loads.${name}`, value: readScalar(shape.loads[name]!, { kind: 'force', domain: 'nonnegative' }, ['loads', name], ctx) };
+    const time = readLoadTime(shape.loads[name]!, ['loads', name], ctx);
+    const value = readScalar(time.value, { kind: 'force', domain: 'nonnegative' }, ['loads', name], ctx);
+    return { name, path: `loads.${name}`, value, ...(time.kind !== undefined ? { kind: time.kind } : {}), basis: time.basis };
   });
 
   const modelFactor: Scalar =
     shape.model_factor === undefined ? { kind: 'fixed', value: 1 } : readScalar(shape.model_factor, { kind: 'number', domain: 'positive' }, ['model_factor'], ctx);
   if (shape.model_factor === undefined) units['model_factor'] = PURE_NUMBER_UNIT;
 
-  const targetBeta = shape.target_beta ?? DEFAULT_TARGET_BETA;
-  if (!(targetBeta > 0)) fail(ctx, ['target_beta'], `must be greater than zero, got ${targetBeta}`);
+  const referencePeriodYears = shape.reference_period === undefined ? DEFAULT_REFERENCE_PERIOD_YEARS : periodAt(ctx, ['reference_period'], shape.reference_period);
+  const target = readTarget(shape, referencePeriodYears, ctx);
 
   const a = shape.analysis ?? {};
   if (a.methods !== undefined) {
@@ -96,8 +161,10 @@ export function buildScenario(shape: ScenarioShape, lines: ReadonlyMap<string, n
     modelFactor,
     ...(shape.model_factor === undefined ? { modelFactorOmitted: true } : {}),
     strength: shape.strength,
-    targetBeta,
-    ...(shape.target_source !== undefined ? { targetSource: shape.target_source } : {}),
+    targetBeta: target.betaReferencePeriod,
+    ...(target.source !== undefined ? { targetSource: target.source } : {}),
+    referencePeriodYears,
+    target,
     analysis: {
       ...(a.seed !== undefined ? { seed: a.seed } : {}),
       ...(a.methods !== undefined ? { methods: a.methods as Method[] } : {}),

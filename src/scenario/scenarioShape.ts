@@ -33,6 +33,7 @@ export const METHODS = ['form', 'sorm', 'is', 'mc', 'subset'] as const;
 export const DISPLAY_UNITS = ['si', 'us'] as const;
 export const END_TYPES = ['pinned', 'fixed'] as const;
 export const END_KEYS = ['rotation', 'fixity', 'alignment_g'] as const;
+export const LOAD_KIND_NAMES = ['permanent', 'imposed', 'snow', 'wind', 'other'] as const;
 
 /** How a bad value looks in a message. */
 export function describeInput(input: unknown): string {
@@ -117,9 +118,9 @@ function strict<T extends z.core.$ZodLooseShape>(shape: T, what: string) {
 const covSchema = pureNumberSchema('a coefficient of variation (sd / mean), e.g. 0.1');
 
 /** `{dist: NAME, ...}` with the parameters CONTRACT.md §2 gives each distribution. */
-export function randomVariableSchema(value: () => ValueSchema) {
+export function randomVariableSchema<X extends z.core.$ZodLooseShape = Record<never, never>>(value: () => ValueSchema, extra: X = {} as X) {
   const meanSdCov = <const D extends DistName>(dist: D) =>
-    strict({ dist: z.literal(dist), mean: value(), sd: value().optional(), cov: covSchema.optional() }, `a ${dist} variable (mean and one of sd, cov)`);
+    strict({ dist: z.literal(dist), mean: value(), sd: value().optional(), cov: covSchema.optional(), ...extra }, `a ${dist} variable (mean and one of sd, cov)`);
   return z
     .discriminatedUnion(
       'dist',
@@ -127,13 +128,13 @@ export function randomVariableSchema(value: () => ValueSchema) {
         meanSdCov('normal'),
         meanSdCov('lognormal'),
         meanSdCov('gumbel'),
-        strict({ dist: z.literal('uniform'), min: value(), max: value() }, 'a uniform variable (min, max)'),
+        strict({ dist: z.literal('uniform'), min: value(), max: value(), ...extra }, 'a uniform variable (min, max)'),
         strict(
-          { dist: z.literal('truncnormal'), mean: value(), sd: value(), min: value().optional(), max: value().optional() },
+          { dist: z.literal('truncnormal'), mean: value(), sd: value(), min: value().optional(), max: value().optional(), ...extra },
           'a truncnormal variable (mean and sd of the parent normal; min and/or max)',
         ),
         meanSdCov('weibull'),
-        strict({ dist: z.literal('beta'), min: value(), max: value(), mean: value(), sd: value() }, 'a beta variable (min, max, mean, sd)'),
+        strict({ dist: z.literal('beta'), min: value(), max: value(), mean: value(), sd: value(), ...extra }, 'a beta variable (min, max, mean, sd)'),
       ],
       {
         error: (iss) => {
@@ -224,6 +225,21 @@ const integer = (what: string, minimum: number) =>
     .min(minimum, { error: (iss) => `expected ${what} (a whole number >= ${minimum}), got ${describeInput(iss.input)}` })
     .meta({ description: what });
 
+const periodText = (description: string) =>
+  z.string({ error: (iss) => `expected a period such as 50 years or 1 year, got ${describeInput(iss.input)}` }).meta({ description, examples: ['50 years', '1 year'] });
+
+/** The keys a random load may carry to say what it is and which period it describes (CONTRACT.md §5). */
+const LOAD_TIME_KEYS = {
+  kind: choice(LOAD_KIND_NAMES, 'a load kind').optional().meta({ description: 'permanent | imposed | snow | wind | other; permanent loads are never converted in time' }),
+  maximum_over: periodText('the distribution is that of the maximum over this period, e.g. 1 year (annual maximum)').optional(),
+  point_in_time: z.boolean({ error: (iss) => `expected true or false, got ${describeInput(iss.input)}` }).optional().meta({ description: 'true: the distribution is that of an arbitrary-point-in-time value' }),
+  renewal_period: periodText('with point_in_time: how often the load takes an independent new value, e.g. 1 year').optional(),
+};
+
+const loadSchema = z.union([quantitySchema('force'), randomVariableSchema(() => quantitySchema('force'), LOAD_TIME_KEYS)], {
+  error: (iss) => (iss.input === undefined ? quantityMessage('force', undefined, false) : `${quantityMessage('force', iss.input, false)}, or a random variable {dist: NAME, ..., kind, maximum_over | point_in_time}`),
+});
+
 const correlationEntry = z
   .tuple([z.string(), z.string(), z.number()], {
     error: (iss) =>
@@ -273,13 +289,23 @@ export const scenarioShape = strict(
       'the column (length, frame, section, material, ends, imperfection)',
     ),
     loads: z
-      .record(z.string(), quantityScalar('force'), {
+      .record(z.string(), loadSchema, {
         error: (iss) => (iss.input === undefined ? 'is missing: give at least one axial load, e.g. dead: 420 kN' : `expected a mapping of load names to forces, got ${describeInput(iss.input)}`),
       })
       .meta({ description: 'axial compressive loads by name, summed; each a force or a random variable' }),
+    reference_period: periodText('the period the verdict is for (default 50 years); time-varying loads and the target are converted to it').optional(),
     model_factor: numberScalar('a model factor (plain number, e.g. 1.0)').optional(),
     strength: choice(STRENGTH_MODELS, 'a strength model'),
     target_beta: pureNumberSchema('a target reliability index, e.g. 3.8').optional(),
+    target: strict(
+      {
+        beta: pureNumberSchema('a target reliability index, e.g. 3.8'),
+        period: periodText('the period the target beta is stated for (default: the reference period)').optional(),
+        source: z.string({ error: (iss) => `expected a text, got ${describeInput(iss.input)}` }).optional().meta({ description: 'where the target comes from (free text, echoed verbatim), e.g. EN 1990 Annex B, RC2' }),
+        consequence_class: z.string({ error: (iss) => `expected a text, got ${describeInput(iss.input)}` }).optional().meta({ description: 'the consequence or reliability class, e.g. CC2 (free text)' }),
+      },
+      'the target (beta, period, source, consequence_class)',
+    ).optional(),
     target_source: z
       .string({ error: (iss) => `expected a text, got ${describeInput(iss.input)}` })
       .optional()

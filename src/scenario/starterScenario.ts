@@ -54,9 +54,14 @@ ${ends}
     # Required for strength: first-yield; the code curves ignore it.
     bow: {dist: normal, mean: L/1200, sd: L/2400}
 
-loads:                               # axial compression, summed; name them as you like
-  permanent: {dist: normal, mean: 280 kN, cov: 0.08}
-  variable: {dist: gumbel, mean: 110 kN, cov: 0.3}
+reference_period: 50 years           # the period the verdict is for
+
+loads:                               # axial compression; name them as you like
+  # kind: permanent | imposed | snow | wind | other. A time-varying load states which period its
+  # distribution describes: maximum_over: 1 year (annual maximum), maximum_over: 50 years, or
+  # point_in_time: true with renewal_period. Two or more are combined by Turkstra's rule.
+  permanent: {dist: normal, mean: 280 kN, cov: 0.08, kind: permanent}
+  variable: {dist: gumbel, mean: 110 kN, cov: 0.3, kind: imposed, maximum_over: 50 years}
 
 model_factor: {dist: lognormal, mean: 1.0, cov: 0.06}   # capacity model uncertainty (no unit); leave out for the strength model's default
 
@@ -64,8 +69,8 @@ model_factor: {dist: lognormal, mean: 1.0, cov: 0.06}   # capacity model uncerta
 # first-yield-en1993-X (equivalent bow of EN 1993-1-1 5.3.2(11)), first-yield-en1993-X-plus-bow (plus the bow above)
 strength: first-yield
 
-target_beta: 3.8                     # target reliability index
-target_source: EN 1990 Annex C       # where the target comes from (free text)
+# target reliability index, the period it is stated for, and where it comes from (free text)
+target: {beta: 3.8, period: 50 years, source: "EN 1990 Annex C, RC2", consequence_class: CC2}
 
 correlation:                         # optional: [variable, variable, rho], by path
   - [column.material.E, column.material.fy, 0.1]

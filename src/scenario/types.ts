@@ -53,11 +53,40 @@ export interface Beam {
   readonly length: number;
 }
 
+/** What a load is (CONTRACT.md §5): permanent loads are never converted in time. */
+export type LoadKind = 'permanent' | 'imposed' | 'snow' | 'wind' | 'other';
+export const LOAD_KINDS: readonly LoadKind[] = ['permanent', 'imposed', 'snow', 'wind', 'other'];
+
+/**
+ * Which period the load's distribution describes: `unstated` (taken as given for the reference
+ * period, the version-1 meaning), the maximum over `years`, or an arbitrary point in time that
+ * takes an independent new value every `renewalYears` (undefined when not stated).
+ */
+export type LoadBasis =
+  | { readonly type: 'unstated' }
+  | { readonly type: 'maximum'; readonly years: number }
+  | { readonly type: 'point-in-time'; readonly renewalYears?: number };
+
 export interface Load {
   readonly name: string;
   /** `loads.<name>` */
   readonly path: string;
   readonly value: Scalar;
+  readonly kind?: LoadKind;
+  readonly basis: LoadBasis;
+}
+
+/** The target reliability as stated, and converted to the reference period. */
+export interface Target {
+  /** β as stated, for `periodYears` */
+  readonly beta: number;
+  readonly periodYears: number;
+  /** β over one year and over the reference period: Φ(β_n) = Φ(β_1)^n */
+  readonly betaAnnual: number;
+  readonly betaReferencePeriod: number;
+  /** verbatim, as the user wrote it */
+  readonly source?: string;
+  readonly consequenceClass?: string;
 }
 
 export interface Correlation {
@@ -106,8 +135,12 @@ export interface Scenario {
   /** Set by limitState/ once it has put in a strength model's default model factor (which model, and the source). */
   readonly modelFactorDefault?: { readonly strength: StrengthModel; readonly source: string };
   readonly strength: StrengthModel;
+  /** The target over the reference period (= target.betaReferencePeriod). */
   readonly targetBeta: number;
   readonly targetSource?: string;
+  /** years; the period the verdict is for (default 50) */
+  readonly referencePeriodYears: number;
+  readonly target: Target;
   readonly correlation: readonly Correlation[];
   readonly analysis: AnalysisOptions;
   readonly displayUnits: 'si' | 'us';

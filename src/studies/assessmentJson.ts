@@ -148,6 +148,25 @@ export function reliabilityJson(a: Assessment): Record<string, unknown> {
   }
   r.verdict = { agree: a.verdict.agree, trust: a.verdict.trust, reason: a.verdict.reason };
   r.governing = a.governing;
+  const c = a.combinations;
+  if (c) {
+    r.combinations = c.combinations.map((k, i) => ({
+      leading: k.leading,
+      beta: k.form.beta,
+      pf: k.form.pf,
+      converged: k.form.converged,
+      sorm_beta: k.sorm?.beta,
+      design_point: byName(k.form.names, k.form.designPointX),
+      governing: i === c.governing,
+    }));
+    const sys = c.sormSystem ?? c.formSystem;
+    r.system = {
+      beta: a.governing.beta,
+      pf: a.governing.pf,
+      method: a.governing.method,
+      linearised: { beta: sys.beta, pf: sys.pf, method: sys.method, from: c.sormSystem ? 'sorm' : 'form', bounds: [sys.bounds.lower, sys.bounds.upper] },
+    };
+  }
   r.target_beta = a.scenario.targetBeta;
   r.meets_target = a.governing.beta >= a.scenario.targetBeta;
   return r;
@@ -183,8 +202,18 @@ function sensitivityJson(a: Assessment): Record<string, unknown> {
 }
 
 export function assessmentJson(a: Assessment, meta: RunMeta): unknown {
+  const t = a.scenario.target;
   const doc: Record<string, unknown> = {
     check: checkJson(a.check),
+    target: {
+      beta: t.beta,
+      period_years: t.periodYears,
+      beta_reference_period: t.betaReferencePeriod,
+      beta_annual: t.betaAnnual,
+      reference_period_years: a.scenario.referencePeriodYears,
+      source: t.source ?? null,
+      consequence_class: t.consequenceClass ?? null,
+    },
     reliability: reliabilityJson(a),
     sensitivity: sensitivityJson(a),
     meta: {

@@ -15,6 +15,7 @@ import type {
 } from '../report/reportInput.js';
 import { fixityFactor } from '../mechanics/restraint.js';
 import type { Assessment } from './columnAssessment.js';
+import { formatBeta } from '../report/displayUnits.js';
 import type { EndSpringMoments } from '../mechanics/endSpringMoments.js';
 import type { ConnectionValues } from '../report/reportInput.js';
 import { designPointConnections } from './designPointConnections.js';
@@ -34,7 +35,19 @@ function connectionValues(m: EndSpringMoments): ConnectionValues {
 }
 import type { RunMeta } from './assessmentJson.js';
 
-const TARGET_SOURCES: readonly TargetSource[] = ['EN 1990 Annex B', 'EN 1990 Annex C', 'ISO 2394', 'ISO 13822'];
+/** The user's source verbatim; with no target given at all, the default's own source. */
+function targetSource(s: Assessment['scenario']): TargetSource {
+  if (s.target.source !== undefined) return s.target.source;
+  return s.target.beta === 3.8 && s.target.periodYears === 50 ? 'EN 1990 Annex B' : 'stated in the scenario';
+}
+
+function targetNote(s: Assessment['scenario']): string | undefined {
+  const t = s.target;
+  const parts = [`${Number(s.referencePeriodYears.toPrecision(6))}-year reference period`, `annual β ${formatBeta(t.betaAnnual)}`];
+  if (t.periodYears !== 1 && t.periodYears !== s.referencePeriodYears) parts.push(`stated as β ${formatBeta(t.beta)} over ${Number(t.periodYears.toPrecision(6))} years`);
+  if (t.consequenceClass !== undefined) parts.push(t.consequenceClass);
+  return parts.join('; ');
+}
 
 function inputRows(s: Scenario): InputRow[] {
   return listScalars(s).map(({ path, scalar }) => {
@@ -106,10 +119,15 @@ export function assessmentReportInput(a: Assessment, meta: RunMeta): ReportInput
     agreement: { consistent: a.verdict.agree, text: a.verdict.reason },
     target: {
       beta: s.targetBeta,
-      source: (TARGET_SOURCES as readonly string[]).includes(s.targetSource ?? '') ? (s.targetSource as TargetSource) : 'EN 1990 Annex B',
-      note: s.targetSource && !(TARGET_SOURCES as readonly string[]).includes(s.targetSource) ? s.targetSource : undefined,
+      source: targetSource(s),
+      note: targetNote(s),
     },
   };
+  if (a.combinations) {
+    const c = a.combinations;
+    rel.combinations = c.combinations.map((k, i) => ({ leading: k.leading, beta: k.form.beta, pf: k.form.pf, governing: i === c.governing }));
+    rel.system = a.governing;
+  }
   if (a.methods.includes('form')) {
     const byName = (v: number[]) => Object.fromEntries(f.names.map((n, i) => [n, v[i]]));
     rel.form = {
@@ -139,6 +157,8 @@ export function assessmentReportInput(a: Assessment, meta: RunMeta): ReportInput
       convergence: a.mc.trace,
     };
   }
+  if (a.combinations && rel.form) Object.assign(rel.form, { beta: a.combinations.formSystem.beta, pf: a.combinations.formSystem.pf });
+  if (a.combinations?.sormSystem && rel.sorm) Object.assign(rel.sorm, { beta: a.combinations.sormSystem.beta, pf: a.combinations.sormSystem.pf });
   if (a.subset) rel.subset = { beta: a.subset.beta, pf: a.subset.pf, cov: a.subset.cov, calls: a.subset.calls, levels: a.subset.levels.length };
 
   const sens = a.sensitivity;

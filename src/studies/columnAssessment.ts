@@ -30,6 +30,9 @@ import { columnRestraint, studiedEnds, type ColumnRestraintResult, type EndChoic
 import { BOW_PATH, resolveStrengthModel, type ModelFactorUsed } from '../limitState/strengthChoice.js';
 import { betaByStrengthModel, type StrengthModelBeta } from './strengthComparison.js';
 import { characteristicValues, type CharacteristicSummary } from './characteristicValues.js';
+import { combinationModels, combinationSystemProblem } from '../limitState/combinationSystem.js';
+import { loadTimeNotes } from '../loads/loadTimeNotes.js';
+import { combinationStudy, type CombinationStudy } from './combinationStudy.js';
 
 export const DEFAULT_METHODS: readonly Method[] = ['form', 'sorm', 'is', 'mc'];
 export const DEFAULT_SEED = 1;
@@ -92,6 +95,8 @@ export interface Assessment {
   governing: { method: Method; beta: number; pf: number; basis?: string };
   /** FORM's self-check, run whenever FORM or SORM would decide the verdict alone. */
   formCheck?: FormCheckResult;
+  /** Two or more time-varying loads: each combination and their series system (`form`, `sorm` and `model` are then the lowest-β combination's; IS, MC and subset are of the system). */
+  combinations?: CombinationStudy;
   sensitivity?: SensitivityStudy;
   restraint?: ColumnRestraintResult;
   samples: SamplesSummary;
@@ -226,31 +231,41 @@ export async function assessColumn(given: Scenario, opts: AssessOptions = {}): P
     throw new InputError('scenario', 'no value is random: give at least one {dist: ...} so that there is a probability to compute');
   }
   const check = deterministicCheck(model);
+  const warnings: string[] = loadTimeNotes(s);
   if (!(check.capacity > 0)) {
     throw new InputError('column', 'at the mean values the column has no capacity (a mechanism): nothing to assess');
   }
   const methods = [...(opts.methods ?? s.analysis.methods ?? DEFAULT_METHODS)];
   const seed = opts.seed ?? s.analysis.seed ?? DEFAULT_SEED;
   const workers = Math.max(1, opts.workers ?? s.analysis.workers ?? 1);
-  const problem = problemFromModel(model);
-  const recipe = columnRecipe(s);
-  const warnings: string[] = [];
+  let problem = problemFromModel(model);
+  let recipe = columnRecipe(s);
   if (resolved.bowDropped) {
     warnings.push(`${BOW_PATH}: strength model ${s.strength} does not use the bow, so it was taken out of the random variables (fixed at its mean; no effect on β)`);
   }
   let interrupted = false;
 
-  const formResult = form(problem);
-  warnings.push(...formResult.warnings.map((w) => `FORM: ${w}`));
-  if (!formResult.converged) warnings.push(`FORM did not converge: ${formResult.reason ?? 'see its iteration history'}`);
+  const models = combinationModels(s);
+  const combos = models.length > 1 ? combinationStudy(models, { sorm: methods.includes('sorm'), seed }) : undefined;
+  const lead = combos?.combinations[combos.governing];
+  // The sampling methods see the series system; FORM/SORM results shown are the lowest-β combination's.
+  const simProblem = combos ? combinationSystemProblem(models) : problem;
+  if (combos) recipe = columnRecipe(s, true);
+  const formResult = lead ? lead.form : form(problem);
+  if (lead) problem = lead.problem;
+  for (const c of combos?.combinations ?? [{ leading: '', form: formResult }]) {
+    const tag = combos ? `FORM (${c.leading} leading)` : 'FORM';
+    warnings.push(...c.form.warnings.map((w) => `${tag}: ${w}`));
+    if (!c.form.converged) warnings.push(`${tag} did not converge: ${c.form.reason ?? 'see its iteration history'}`);
+  }
 
   const out: Partial<Assessment> = {};
   if (methods.includes('sorm')) {
-    out.sorm = sorm(problem, formResult);
+    out.sorm = lead ? lead.sorm! : sorm(problem, formResult);
     warnings.push(...out.sorm.warnings.map((w) => `SORM: ${w}`));
   }
   if (methods.includes('is')) {
-    out.is = await importanceSamplingAtDesignPoint(problem, formResult, {
+    out.is = await importanceSamplingAtDesignPoint(simProblem, formResult, {
       samples: s.analysis.isSamples ?? DEFAULT_IS_SAMPLES,
       seed,
       targetCov: IS_TARGET_COV,
@@ -261,7 +276,7 @@ export async function assessColumn(given: Scenario, opts: AssessOptions = {}): P
     if (out.is.stopReason === 'aborted') interrupted = true;
   }
   if (methods.includes('mc') && !interrupted) {
-    out.mc = await monteCarlo(problem, {
+    out.mc = await monteCarlo(simProblem, {
       samples: opts.samples ?? s.analysis.mcSamples ?? DEFAULT_MC_SAMPLES,
       seed,
       workers,
@@ -274,34 +289,48 @@ export async function assessColumn(given: Scenario, opts: AssessOptions = {}): P
     if (out.mc.failures === 0) warnings.push(`Monte Carlo saw no failure in ${out.mc.samples} samples: its pf is only an upper bound`);
   }
   if (methods.includes('subset') && !interrupted) {
-    out.subset = subsetSimulation(problem, { seed, samplesPerLevel: s.analysis.subsetSamples ?? 1000 });
+    out.subset = subsetSimulation(simProblem, { seed, samplesPerLevel: s.analysis.subsetSamples ?? 1000 });
     warnings.push(...out.subset.warnings.map((w) => `subset: ${w}`));
   }
+  // With combinations every method is compared on the series system.
+  const sysForm: FormResult = combos
+    ? {
+        ...formResult,
+        beta: combos.formSystem.beta,
+        pf: combos.formSystem.pf,
+        system: {
+          ...combos.formSystem,
+          designPoints: combos.combinations.map((c) => ({ beta: c.form.beta, designPointU: c.form.designPointU, designPointX: c.form.designPointX, alpha: c.form.alpha })),
+        },
+      }
+    : formResult;
+  const sysSorm = combos && out.sorm && combos.sormSystem ? { ...out.sorm, beta: combos.sormSystem.beta, pf: combos.sormSystem.pf } : out.sorm;
   const v = verdict({
-    form: methods.includes('form') ? formResult : undefined,
-    sorm: out.sorm,
+    form: methods.includes('form') ? sysForm : undefined,
+    sorm: sysSorm,
     is: out.is,
     mc: out.mc,
     subset: out.subset,
   });
-  const base = { form: formResult, ...out, methods };
-  const checked = checkedGoverning(problem, formResult, v, governingEstimate(base, v), seed);
+  const checked = checkedGoverning(simProblem, sysForm, v, governingEstimate({ form: sysForm, ...out, sorm: sysSorm, methods }, v), seed);
   const governing = checked.governing;
   if (checked.warning) warnings.unshift(checked.warning);
 
   let sensitivity: SensitivityStudy | undefined;
   let restraint: ColumnRestraintResult | undefined;
   if (!opts.reliabilityOnly && !interrupted) {
-    sensitivity = sensitivityStudy(s, model, formResult.beta, seed);
+    const baseline = combos ? combos.combinations.find((c) => c.leading === model.combination.leading)!.form.beta : formResult.beta;
+    sensitivity = sensitivityStudy(s, model, baseline, seed);
+    if (combos) sensitivity.notes.push(`The sensitivity and restraint studies use the combination with ${model.combination.leading} leading (the largest mean demand), not the series system.`);
     if (studiedEnds(s, opts.end).length > 0) restraint = opts.restraint ?? columnRestraint(s, { end: opts.end, units: opts.units });
   }
   const byStrengthModel = opts.reliabilityOnly || interrupted ? undefined : betaByStrengthModel(given, formResult);
   return {
     scenario: s,
-    model,
+    model: lead ? lead.model : model,
     modelFactor: model.modelFactorUsed,
     byStrengthModel,
-    characteristic: characteristicValues(model, formResult),
+    characteristic: characteristicValues(lead ? lead.model : model, formResult),
     check,
     methods,
     seed,
@@ -311,9 +340,10 @@ export async function assessColumn(given: Scenario, opts: AssessOptions = {}): P
     verdict: checked.verdict,
     governing,
     formCheck: checked.check,
+    ...(combos ? { combinations: combos } : {}),
     sensitivity,
     restraint,
-    samples: samplesSummary(problem, model, seed, formResult),
+    samples: samplesSummary(problem, lead ? lead.model : model, seed, formResult),
     warnings,
     interrupted,
   };

@@ -208,8 +208,9 @@ describe('other keys', () => {
     expect(e.field).toBe('column.imperfection.bow');
     expect(e.message).toMatch(/required for strength first-yield/);
   });
-  test('target_beta must be positive', () => {
-    expect(errorIn(edit('target_beta: 3.8', 'target_beta: -1')).describe()).toMatch(/^target_beta \(line 24\): must be greater than zero/);
+  test('target_beta must be a usable reliability index', () => {
+    expect(errorIn(edit('target_beta: 3.8', 'target_beta: -1')).describe()).toMatch(/^target_beta \(line 24\): must be a reliability index between 0.5 and 8/);
+    expect(errorIn(edit('target_beta: 3.8', 'target_beta: 9')).field).toBe('target_beta');
   });
   test.each([
     [[['column.material.E', 'column.material.G', 0.2]], /not a random variable .*did you mean 'column.material.E'/],

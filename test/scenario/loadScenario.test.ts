@@ -32,8 +32,8 @@ describe('the example of CONTRACT.md §2', () => {
       expect(rel(bow.spec.sd!, 0.0014)).toBeLessThan(1e-14); // L/3000
     }
     expect(s.loads).toEqual([
-      { name: 'dead', path: 'loads.dead', value: { kind: 'random', spec: { dist: 'normal', mean: 420e3, cov: 0.1 } } },
-      { name: 'imposed', path: 'loads.imposed', value: { kind: 'random', spec: { dist: 'gumbel', mean: 160e3, cov: 0.25 } } },
+      { name: 'dead', path: 'loads.dead', value: { kind: 'random', spec: { dist: 'normal', mean: 420e3, cov: 0.1 } }, basis: { type: 'unstated' } },
+      { name: 'imposed', path: 'loads.imposed', value: { kind: 'random', spec: { dist: 'gumbel', mean: 160e3, cov: 0.25 } }, basis: { type: 'unstated' } },
     ]);
     expect(s.modelFactor).toEqual({ kind: 'random', spec: { dist: 'lognormal', mean: 1, cov: 0.05 } });
     expect(s.strength).toBe('first-yield');

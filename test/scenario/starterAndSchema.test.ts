@@ -14,7 +14,7 @@ describe('starter scenario', () => {
     expect(s.column.length).toBe(3.6);
     expect(randomVariables(s).length).toBeGreaterThan(5);
     expect(text.match(/#/g)!.length).toBeGreaterThan(30);
-    for (const key of ['stanchion', 'title', 'column', 'loads', 'model_factor', 'strength', 'target_beta', 'correlation', 'analysis', 'display_units']) {
+    for (const key of ['stanchion', 'title', 'column', 'loads', 'model_factor', 'strength', 'reference_period', 'target', 'correlation', 'analysis', 'display_units']) {
       expect(text).toMatch(new RegExp(`^${key}:.*#|^# .*\\n${key}:|^${key}:`, 'm'));
     }
   });
@@ -31,7 +31,7 @@ describe('JSON Schema generated from the validator', () => {
   };
   test('names every top-level key and refuses others', () => {
     expect(Object.keys(schema.properties).sort()).toEqual(
-      ['$schema', 'analysis', 'column', 'correlation', 'display_units', 'loads', 'model_factor', 'stanchion', 'strength', 'target_beta', 'target_source', 'title'].sort(),
+      ['$schema', 'analysis', 'column', 'correlation', 'display_units', 'loads', 'model_factor', 'reference_period', 'stanchion', 'strength', 'target', 'target_beta', 'target_source', 'title'].sort(),
     );
     expect(schema.required.sort()).toEqual(['column', 'loads', 'stanchion', 'strength']);
     expect(schema.additionalProperties).toBe(false);

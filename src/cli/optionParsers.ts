@@ -57,3 +57,13 @@ export function parseShard(value: string): { index: number; count: number } {
 }
 
 export { METHODS };
+
+export function parseRestraintMethod(value: string): 'form' | 'sorm' | 'is' {
+  if (value !== 'form' && value !== 'sorm' && value !== 'is') throw new InvalidArgumentError("expected 'form', 'sorm' or 'is'.");
+  return value;
+}
+
+export function parseDesignAlpha(value: string): 'form' | 'standard' {
+  if (value !== 'form' && value !== 'standard') throw new InvalidArgumentError("expected 'form' or 'standard'.");
+  return value;
+}

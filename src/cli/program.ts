@@ -5,7 +5,7 @@
 import { Command, CommanderError, Option } from 'commander';
 import { toolVersion } from './version.js';
 import { EXIT_INPUT, EXIT_OK, reportFailure } from './failure.js';
-import { parseEnd, parseUnits } from './optionParsers.js';
+import { parseDesignAlpha, parseEnd, parseRestraintMethod, parseUnits } from './optionParsers.js';
 import { runCheck } from './checkCommand.js';
 import { runRestraint, type RestraintOptions } from './restraintCommand.js';
 import { registerSweep } from './sweepCommand.js';
@@ -50,6 +50,8 @@ program
   .argument('<FILE>', 'scenario (.yaml, .yml, .json, or - for stdin)')
   .option('--json', 'print one JSON document (SI units) on stdout')
   .addOption(new Option('--end <end>', 'which connection to study: bottom, top or both (default: the ends given as springs)').argParser(parseEnd))
+  .addOption(new Option('--method <method>', 'what solves for the requirement: form, sorm or is (default: FORM, or importance sampling where FORM disagrees with its sampling check)').argParser(parseRestraintMethod))
+  .addOption(new Option('--design-alpha <alpha>', "α of the design stiffness (EN 1990 Annex C): form (FORM's own α, default) or standard (0.8 leading, 0.4 × 0.8 otherwise)").argParser(parseDesignAlpha))
   .option('--out <DIR>', 'also write the report (HTML, Markdown, JSON, CSV, charts) into the new folder DIR, whole or not at all')
   .option('--force', 'replace DIR when it is a report folder stanchion wrote (it holds .stanchion-output.json); nothing else is ever replaced')
   .addOption(unitsOption())

@@ -1,8 +1,9 @@
 import { loadScenario } from '../scenario/loadScenario.js';
-import { columnRestraint, restraintJson, type EndChoice } from '../studies/columnRestraint.js';
+import { columnRestraint, restraintJson, type EndChoice, type RestraintMethod } from '../studies/columnRestraint.js';
+import type { DesignAlphaChoice } from '../studies/restraintRequirement.js';
 import { formatQuantity, type UnitSystem } from '../report/displayUnits.js';
 import { readScenarioText } from './readScenarioText.js';
-import { assessColumn } from '../studies/columnAssessment.js';
+import { assessColumn, DEFAULT_SEED, governingAssessor } from '../studies/columnAssessment.js';
 import { assessmentJson } from '../studies/assessmentJson.js';
 import { assessmentReportInput } from '../studies/assessmentReport.js';
 import { writeOutputs } from '../report/writeOutputs.js';
@@ -16,6 +17,8 @@ export interface RestraintOptions {
   force?: boolean;
   end?: EndChoice;
   units?: UnitSystem;
+  method?: RestraintMethod;
+  designAlpha?: DesignAlphaChoice;
 }
 
 export async function runRestraint(file: string, opts: RestraintOptions): Promise<void> {
@@ -23,7 +26,8 @@ export async function runRestraint(file: string, opts: RestraintOptions): Promis
   const scenario = loadScenario(text, fileName);
   if (opts.out) checkOutFolder(opts.out, { force: opts.force ?? false, inputFiles: [file] }); // before the study; checked again when written
   const system = opts.units ?? scenario.displayUnits;
-  const r = columnRestraint(scenario, { end: opts.end, units: system });
+  const seed = scenario.analysis.seed ?? DEFAULT_SEED;
+  const r = await columnRestraint(scenario, { end: opts.end, units: system, method: opts.method, designAlpha: opts.designAlpha, governing: governingAssessor(seed) });
   if (opts.out) {
     // the report around the study: the column, FORM/SORM at the assessed stiffness, sensitivity, the curve
     const a = await assessColumn(scenario, { methods: ['form', 'sorm'], end: opts.end, restraint: r });

@@ -224,9 +224,27 @@ export interface RestraintStudy {
   required: { bottom?: number | null; top?: number | null };
   fixityFactor: { bottom?: number; top?: number }; // R/(R+3) at the required stiffness
   effectiveLengthFactor: number | null; // K at the required stiffness (means)
-  /** K of the column whose studied springs are known exactly (no scatter) and just reach the target β: the largest K a deterministic check may use. */
+  /** Reliability-equivalent K: the studied springs known exactly (no scatter) just reach the target β. Not a partial-factor code check; null when withheld. */
   equivalentK: number | null;
   sentence: string; // the justification sentence, ready to quote
+  /** Per studied end: required mean, CoV, 5 % and EN 1990 Annex C design stiffness (N·m/rad); absent unless a finite stiffness reaches the target. */
+  requirement?: Partial<Record<EndName, { mean: number; cov: number; characteristic: number; design: number; alphaBasis: string }>>;
+  /** K with the studied ends at their design stiffness */
+  designK?: number | null;
+  /** the method that solved for the requirement, and the assessment that confirmed it */
+  method?: string;
+  confirmation?: { method: string; beta: number; raisedBy: number } | null;
+  /** iso-β map over both ends (FORM on a coarse grid, interpolated) */
+  contour?: {
+    levels: number[];
+    segments: { level: number; bottom: [number, number]; top: [number, number] }[];
+    assessed: { bottom: number; top: number };
+    asymptotes: { bottomWithTopRigid: number | null; topWithBottomRigid: number | null };
+    range: { bottom: [number, number]; top: [number, number] };
+    formAnalyses: number;
+  };
+  /** required mean stiffness and 5 % fractile against the stiffness's CoV (first studied random end) */
+  covCurve?: { end: EndName; assessedCov: number; points: { cov: number; mean: number | null; characteristic: number | null }[]; formAnalyses: number };
 }
 
 /**

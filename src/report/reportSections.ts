@@ -323,28 +323,36 @@ function sensitivitySection(input: ReportInput, charts: ChartSpec[]): Section {
 function restraintSection(input: ReportInput, system: UnitSystem, charts: ChartSpec[]): Section {
   const st = input.restraint;
   if (!st) return section('restraint', [{ kind: 'paragraph', text: 'No end is given as a rotational spring, so no restraint study was made.' }]);
+  const q = (v: number | undefined) => (v === undefined ? '' : formatQuantity(v, 'rotationalStiffness', system));
   const rows = st.ends.map((e) => {
     const req = st.required[e];
+    const r = st.requirement?.[e];
     return [
       e,
-      req === null || req === undefined ? 'not reachable (even rigid ends fall short)' : formatQuantity(req, 'rotationalStiffness', system),
+      req === null || req === undefined ? 'not reachable by restraint' : formatQuantity(req, 'rotationalStiffness', system),
+      r ? formatNumber(r.cov, 2) : '',
+      q(r?.characteristic),
+      q(r?.design),
       st.fixityFactor[e] === undefined ? '' : formatNumber(st.fixityFactor[e] as number, 3),
     ];
   });
+  const ks: string[] = [];
+  if (st.effectiveLengthFactor !== null) ks.push(`K at the required means: ${formatNumber(st.effectiveLengthFactor, 3)}.`);
+  if (st.designK !== undefined && st.designK !== null) ks.push(`K_d at the design stiffness: ${formatNumber(st.designK, 3)}, the K to use with the other design values of the same method (EN 1990 Annex C).`);
+  if (st.equivalentK !== null) ks.push(`K at which β reaches the target if the stiffness were known exactly (this scenario's statistics and strength model); not a partial-factor code check: ${formatNumber(st.equivalentK, 3)}.`);
   return section('restraint', [
     { kind: 'callout', tone: 'info', text: st.sentence },
     {
       kind: 'table',
-      caption: `Mean rotational stiffness at which FORM β equals the target ${formatBeta(st.targetBeta)}`,
-      head: ['end', 'required mean stiffness', 'fixity factor'],
+      caption: `Stiffness at which β equals the target ${formatBeta(st.targetBeta)}${st.method ? ` (solved with ${st.method.toUpperCase()}${st.confirmation ? `; assessed there, ${st.confirmation.method.toUpperCase()} gives β = ${formatBeta(st.confirmation.beta)}` : ''})` : ''}`,
+      head: ['end', 'required mean', 'CoV', '5 % characteristic', 'design (EN 1990 Annex C)', 'fixity factor'],
       rows,
-      numeric: [false, true, true],
+      numeric: [false, true, true, true, true, true],
     },
-    {
-      kind: 'paragraph',
-      text: `At the required stiffness K = ${st.effectiveLengthFactor === null ? '—' : formatNumber(st.effectiveLengthFactor, 3)}; a deterministic check that takes the connections as known exactly reaches the same target with K = ${st.equivalentK === null ? '—' : formatNumber(st.equivalentK, 3)} (the effective length factor a code check may use at most).`,
-    },
+    ...(ks.length > 0 ? [{ kind: 'paragraph' as const, text: ks.join(' ') }] : []),
     ...chartBlock(charts, 'restraint-curve'),
+    ...chartBlock(charts, 'restraint-contour'),
+    ...chartBlock(charts, 'restraint-cov'),
   ]);
 }
 

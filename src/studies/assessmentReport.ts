@@ -2,6 +2,7 @@
  * The report's input (report/reportInput.ts) filled from an assessment: the report computes
  * nothing, so every number it shows is put here.
  */
+import type { ColumnRestraintResult } from './columnRestraint.js';
 import { quantityKindOf, describePath } from '../limitState/quantityKind.js';
 import { listScalars } from '../scenario/variables.js';
 import type { End, Scenario } from '../scenario/types.js';
@@ -209,6 +210,26 @@ export function assessmentReportInput(a: Assessment, meta: RunMeta): ReportInput
       effectiveLengthFactor: r.kAtRequired,
       equivalentK: r.kDeterministic,
       sentence: r.sentence,
+      requirement: r.requirement
+        ? Object.fromEntries(Object.entries(r.requirement).map(([e, q]) => [e, { mean: q.mean, cov: q.cov, characteristic: q.characteristic, design: q.design, alphaBasis: q.alphaBasis }]))
+        : undefined,
+      designK: r.kDesign,
+      method: r.method,
+      confirmation: r.confirmation ? { method: r.confirmation.method, beta: r.confirmation.beta, raisedBy: r.confirmation.raisedBy } : null,
+      contour: r.maps?.contour
+        ? {
+            levels: r.maps.contour.levels,
+            segments: r.maps.contour.segments,
+            assessed: r.maps.contour.assessed,
+            asymptotes: r.maps.contour.asymptotes,
+            range: {
+              bottom: [r.maps.contour.bottom[0], r.maps.contour.bottom[r.maps.contour.bottom.length - 1]],
+              top: [r.maps.contour.top[0], r.maps.contour.top[r.maps.contour.top.length - 1]],
+            },
+            formAnalyses: r.maps.contour.calls,
+          }
+        : undefined,
+      covCurve: covCurveInput(r),
     };
   }
 
@@ -297,5 +318,19 @@ export function assessmentReportInput(a: Assessment, meta: RunMeta): ReportInput
       designPoint: a.samples.designPoint,
     },
     cautions,
+  };
+}
+
+/** The required-stiffness-against-CoV curve of the first studied end that is random. */
+function covCurveInput(r: ColumnRestraintResult): NonNullable<ReportInput['restraint']>['covCurve'] {
+  const c = r.maps?.covCurve;
+  if (!c) return undefined;
+  const end = r.study.ends.find((e) => r.base[e]?.kind === 'random') as 'bottom' | 'top' | undefined;
+  if (!end) return undefined;
+  return {
+    end,
+    assessedCov: c.assessedCov,
+    formAnalyses: c.calls,
+    points: c.points.map((p) => ({ cov: p.cov, mean: p.mean[end] ?? null, characteristic: p.characteristic[end] ?? null })),
   };
 }

@@ -26,7 +26,7 @@ import { scalarAt } from '../scenario/variables.js';
 import type { DistSpec } from '../probability/distribution.js';
 import { scenarioForm } from './columnForm.js';
 import type { UnitSystem } from '../report/displayUnits.js';
-import { columnRestraint, studiedEnds, type ColumnRestraintResult, type EndChoice } from './columnRestraint.js';
+import { columnRestraint, studiedEnds, type ColumnRestraintResult, type EndChoice, type GoverningAssessor } from './columnRestraint.js';
 import { BOW_PATH, resolveStrengthModel, type ModelFactorUsed } from '../limitState/strengthChoice.js';
 import { betaByStrengthModel, type StrengthModelBeta } from './strengthComparison.js';
 import { characteristicValues, type CharacteristicSummary } from './characteristicValues.js';
@@ -222,6 +222,17 @@ export function checkedGoverning(
   };
 }
 
+/** The methods a restraint requirement is confirmed with (Monte Carlo left out: too slow at β near the target). */
+export const CONFIRM_METHODS: readonly Method[] = ['form', 'sorm', 'is'];
+
+/** Assess a scenario as `stanchion assess --methods form,sorm,is` would and return its governing β. */
+export function governingAssessor(seed: number): GoverningAssessor {
+  return async (t: Scenario) => {
+    const a = await assessColumn(t, { methods: CONFIRM_METHODS, seed, reliabilityOnly: true });
+    return { method: a.governing.method, beta: a.governing.beta };
+  };
+}
+
 export async function assessColumn(given: Scenario, opts: AssessOptions = {}): Promise<Assessment> {
   // the scenario as its strength model sees it; `given` is kept for the comparison of models
   const resolved = resolveStrengthModel(given);
@@ -322,7 +333,9 @@ export async function assessColumn(given: Scenario, opts: AssessOptions = {}): P
     const baseline = combos ? combos.combinations.find((c) => c.leading === model.combination.leading)!.form.beta : formResult.beta;
     sensitivity = sensitivityStudy(s, model, baseline, seed);
     if (combos) sensitivity.notes.push(`The sensitivity and restraint studies use the combination with ${model.combination.leading} leading (the largest mean demand), not the series system.`);
-    if (studiedEnds(s, opts.end).length > 0) restraint = opts.restraint ?? columnRestraint(s, { end: opts.end, units: opts.units });
+    if (studiedEnds(s, opts.end).length > 0) {
+      restraint = opts.restraint ?? (await columnRestraint(s, { end: opts.end, units: opts.units, governing: governingAssessor(seed) }));
+    }
   }
   const byStrengthModel = opts.reliabilityOnly || interrupted ? undefined : betaByStrengthModel(given, formResult);
   return {

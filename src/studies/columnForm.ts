@@ -6,6 +6,7 @@
 import { buildColumnModel } from '../limitState/columnModel.js';
 import { problemFromModel } from '../limitState/columnRecipe.js';
 import { form } from '../reliability/form.js';
+import { sorm } from '../reliability/sorm.js';
 import { checkEstimate, checkForm, type FormCheckResult } from '../reliability/formCheck.js';
 import type { Scenario } from '../scenario/types.js';
 
@@ -50,4 +51,22 @@ export function scenarioFormChecked(s: Scenario, seed: number): CheckedBetaPoint
   const check = checkForm(problem, r, { seed });
   const e = checkEstimate(check);
   return { beta: r.system.beta, pf: r.system.pf, converged: r.converged, check, checkBeta: e.beta, checkPf: e.pf };
+}
+
+/** SORM on a whole scenario (its nearest design point), for the restraint study's `--method sorm`. */
+export function scenarioSorm(s: Scenario): BetaPoint {
+  const known = certain(s);
+  if (known) return known;
+  const problem = problemFromModel(buildColumnModel(s));
+  const r = form(problem, { restarts: 0 });
+  const q = sorm(problem, r);
+  return Number.isFinite(q.beta) ? { beta: q.beta, pf: q.pf, converged: r.converged } : { beta: r.system.beta, pf: r.system.pf, converged: r.converged };
+}
+
+/** FORM's signed α of every random variable of a scenario (resistances < 0), by name. */
+export function scenarioAlphas(s: Scenario): { names: string[]; alpha: number[] } {
+  const model = buildColumnModel(s);
+  if (model.names.length === 0) return { names: [], alpha: [] };
+  const r = form(problemFromModel(model), { restarts: 0 });
+  return { names: [...model.names], alpha: r.alpha };
 }

@@ -4,16 +4,19 @@
  * reaches the target, and a sentence a reviewer can read.
  */
 import { buildColumnModel } from '../limitState/columnModel.js';
-import { withEndStiffness } from '../limitState/scenarioEdits.js';
+import { scaleScalar, withEndStiffness, withScalar } from '../limitState/scenarioEdits.js';
 import { criticalLoad } from '../mechanics/criticalLoad.js';
 import { fixityFactor } from '../mechanics/restraint.js';
 import { makeDistribution } from '../probability/makeDistribution.js';
 import { formatQuantity, type UnitSystem } from '../report/displayUnits.js';
 import { InputError } from '../scenario/inputError.js';
 import type { Scalar, Scenario } from '../scenario/types.js';
-import { scenarioForm, scenarioFormChecked, type BetaPoint, type CheckedBetaPoint } from './columnForm.js';
+import { findRootBracketed } from '../probability/rootBracketed.js';
+import { scenarioAlphas, scenarioForm, scenarioFormChecked, scenarioSorm, type BetaPoint, type CheckedBetaPoint } from './columnForm.js';
 import { restraintStudy, type RestraintStudyInput, type RestraintStudyResult } from './restraintStudy.js';
-import { restraintSentence } from './restraintSentence.js';
+import { EQUIVALENT_K_LABEL, restraintSentence, type ShortfallFacts } from './restraintSentence.js';
+import { designAlpha, endRequirement, type DesignAlphaChoice, type EndRequirement } from './restraintRequirement.js';
+import { restraintMaps, restraintMapsJson, type RestraintMaps } from './restraintMaps.js';
 
 export type EndChoice = 'bottom' | 'top' | 'both';
 type EndName = 'bottom' | 'top';
@@ -28,10 +31,25 @@ export interface ColumnRestraintResult {
   /** K with each studied spring at its 5 % fractile when its mean is the required one */
   kAtCharacteristic: number | null;
   /**
-   * The deterministic K a code check would need: K of the column whose studied springs are known
-   * exactly (no scatter) and just reach the target β; null when even rigid ends fall short.
+   * The reliability-equivalent K: K of the column whose studied springs are known exactly (no
+   * scatter) and just reach the target β. Not a partial-factor code check. null when even rigid
+   * ends fall short, or when it would contradict the verdict at the assessed stiffness.
    */
   kDeterministic: number | null;
+  /** K with every studied end at its EN 1990 Annex C design stiffness */
+  kDesign: number | null;
+  /** K at the means as assessed */
+  kAssessed: number;
+  /** per studied end: mean, CoV, 5 % and design stiffness, fixity factor at the mean (null unless reached) */
+  requirement: Record<string, EndRequirement & { fixityFactor: number }> | null;
+  /** the method that solved for the requirement */
+  method: RestraintMethod;
+  /** the assessment at the reported stiffness (null without an assessor or a finite requirement) */
+  confirmation: RestraintConfirmation | null;
+  /** when even rigid ends fall short: the loads at which the target is met */
+  shortfall: ShortfallFacts | null;
+  /** contour map over both ends and the required stiffness against its CoV (absent when not asked) */
+  maps?: RestraintMaps;
   /** How the requirement's β was established and checked. */
   verification: RestraintVerification;
   sentence: string;
@@ -50,8 +68,8 @@ export interface RestraintCheckPoint {
 }
 
 export interface RestraintVerification {
-  /** 'form' when FORM's β agreed with its check at every deciding point; 'is' when the study was redone with the check's estimates. */
-  method: 'form' | 'is';
+  /** 'form' when FORM's β agreed with its check at every deciding point; 'is' when the study was redone with the check's estimates; the chosen method with `--method`. */
+  method: 'form' | 'sorm' | 'is';
   checks: RestraintCheckPoint[];
   /** The check's β at the reported requirement (null when there is no finite requirement). */
   verifiedBeta: number | null;
@@ -153,10 +171,67 @@ function ratioAt(s: Scenario, k: number): number {
   return k === Infinity ? Infinity : (k * st.L) / (st.E * st.I);
 }
 
-export function columnRestraint(
-  s: Scenario,
-  opts: { end?: EndChoice; units?: UnitSystem; grid?: { min?: number; max?: number; points?: number } } = {},
-): ColumnRestraintResult {
+export type RestraintMethod = 'form' | 'sorm' | 'is';
+
+/** The governing β of an assessment (as `stanchion assess` decides it) of a scenario. */
+export interface GoverningBeta {
+  method: string;
+  beta: number;
+}
+export type GoverningAssessor = (s: Scenario) => Promise<GoverningBeta>;
+
+export interface ColumnRestraintOptions {
+  end?: EndChoice;
+  units?: UnitSystem;
+  /** the method that solves for the requirement; default: FORM, or its importance-sampling check where they disagree */
+  method?: RestraintMethod;
+  /** α of the design stiffness: FORM's own (default) or the EN 1990 Annex C standard reading */
+  designAlpha?: DesignAlphaChoice;
+  /** assess a scenario with the governing method: confirms (and if need be raises) the requirement */
+  governing?: GoverningAssessor;
+  /** the contour map and the required-stiffness-against-CoV curve (default true) */
+  maps?: boolean;
+}
+
+/** How `stanchion assess` confirmed the reported requirement. */
+export interface RestraintConfirmation {
+  /** governing method of the assessment at the reported stiffness */
+  method: string;
+  beta: number;
+  /** the method's own root factor, before any raise */
+  rootFactor: number;
+  /** reported factor / root factor (1 when not raised) */
+  raisedBy: number;
+  confirmed: boolean;
+}
+
+const MAX_RAISES = 8;
+
+/**
+ * Assess at the method's root; while the governing β falls short of the target, raise the factor
+ * by the shortfall over the local slope dβ/d ln(factor) of the study curve (at least 1 %).
+ */
+async function confirmRequirement(
+  study: RestraintStudyResult,
+  edited: (f: number) => Scenario,
+  governing: GoverningAssessor,
+): Promise<RestraintConfirmation> {
+  const root = study.requiredFactor as number;
+  const pts = study.curve.filter((p) => p.ideal === undefined && p.factor > 0);
+  const below = pts.filter((p) => p.factor < root * 0.999).pop();
+  const above = pts.find((p) => p.factor > root * 1.001);
+  const slope = below && above ? (above.beta - below.beta) / Math.log(above.factor / below.factor) : 0;
+  let f = root;
+  let g = await governing(edited(f));
+  for (let k = 0; k < MAX_RAISES && g.beta < study.target; k++) {
+    const step = slope > 1e-3 ? Math.max((study.target - g.beta) / slope + 0.002 / slope, 0.01) : 0.1;
+    f *= Math.exp(step);
+    g = await governing(edited(f));
+  }
+  return { method: g.method, beta: g.beta, rootFactor: root, raisedBy: f / root, confirmed: g.beta >= study.target };
+}
+
+export async function columnRestraint(s: Scenario, opts: ColumnRestraintOptions = {}): Promise<ColumnRestraintResult> {
   const ends = studiedEnds(s, opts.end);
   if (ends.length === 0) {
     throw new InputError(
@@ -175,58 +250,148 @@ export function columnRestraint(
   };
   const baseStiffness: Record<string, number> = {};
   for (const e of ends) baseStiffness[e] = meanValue(base[e]);
-
   const seed = s.analysis.seed ?? 1;
-  const { study, verification } = verifiedRestraintStudy(scenarioEvaluators((f) => edited(f), seed), { baseStiffness, target: s.targetBeta });
+  const target = s.targetBeta;
+
+  const solve = (build: (f: number) => Scenario) => {
+    const evaluate = scenarioEvaluators(build, seed);
+    if (!opts.method) return verifiedRestraintStudy(evaluate, { baseStiffness, target });
+    const betaAt = methodEvaluator(opts.method, build, seed);
+    const study = restraintStudy({ baseStiffness, target, betaAtFactor: betaAt });
+    return { study, verification: { method: opts.method, checks: [], verifiedBeta: null } as RestraintVerification };
+  };
+  const solved = solve((f) => edited(f));
+  let study = solved.study;
+  const verification = solved.verification;
+
+  let confirmation: RestraintConfirmation | null = null;
+  if (opts.governing && study.outcome === 'reached' && study.requiredFactor !== null) {
+    confirmation = await confirmRequirement(study, (f) => edited(f), opts.governing);
+    if (confirmation.raisedBy !== 1) {
+      const f = confirmation.rootFactor * confirmation.raisedBy;
+      const required = Object.fromEntries(ends.map((e) => [e, f * baseStiffness[e]]));
+      study = { ...study, requiredFactor: f, required };
+    }
+    if (!confirmation.confirmed) {
+      notes.push(`the assessment with the governing method (${confirmation.method}) still gives β = ${confirmation.beta.toFixed(2)} at the reported stiffness after ${MAX_RAISES} raises; treat the requirement as not established`);
+    }
+  }
 
   const kWith = (t: Scenario): number => {
     const model = buildColumnModel(t);
     const st = model.state(model.mean);
     return criticalLoad(st.E * st.I, st.L, st.frame, st.r).K;
   };
+  /** K with the studied ends known exactly at these stiffnesses (Infinity: rigid). */
+  const kAtStiffness = (stiff: Record<string, number>): number => {
+    let t = s;
+    for (const e of ends) {
+      const k = stiff[e];
+      t = withEndStiffness(t, e, { kind: 'fixed', value: k === Infinity ? 1 : k }, k === Infinity ? Infinity : 1);
+    }
+    return kWith(t);
+  };
   const f = study.requiredFactor;
-  const reached = f !== null && Number.isFinite(f);
+  const reached = study.outcome === 'reached' && f !== null && Number.isFinite(f) && f > 0;
   const fixityAtRequired: Record<string, number | null> = {};
   for (const e of ends) fixityAtRequired[e] = reached ? fixityFactor(ratioAt(s, (baseStiffness[e] ?? 0) * (f as number))) : null;
   const kAtRequired = reached ? kWith(edited(f as number)) : null;
+
+  let requirement: ColumnRestraintResult['requirement'] = null;
+  let kDesign: number | null = null;
   let kAtCharacteristic: number | null = null;
   if (reached) {
-    let t = s;
+    const at = edited(f as number);
+    const { names, alpha } = scenarioAlphas(at);
+    requirement = {};
     for (const e of ends) {
-      const b = base[e];
-      const scaled = b.kind === 'fixed' ? b.value * (f as number) : makeDistribution(b.spec).quantile(0.05) * (f as number);
-      t = withEndStiffness(t, e, { kind: 'fixed', value: scaled }, 1);
+      const a = designAlpha(alpha, names.indexOf(`column.ends.${e}.rotation`), opts.designAlpha ?? 'form');
+      const q = endRequirement(base[e], f as number, target, a);
+      requirement[e] = { ...q, fixityFactor: fixityAtRequired[e] as number };
     }
-    kAtCharacteristic = kWith(t);
+    kDesign = kAtStiffness(Object.fromEntries(ends.map((e) => [e, requirement![e].design])));
+    kAtCharacteristic = kAtStiffness(Object.fromEntries(ends.map((e) => [e, requirement![e].characteristic])));
   }
-  // the same study with the studied springs known exactly: the K a deterministic check may use
+
+  // the same study with the studied springs known exactly: the reliability-equivalent K
   const fixedBase: Record<string, Scalar> = {};
   for (const e of ends) fixedBase[e] = { kind: 'fixed', value: baseStiffness[e] };
-  const { study: exact, verification: exactVerification } = verifiedRestraintStudy(scenarioEvaluators((fct) => edited(fct, fixedBase), seed), { baseStiffness, target: s.targetBeta });
-  if (exactVerification.method !== 'form') {
-    notes.push(`with the connections known exactly, FORM disagreed with its sampling check; that K comes from importance sampling`);
+  const exact = solve((fct) => edited(fct, fixedBase));
+  if (exact.verification.method === 'is' && !opts.method) {
+    notes.push('with the connections known exactly, FORM disagreed with its sampling check; that K comes from importance sampling');
   }
-  const kDeterministic = exact.requiredFactor === null ? null : kWith(edited(exact.requiredFactor, fixedBase));
+  let kDeterministic = exact.study.requiredFactor === null ? null : kWith(edited(exact.study.requiredFactor, fixedBase));
+  // never print a K that contradicts the verdict at the assessed stiffness
+  const kAssessed = kWith(s);
+  const assessed = opts.governing ? await opts.governing(s) : null;
+  const assessedBeta = assessed ? assessed.beta : study.curve.find((p) => p.factor === 1)?.beta ?? NaN;
+  if (kDeterministic !== null && Number.isFinite(kDeterministic) && Number.isFinite(assessedBeta)) {
+    const meets = assessedBeta >= target;
+    if (meets !== kAssessed <= kDeterministic + 1e-9) {
+      notes.push(
+        `the K at which β reaches the target with the stiffness known exactly is not given: it would ${meets ? 'fail' : 'pass'} the column as assessed (K = ${kAssessed.toFixed(2)} at the means), which ${meets ? 'meets' : 'does not meet'} the target (β = ${assessedBeta.toFixed(2)})`,
+      );
+      kDeterministic = null;
+    }
+  }
+  if (kDeterministic !== null && !Number.isFinite(kDeterministic)) kDeterministic = null;
+
+  let shortfall: ShortfallFacts | undefined;
+  if (study.outcome === 'unreachable') shortfall = loadsForTarget(edited(Infinity), target, opts.method ?? verification.method, seed);
+
   const system = opts.units ?? s.displayUnits;
-  const studySentence = restraintSentence(study, {
-    formatStiffness: (k) => formatQuantity(k, 'rotationalStiffness', system),
-    fixityFactor: (_end, k) => fixityFactor(ratioAt(s, k)),
-    effectiveLengthFactor: (stiff) => {
-      let t = s;
-      for (const e of ends) {
-        const k = stiff[e];
-        t = withEndStiffness(t, e, { kind: 'fixed', value: k === Infinity ? 1 : k }, k === Infinity ? Infinity : 1);
-      }
-      return kWith(t);
-    },
-    endLabel: (e) => `the ${e} connection`,
-  });
-  const withK =
-    kDeterministic !== null && Number.isFinite(kDeterministic)
-      ? `${studySentence} With the connections known exactly, the target is reached at K = ${kDeterministic.toFixed(2)}: the largest effective length factor a deterministic check may use.`
-      : studySentence;
-  const sentence = `${withK} ${verificationSentence(verification)}`;
-  return { study, base, fixityAtRequired, kAtRequired, kAtCharacteristic, kDeterministic, verification, sentence, notes };
+  const wording = { formatStiffness: (k: number) => formatQuantity(k, 'rotationalStiffness', system) };
+  const facts = reached && requirement && kAtRequired !== null && kDesign !== null
+    ? { reached: { requirement, k: kAtRequired, kDesign, factor: f as number } }
+    : { shortfall };
+  const parts = [restraintSentence(study, wording, facts)];
+  if (kDeterministic !== null) parts.push(`${EQUIVALENT_K_LABEL}: ${kDeterministic.toFixed(2)}.`);
+  parts.push(opts.method ? methodSentence(opts.method, confirmation) : `${verificationSentence(verification)}${confirmation ? ` ${confirmationSentence(confirmation)}` : ''}`);
+  const sentence = parts.join(' ');
+
+  const maps = opts.maps === false ? undefined : restraintMaps(s, { ends, base, edited, target, required: reached ? study.required as Record<string, number> : null });
+  return {
+    study, base, fixityAtRequired, kAtRequired, kAtCharacteristic, kDeterministic, kDesign, kAssessed, requirement,
+    method: opts.method ?? verification.method, confirmation, shortfall: shortfall ?? null, verification, sentence, notes, maps,
+  };
+}
+
+/** β of a scenario by the chosen method; IS is the self-check's importance sampling with one seed at every factor (common random numbers). */
+function methodEvaluator(method: RestraintMethod, build: (f: number) => Scenario, seed: number): (f: number) => BetaPoint {
+  if (method === 'form') return (f) => scenarioForm(build(f));
+  if (method === 'sorm') return (f) => scenarioSorm(build(f));
+  return (f) => {
+    const p = scenarioFormChecked(build(f), seed);
+    return { beta: p.checkBeta, pf: p.checkPf, converged: p.converged };
+  };
+}
+
+/** The load factor at which the target is met with the studied ends rigid (bisection-safe root in ln λ). */
+function loadsForTarget(rigid: Scenario, target: number, method: RestraintMethod, seed: number): ShortfallFacts {
+  const scaled = (lambda: number): Scenario => {
+    let t = rigid;
+    for (const l of rigid.loads) t = withScalar(t, l.path, scaleScalar(l.value, lambda));
+    return t;
+  };
+  const model = buildColumnModel(rigid);
+  const utilizationRigid = model.utilization(model.mean);
+  const betaAt = methodEvaluator(method, scaled, seed);
+  const lo = Math.log(0.01);
+  if (!(betaAt(Math.exp(lo)).beta >= target)) return { loadFactor: null, utilizationRigid };
+  const root = findRootBracketed((t) => betaAt(Math.exp(t)).beta - target, lo, 0, { xTolerance: 1e-4 });
+  return { loadFactor: Math.exp(root), utilizationRigid };
+}
+
+const METHOD_LABEL: Record<string, string> = { form: 'FORM', sorm: 'SORM', is: 'importance sampling', mc: 'Monte Carlo', subset: 'subset simulation' };
+
+function confirmationSentence(c: RestraintConfirmation): string {
+  const label = METHOD_LABEL[c.method] ?? c.method;
+  const raised = c.raisedBy > 1 ? ` after the requirement was raised ${((c.raisedBy - 1) * 100).toPrecision(2)} % above the root, because at the root it fell short` : '';
+  return `Assessed at the reported stiffness, the governing method (${label}) gives β = ${c.beta.toFixed(2)}${raised}.`;
+}
+
+function methodSentence(method: RestraintMethod, c: RestraintConfirmation | null): string {
+  return `The requirement was solved with ${METHOD_LABEL[method]}${method === 'is' ? ' (one seed at every stiffness: common random numbers)' : ''}.${c ? ` ${confirmationSentence(c)}` : ''}`;
 }
 
 const finite = (v: number): number | null => (Number.isFinite(v) ? v : null);
@@ -244,8 +409,17 @@ export function restraintJson(r: ColumnRestraintResult): Record<string, unknown>
     ends: study.ends,
     target_beta: study.target,
     required,
-    method: v.method,
-    verified: { method: 'is', beta: v.verifiedBeta },
+    method: r.method,
+    verified: r.confirmation
+      ? { method: r.confirmation.method, beta: finite(r.confirmation.beta), confirmed: r.confirmation.confirmed, root_factor: r.confirmation.rootFactor, raised_by: r.confirmation.raisedBy }
+      : { method: 'is', beta: v.verifiedBeta },
+    requirement: r.requirement
+      ? Object.fromEntries(Object.entries(r.requirement).map(([e, q]) => [e, {
+          mean: q.mean, cov: q.cov, characteristic: q.characteristic, design: q.design,
+          effective_length_factor: r.kAtRequired, effective_length_factor_design: r.kDesign,
+          fixity_factor: q.fixityFactor, alpha: q.alpha, alpha_basis: q.alphaBasis, design_fractile: q.designFractile,
+        }]))
+      : null,
     checks: v.checks.map((c) => ({
       role: c.role, factor: finite(c.factor), form_beta: finite(c.formBeta), check_beta: finite(c.checkBeta), check_method: c.checkMethod, agrees: c.agrees,
     })),
@@ -263,6 +437,10 @@ export function restraintJson(r: ColumnRestraintResult): Record<string, unknown>
     effective_length_factor: r.kAtRequired,
     effective_length_factor_characteristic: r.kAtCharacteristic,
     effective_length_factor_deterministic: r.kDeterministic,
+    effective_length_factor_design: r.kDesign,
+    effective_length_factor_assessed: r.kAssessed,
+    shortfall: r.shortfall ? { load_factor: r.shortfall.loadFactor, utilization_rigid: r.shortfall.utilizationRigid } : null,
+    ...(r.maps ? { maps: restraintMapsJson(r.maps) } : {}),
     sentence: r.sentence,
     notes: r.notes,
   };

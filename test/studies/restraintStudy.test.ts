@@ -75,21 +75,24 @@ describe('restraintStudy', () => {
 });
 
 describe('restraintSentence', () => {
-  const wording = {
-    formatStiffness: (k: number) => `${(k / 1e6).toFixed(2)} MN m/rad`,
-    fixityFactor: (_end: string, k: number) => k / (k + 3e6),
-    effectiveLengthFactor: () => 0.78,
-  };
-  it('states the required stiffness, fixity factor, K and multiple', () => {
+  const wording = { formatStiffness: (k: number) => `${(k / 1e6).toFixed(2)} MN m/rad` };
+  const q = (mean: number) => ({ mean, cov: 0.5, characteristic: mean * 0.4, design: mean * 0.3, alpha: 0.5, alphaBasis: 'FORM α = 0.50 at the requirement', designFractile: 0.029, fixityFactor: 0.5 });
+  it('states mean, CoV, 5 % fractile, design stiffness, K and K_d for each studied end', () => {
     const result = restraintStudy({ ...synthetic(2, 3), baseStiffness: base, target: 3.8 });
-    expect(restraintSentence(result, wording)).toBe(
-      'The target β = 3.80 needs a mean rotational stiffness of at least 3.00 MN m/rad at the bottom (fixity factor 0.50) and 1.50 MN m/rad at the top (fixity factor 0.33), giving K = 0.78; that is 1.5 times the stiffness assumed.',
-    );
+    const text = restraintSentence(result, wording, { reached: { requirement: { bottom: q(3e6), top: q(1.5e6) }, k: 0.78, kDesign: 0.86, factor: 1.5 } });
+    expect(text).toMatch(/^The target β = 3\.80 needs at the bottom connection a mean rotational stiffness of at least 3\.00 MN m\/rad with CoV 0\.50, that is a 5 % characteristic stiffness of at least 1\.20 MN m\/rad/);
+    expect(text).toMatch(/and at the top connection a mean rotational stiffness of at least 1\.50 MN m\/rad/);
+    expect(text).toMatch(/K = 0\.78 at these means, 1\.5 times the stiffness assumed\./);
+    expect(text).toMatch(/0\.90 MN m\/rad at the bottom connection \(FORM α = 0\.50 at the requirement, fractile Φ\(−α·β\) = 0\.029\)/);
+    expect(text).toMatch(/K_d = 0\.86 there, the K to use with the other design values of the same method\.$/);
   });
-  it('has a sentence for each other outcome', () => {
-    const say = (t: number): string => restraintSentence(restraintStudy({ ...synthetic(2, 3), baseStiffness: base, target: t }), wording);
-    expect(say(1.5)).toMatch(/already met with pinned ends \(β = 2\.00\)/);
-    expect(say(5.5)).toMatch(/cannot be reached.*β = 5\.00/);
-    expect(say(5)).toMatch(/only with practically rigid ends/);
+  it('has one sentence for each other outcome, naming the studied ends and printing no dashes', () => {
+    const say = (t: number, ends: Record<string, number> = base): string =>
+      restraintSentence(restraintStudy({ ...synthetic(2, 3), baseStiffness: ends, target: t }), wording, { shortfall: { loadFactor: 0.8, utilizationRigid: 0.75 } });
+    expect(say(1.5)).toMatch(/already met with pinned bottom and top connections \(β = 2\.00\)/);
+    expect(say(5.5)).toBe('Even rigid bottom and top connections reach only β = 5.00, short of the target 5.50; the target would be met with the loads at 80 % of those given (utilization 0.60 at the means instead of 0.75).');
+    expect(say(5.5, { bottom: 1e6 })).toMatch(/^Even a rigid bottom connection \(the top end as given\) reaches only/);
+    expect(say(5)).toMatch(/only with rigid bottom and top connections/);
+    for (const t of [1.5, 5, 5.5]) expect(say(t)).not.toMatch(/—/);
   });
 });

@@ -11,6 +11,8 @@ import { conditionalBetaChart } from './conditionalBetaTornado.js';
 import { importanceChart } from './importanceFactors.js';
 import { restraintCurveChart } from './restraintCurve.js';
 import { sweepChart } from './sweep.js';
+import { restraintContourChart } from './restraintContour.js';
+import { restraintCovChart } from './restraintCov.js';
 
 export function buildCharts(input: ReportInput, system: UnitSystem): ChartSpec[] {
   const charts: ChartSpec[] = [];
@@ -22,6 +24,8 @@ export function buildCharts(input: ReportInput, system: UnitSystem): ChartSpec[]
   if (input.sensitivity.conditionalBeta.rows.length > 0) charts.push(conditionalBetaChart(input));
   if (input.sensitivity.importance.length > 0) charts.push(importanceChart(input));
   if (input.restraint && input.restraint.curve.some((p) => p.ideal === undefined)) charts.push(restraintCurveChart(input, input.restraint, system));
+  if (input.restraint?.contour && input.restraint.contour.segments.length > 0) charts.push(restraintContourChart(input, input.restraint, system));
+  if (input.restraint?.covCurve && input.restraint.covCurve.points.some((p) => p.mean !== null)) charts.push(restraintCovChart(input, input.restraint, system));
   if (input.sweep && input.sweep.rows.length > 0) charts.push(sweepChart(input, input.sweep, system));
   return charts;
 }

@@ -14,7 +14,8 @@ describe('reports from restraint and sweep', () => {
     // common practice: springs known exactly (no scatter) reach the same target with less mean
     // stiffness, so their effective length factor is at least the one at the required mean stiffness
     expect(res.effective_length_factor_deterministic).toBeGreaterThanOrEqual(res.effective_length_factor);
-    expect(res.sentence).toMatch(/deterministic check/);
+    expect(res.sentence).toMatch(/if the stiffness were known exactly \(this scenario's statistics and strength model\); not a partial-factor code check/);
+    expect(res.sentence).not.toMatch(/may use/);
     for (const f of ['report.html', 'result.json', 'restraint-curve.csv', 'charts/restraint-curve.svg']) {
       expect(existsSync(join(dir, f)), f).toBe(true);
     }

@@ -51,8 +51,9 @@ async function stopNow(): Promise<void> {
   stopping = true;
   await Promise.race([worker.terminate(), new Promise((resolve) => setTimeout(resolve, TERMINATE_WAIT_MS))]);
   for (const path of heldTemporaries(temporaries)) rmSync(path, { recursive: true, force: true });
-  process.stderr.write('stanchion: interrupted; nothing half-written was left behind\n');
-  process.exit(EXIT_INTERRUPTED);
+  // the command may already have said why it stopped; then one line is enough
+  if (reportedCode === undefined) process.stderr.write('stanchion: interrupted; nothing half-written was left behind\n');
+  process.exit(reportedCode ?? EXIT_INTERRUPTED);
 }
 
 function onSigint(): void {
@@ -77,7 +78,9 @@ worker.on('error', (err) => {
 worker.on('exit', (code) => {
   if (stopping) return;
   if (grace !== undefined) clearTimeout(grace);
+  // a late Ctrl-C while the output drains must not kill the process by signal
   process.off('SIGINT', onSigint);
+  process.on('SIGINT', () => undefined);
   // the worker's output is already queued on this thread's stdout/stderr: let it drain, then exit
   process.exitCode = reportedCode ?? (code === 0 ? 0 : EXIT_INTERNAL);
 });

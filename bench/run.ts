@@ -1,12 +1,15 @@
 /**
  * `npm run bench`: the speed of the mechanics and of the reliability methods, each against a
  * floor measured in the same run (ratios, because the machines are shared and noisy).
+ * `npm run bench -- valid [COUNT] [SEED]` instead runs generated valid scenarios through every
+ * method and study and counts results, input errors and internal errors (bench/validBench.ts).
  */
 import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { dirname, join } from 'node:path';
 import { runMechanicsBench } from './mechanicsBench.js';
 import { runReliabilityBench } from './reliabilityBench.js';
+import { runValidBench } from './validBench.js';
 import { columnRecipe } from '../src/limitState/columnRecipe.js';
 import { loadScenario } from '../src/scenario/loadScenario.js';
 
@@ -19,6 +22,14 @@ function recipeFor(file: string) {
 
 async function main(): Promise<void> {
   console.log(`stanchion bench — node ${process.version}, ${new Date().toISOString()}`);
+  if (process.argv[2] === 'valid') {
+    // npm run bench -- valid [COUNT] [SEED]: generated valid scenarios through everything
+    const count = Number(process.argv[3] ?? 400);
+    const seed = Number(process.argv[4] ?? 1);
+    console.log(`\n## valid scenarios (bench/validScenarios.ts)`);
+    for (const line of await runValidBench(count, seed)) console.log(line);
+    return;
+  }
   console.log('\n## mechanics (critical-load solves per second)');
   for (const line of await runMechanicsBench()) console.log(line);
   console.log('\n## reliability (column limit state: scenarios/braced-base-plate.yaml; rare event: scenarios/timber-store-post.yaml)');

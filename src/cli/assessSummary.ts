@@ -19,7 +19,7 @@ export function formatAssessment(a: Assessment, system: UnitSystem): string {
   lines.push('');
   const rows: string[][] = [['method', 'β', 'pf', 'uncertainty', 'calls']];
   const f = a.form;
-  if (a.methods.includes('form')) rows.push(['FORM', formatBeta(f.beta), formatProbability(f.pf), f.converged ? 'converged' : 'NOT converged', String(f.calls)]);
+  if (a.methods.includes('form')) rows.push(['FORM', formatBeta(f.beta), formatProbability(f.pf), f.converged ? 'converged' : Number.isFinite(f.beta) ? 'NOT converged' : 'no design point', String(f.calls)]);
   if (a.sorm) rows.push([`SORM (${a.sorm.used})`, formatBeta(a.sorm.beta), formatProbability(a.sorm.pf), '', String(a.sorm.calls)]);
   if (a.is) rows.push(['importance sampling', formatBeta(a.is.beta), formatProbability(a.is.pf), pct(a.is.cov), String(a.is.calls)]);
   if (a.mc) {

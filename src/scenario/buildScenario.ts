@@ -69,7 +69,7 @@ export function buildScenario(shape: ScenarioShape, lines: ReadonlyMap<string, n
     if (!LOAD_NAME.test(name)) {
       fail(ctx, ['loads', name], `'${name}' is not a usable load name: use letters, digits, _ and - (starting with a letter or _, at most 64 characters)`);
     }
-    return { name, path: `loads.${name}`, value: readScalar(shape.loads[name]!, { kind: 'force', domain: 'nonnegative' }, ['loads', name], ctx) };
+    return { name, path: `loads.${name}`, value: readScalar(shape.loads[name]!, { kind: 'force', domain: 'load' }, ['loads', name], ctx) };
   });
 
   const modelFactor: Scalar =

@@ -20,6 +20,8 @@ import { betaElasticities, type ElasticityResult, type Moments } from '../sensit
 import { sobolIndices, type SobolResult } from '../sensitivity/sobol.js';
 import { tornado, type TornadoEntry } from '../sensitivity/tornado.js';
 import { InputError } from '../scenario/inputError.js';
+import { fieldDomain } from '../scenario/fieldDomain.js';
+import { supportInsideDomain } from '../scenario/readScalar.js';
 import type { Method, Scenario } from '../scenario/types.js';
 import { scalarAt } from '../scenario/variables.js';
 import type { DistSpec } from '../probability/distribution.js';
@@ -51,6 +53,8 @@ export interface AssessOptions {
   units?: UnitSystem;
   /** a restraint study already computed for this scenario and `end` (not computed again) */
   restraint?: ColumnRestraintResult;
+  /** base samples N of the Sobol estimators (default SOBOL_N) */
+  sobolSamples?: number;
   /** skip sensitivity and restraint studies (sweeps, quick looks) */
   reliabilityOnly?: boolean;
 }
@@ -108,7 +112,7 @@ function specOf(s: Scenario, path: string): DistSpec {
   return sc.spec;
 }
 
-function sensitivityStudy(s: Scenario, model: ColumnModel, baseline: number, seed: number): SensitivityStudy {
+function sensitivityStudy(s: Scenario, model: ColumnModel, baseline: number, seed: number, sobolN: number): SensitivityStudy {
   const { names, dists } = model;
   const notes: string[] = [];
   const utilization = { baseline: model.utilization(model.mean), rows: tornado(names, dists, model.utilization) };
@@ -123,6 +127,8 @@ function sensitivityStudy(s: Scenario, model: ColumnModel, baseline: number, see
     for (const [path, o] of Object.entries(overrides)) {
       const i = names.indexOf(path);
       const spec = withMoments(specOf(s, path), o.mean ?? moments[i].mean, o.sd ?? moments[i].sd);
+      // e.g. a uniform fixity on [0, 1] shifted past 1: that side of the difference does not exist
+      if (!supportInsideDomain(spec, fieldDomain(path))) return NaN;
       t = withScalar(t, path, { kind: 'random', spec });
     }
     return scenarioForm(t).beta;
@@ -130,8 +136,8 @@ function sensitivityStudy(s: Scenario, model: ColumnModel, baseline: number, see
   if (model.correlation) {
     notes.push('Sobol indices treat the variables as independent (the stated correlation is left out of that study only).');
   }
-  const sobolCapacity = sobolIndices(names, dists, model.capacity, { seed, n: SOBOL_N });
-  const sobolG = sobolIndices(names, dists, model.g, { seed: seed + 1, n: SOBOL_N });
+  const sobolCapacity = sobolIndices(names, dists, model.capacity, { seed, n: sobolN });
+  const sobolG = sobolIndices(names, dists, model.g, { seed: seed + 1, n: sobolN });
   return { utilization, capacity, conditionalBeta: conditional, elasticities, sobolCapacity, sobolG, notes };
 }
 
@@ -192,7 +198,8 @@ export async function assessColumn(s: Scenario, opts: AssessOptions = {}): Promi
 
   const formResult = form(problem);
   warnings.push(...formResult.warnings.map((w) => `FORM: ${w}`));
-  if (!formResult.converged) warnings.push(`FORM did not converge: ${formResult.reason ?? 'see its iteration history'}`);
+  // (an infinite β has said why in its own warning: no design point)
+  if (!formResult.converged && Number.isFinite(formResult.beta)) warnings.push(`FORM did not converge: ${formResult.reason ?? 'see its iteration history'}`);
 
   const out: Partial<Assessment> = {};
   if (methods.includes('sorm')) {
@@ -240,7 +247,7 @@ export async function assessColumn(s: Scenario, opts: AssessOptions = {}): Promi
   let sensitivity: SensitivityStudy | undefined;
   let restraint: ColumnRestraintResult | undefined;
   if (!opts.reliabilityOnly && !interrupted) {
-    sensitivity = sensitivityStudy(s, model, formResult.beta, seed);
+    sensitivity = sensitivityStudy(s, model, formResult.beta, seed, opts.sobolSamples ?? SOBOL_N);
     if (studiedEnds(s, opts.end).length > 0) restraint = opts.restraint ?? columnRestraint(s, { end: opts.end, units: opts.units });
   }
   return {

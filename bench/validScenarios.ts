@@ -217,6 +217,21 @@ export const SMALL_RUN: RunSizes = { mcSamples: 2000, isSamples: 400, subsetSamp
 
 const META = { version: 'test', date: '2026-01-01', command: 'assess' };
 
+/** Largest chart side, px, a report may draw (resvg aborts the process on absurd sizes). */
+const MAX_CHART_SIDE = 10_000;
+
+/** An SVG with an infinite or absurd width or height is a broken chart, even if it rendered. */
+function checkChartSizes(files: Map<string, string | Uint8Array>): void {
+  for (const [name, content] of files) {
+    if (!name.endsWith('.svg') || typeof content !== 'string') continue;
+    const head = /<svg[^>]*>/.exec(content)?.[0] ?? '';
+    for (const side of ['width', 'height']) {
+      const v = Number(new RegExp(`\\s${side}="([^"]+)"`).exec(head)?.[1]);
+      if (!(v > 0 && v <= MAX_CHART_SIDE)) throw new Error(`${name}: ${side} ${v} px`);
+    }
+  }
+}
+
 /** `check` and `assess` (every method and study, JSON, summary, report text) on one scenario. */
 export async function runEverything(text: string, sizes: RunSizes = SMALL_RUN): Promise<Outcome> {
   try {
@@ -236,7 +251,7 @@ export async function runEverything(text: string, sizes: RunSizes = SMALL_RUN): 
     formatAssessment(a, 'si');
     const input = assessmentReportInput(a, META);
     if (sizes.report === 'none') renderMarkdown(buildReportDocument(input, 'si', []));
-    else await renderReportFiles(input, json, { png: sizes.report === 'png', pngScale: 1 });
+    else checkChartSizes(await renderReportFiles(input, json, { png: sizes.report === 'png', pngScale: 1 }));
     return { kind: 'result' };
   } catch (e) {
     if (e instanceof InputError) return { kind: 'input-error', message: e.describe() };

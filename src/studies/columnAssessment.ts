@@ -112,6 +112,16 @@ function specOf(s: Scenario, path: string): DistSpec {
   return sc.spec;
 }
 
+/**
+ * β of an edited scenario for a sensitivity study: NaN when that FORM did not converge to a
+ * finite β (its last iterate is no reliability index; the tables show '—' and the elasticities fall
+ * back to the other side of their difference). An infinite β (no design point) is kept.
+ */
+function studyBeta(s: Scenario): number {
+  const r = scenarioForm(s);
+  return r.converged || !Number.isFinite(r.beta) ? r.beta : NaN;
+}
+
 function sensitivityStudy(s: Scenario, model: ColumnModel, baseline: number, seed: number, sobolN: number): SensitivityStudy {
   const { names, dists } = model;
   const notes: string[] = [];
@@ -119,7 +129,7 @@ function sensitivityStudy(s: Scenario, model: ColumnModel, baseline: number, see
   const capacity = { baseline: model.capacity(model.mean), rows: tornado(names, dists, model.capacity) };
   const conditional = {
     baseline,
-    rows: conditionalBeta(names, dists, (i, value) => scenarioForm(withScalar(s, names[i], { kind: 'fixed', value })).beta),
+    rows: conditionalBeta(names, dists, (i, value) => studyBeta(withScalar(s, names[i], { kind: 'fixed', value }))),
   };
   const moments = momentsOf(model);
   const elasticities = betaElasticities(names, moments, (overrides) => {
@@ -131,7 +141,7 @@ function sensitivityStudy(s: Scenario, model: ColumnModel, baseline: number, see
       if (!supportInsideDomain(spec, fieldDomain(path))) return NaN;
       t = withScalar(t, path, { kind: 'random', spec });
     }
-    return scenarioForm(t).beta;
+    return studyBeta(t);
   });
   if (model.correlation) {
     notes.push('Sobol indices treat the variables as independent (the stated correlation is left out of that study only).');

@@ -145,7 +145,7 @@ function checkRandomDomain(spec: DistSpec, rule: FieldRule, path: readonly PathS
       break;
     case 'fixity':
       if (!(lo >= 0 && hi <= 1)) {
-        fail(ctx, path, `a random fixity factor must stay inside [0, 1]: use uniform, truncnormal or beta with min >= 0 and max <= 1 (a ${spec.dist} ${Number.isFinite(lo) || Number.isFinite(hi) ? 'with these bounds ' : ''}can leave that range)`);
+        fail(ctx, path, `a random fixity factor must stay inside [0, 1]: use uniform, truncnormal or beta with min >= 0 and max <= 1 (a ${spec.dist} ${spec.dist === 'uniform' || spec.dist === 'truncnormal' || spec.dist === 'beta' ? 'with these bounds ' : ''}can leave that range)`);
       }
       break;
     case 'alignment':

@@ -13,6 +13,7 @@ import { stringify } from 'yaml';
 import { uniformStream } from '../src/probability/rng.js';
 import { loadScenario } from '../src/scenario/loadScenario.js';
 import { InputError } from '../src/scenario/inputError.js';
+import { DistributionError } from '../src/probability/distribution.js';
 import { buildColumnModel } from '../src/limitState/columnModel.js';
 import { checkJson, deterministicCheck } from '../src/limitState/deterministicCheck.js';
 import { assessColumn } from '../src/studies/columnAssessment.js';
@@ -255,6 +256,8 @@ export async function runEverything(text: string, sizes: RunSizes = SMALL_RUN): 
     return { kind: 'result' };
   } catch (e) {
     if (e instanceof InputError) return { kind: 'input-error', message: e.describe() };
+    // exit 2 as well (cli/failure.ts): e.g. a correlation the marginals cannot reach, found by Nataf
+    if (e instanceof DistributionError) return { kind: 'input-error', message: e.message };
     const message = e instanceof Error ? `${e.name}: ${e.message}\n${e.stack ?? ''}` : String(e);
     return { kind: 'internal-error', message, text };
   }

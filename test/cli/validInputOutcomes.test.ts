@@ -107,3 +107,17 @@ strength: first-yield
     expect(r.status, r.stderr).toBe(0);
   });
 });
+
+describe('a correlation the marginals cannot carry', () => {
+  it('ends in exit 2 naming both variables, not an internal error', () => {
+    // source: Liu & Der Kiureghian 1986 (from memory): lognormals of very different CoV reach only a narrow ρ range
+    const text = scenario('braced', '{dist: lognormal, mean: 200 GPa, cov: 0.03}', 'fixed', 'pinned').replace(
+      'fy: {dist: lognormal, mean: 300 MPa, cov: 0.07}',
+      'fy: {dist: lognormal, mean: 300 MPa, cov: 1.0e9}',
+    ) + 'correlation:\n  - [column.material.E, column.material.fy, 0.2]\n';
+    const r = assess(text);
+    expect(r.status).toBe(2);
+    expect(r.stderr).toContain('column.material.E');
+    expect(r.stderr).toContain('column.material.fy');
+  });
+});

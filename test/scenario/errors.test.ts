@@ -294,23 +294,3 @@ describe('physical supports: a value that cannot be negative gets no distributio
     expect(() => loadChanged((o) => { sub(o, 'column', 'ends')['top'] = { fixity }; })).not.toThrow();
   });
 });
-
-describe('correlations the marginals cannot carry are input errors at load', () => {
-  test('a matrix that is not positive definite names correlation', () => {
-    // common practice: ρ12 = ρ13 = 0.9 with ρ23 = −0.9 has a negative determinant
-    const e = errorAfter((o) => {
-      o['correlation'] = [['column.material.E', 'column.material.fy', 0.9], ['column.material.E', 'loads.dead', 0.9], ['column.material.fy', 'loads.dead', -0.9]];
-    });
-    expect(e.field).toBe('correlation');
-    expect(e.message).toMatch(/positive definite/);
-  });
-  test('a ρ out of reach of two very skewed lognormals names correlation', () => {
-    // source: Liu & Der Kiureghian 1986 (from memory): lognormals with very different CoVs reach only a narrow ρ range
-    const e = errorAfter((o) => {
-      sub(o, 'column', 'material')['fy'] = { dist: 'lognormal', mean: '310 MPa', cov: 1e9 };
-      o['correlation'] = [['column.material.E', 'column.material.fy', 0.2]];
-    });
-    expect(e.field).toBe('correlation');
-    expect(e.message).toMatch(/cannot be reached/);
-  });
-});

@@ -1,6 +1,8 @@
 /**
  * `npm run bench`: the speed of the mechanics and of the reliability methods, each against a
  * floor measured in the same run (ratios, because the machines are shared and noisy).
+ * `npm run bench -- valid [COUNT] [SEED]` instead runs generated valid scenarios through every
+ * method and study and counts results, input errors and internal errors (bench/validBench.ts).
  */
 import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
@@ -8,6 +10,7 @@ import { dirname, join } from 'node:path';
 import { runMechanicsBench } from './mechanicsBench.js';
 import { runReliabilityBench } from './reliabilityBench.js';
 import { runSweepBench } from './sweepBench.js';
+import { runValidBench } from './validBench.js';
 import { columnRecipe } from '../src/limitState/columnRecipe.js';
 import { loadScenario } from '../src/scenario/loadScenario.js';
 
@@ -24,6 +27,13 @@ async function main(): Promise<void> {
     // `node dist/bench/run.js sweep [CASES]`: memory of a large sweep only (default 1e6 cases)
     console.log('\n## sweep memory (synthetic cases, grid)');
     for (const line of await runSweepBench(Number(process.argv[3] ?? 1_000_000))) console.log(line);
+    return;
+  } else if (process.argv[2] === 'valid') {
+    // npm run bench -- valid [COUNT] [SEED]: generated valid scenarios through everything
+    const count = Number(process.argv[3] ?? 400);
+    const seed = Number(process.argv[4] ?? 1);
+    console.log(`\n## valid scenarios (bench/validScenarios.ts)`);
+    for (const line of await runValidBench(count, seed)) console.log(line);
     return;
   }
   console.log('\n## mechanics (critical-load solves per second)');

@@ -118,7 +118,7 @@ export function formatAssessment(a: Assessment, system: UnitSystem): string {
     if (a.methods.includes('form')) rows.push(['FORM, series system', formatBeta(fs.beta), formatProbability(fs.pf), fs.method, String(combos.combinations.reduce((n, c) => n + c.form.calls, 0))]);
     if (combos.sormSystem) rows.push(['SORM, series system', formatBeta(combos.sormSystem.beta), formatProbability(combos.sormSystem.pf), '', String(combos.combinations.reduce((n, c) => n + (c.sorm?.calls ?? 0), 0))]);
   } else {
-    if (a.methods.includes('form')) rows.push(['FORM', formatBeta(f.beta), formatProbability(f.pf), f.converged ? 'converged' : 'NOT converged', String(f.calls)]);
+    if (a.methods.includes('form')) rows.push(['FORM', formatBeta(f.beta), formatProbability(f.pf), f.converged ? 'converged' : Number.isFinite(f.beta) ? 'NOT converged' : 'no design point', String(f.calls)]);
     if (a.methods.includes('form') && f.system.designPoints.length > 1) {
       rows.push([`FORM system (${f.system.designPoints.length} points)`, formatBeta(f.system.beta), formatProbability(f.system.pf), `bounds [${formatProbability(f.system.bounds.lower)}, ${formatProbability(f.system.bounds.upper)}]`, '']);
     }

@@ -33,6 +33,11 @@ function num(v: number | null, digits = 3): string {
   return v.toPrecision(digits);
 }
 
+/** K with three decimals; a near-mechanism's K ~ 1e150 in three significant digits instead. */
+function kText(K: number): string {
+  return Number.isFinite(K) && K < 1e6 ? K.toFixed(3) : num(K);
+}
+
 export function formatCheck(s: Scenario, c: CheckResult, system: UnitSystem): string {
   const q = (v: number, kind: Parameters<typeof formatQuantity>[1]) => formatQuantity(v, kind, system);
   const L = s.column.length;
@@ -54,7 +59,7 @@ export function formatCheck(s: Scenario, c: CheckResult, system: UnitSystem): st
   const m1 = c.modes[0];
   const rows: string[][] = [
     ['critical load Pcr', q(c.critical_load, 'force')],
-    ['effective length factor K', `${c.effective_length_factor.toFixed(3)}  (K L = ${q(c.effective_length_factor * L, 'length')})`],
+    ['effective length factor K', `${kText(c.effective_length_factor)}  (K L = ${q(c.effective_length_factor * L, 'length')})`],
   ];
   if (m1) {
     const infl = m1.inflection_points.length ? m1.inflection_points.map((x) => q(x, 'length')).join(', ') : 'none inside the column';
@@ -79,7 +84,7 @@ export function formatCheck(s: Scenario, c: CheckResult, system: UnitSystem): st
     lines.push('  higher modes:');
     lines.push(
       textTable(
-        c.modes.slice(1).map((m) => [`mode ${m.mode}`, q(m.critical_load, 'force'), `K = ${m.effective_length_factor.toFixed(3)}`]),
+        c.modes.slice(1).map((m) => [`mode ${m.mode}`, q(m.critical_load, 'force'), `K = ${kText(m.effective_length_factor)}`]),
         '    ',
       ),
     );

@@ -99,6 +99,16 @@ function correlationMatrix(s: Scenario, names: readonly string[]): number[][] | 
   return R;
 }
 
+/**
+ * Far out in u-space θ·capacity or the load can overflow (θ → 1e308): the margin is then simply
+ * enormous. Resistance, demand and margin are each held within ±G_LIMIT so that g stays finite and differences of it (the FORM gradient)
+ * do too; such points are hopelessly far from any design point, so the cap changes no answer.
+ */
+const G_LIMIT = 1e300;
+function finiteMargin(g: number): number {
+  return g > G_LIMIT ? G_LIMIT : g < -G_LIMIT ? -G_LIMIT : g;
+}
+
 /** `combination` (default: defaultCombination) sets each load's period; see loads/. */
 export function buildColumnModel(given: Scenario, combination: LoadCombination = defaultCombination(given)): ColumnModel {
   const resolved = resolveStrengthModel(given);
@@ -149,6 +159,9 @@ export function buildColumnModel(given: Scenario, combination: LoadCombination =
     const e = read(E, x);
     const i = read(I, x);
     const EI = e * i;
+    // A sample on the zero bound of a stiffness or strength (uniform or truncnormal with min 0, a
+    // far tail that underflows) carries no load: capacity 0 is the answer, not an error.
+    if (!(EI > 0) || !(read(A, x) * read(fy, x) > 0)) return 0;
     if (lateralAlwaysZero) {
       return fast(e, read(fy, x), read(A, x), i, read(S, x), L, read(bow, x), bottom(x, EI), top(x, EI));
     }
@@ -173,7 +186,12 @@ export function buildColumnModel(given: Scenario, combination: LoadCombination =
     capacity,
     demand,
     modelFactor,
-    g: (x) => modelFactor(x) * capacity(x) - demand(x),
+    g: (x) => {
+      const theta = modelFactor(x);
+      // θ underflowing to 0 against an overflowing capacity is no resistance, not 0·∞ = NaN
+      const resistance = theta === 0 ? 0 : theta * capacity(x);
+      return finiteMargin(finiteMargin(resistance) - finiteMargin(demand(x)));
+    },
     utilization: (x) => demand(x) / (modelFactor(x) * capacity(x)),
     state,
   };

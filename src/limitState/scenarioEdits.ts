@@ -4,6 +4,7 @@
  * connection (restraint study), a swept quantity.
  */
 import type { DistSpec } from '../probability/distribution.js';
+import { makeDistribution } from '../probability/makeDistribution.js';
 import type { End, Scalar, Scenario } from '../scenario/types.js';
 import { restraintRatio } from '../scenario/restraintRatio.js';
 
@@ -20,7 +21,8 @@ function setEndScalar(end: Mutable<End>, leaf: string, scalar: Scalar, s: Scenar
   }
   if (end.type === 'ratio' && leaf === end.from) {
     end.input = scalar;
-    const v = scalar.kind === 'fixed' ? scalar.value : (scalar.spec.mean ?? NaN);
+    // a uniform spec has no `mean` field: take the distribution's own mean
+    const v = scalar.kind === 'fixed' ? scalar.value : makeDistribution(scalar.spec).mean;
     end.R = restraintRatio(end.from, s.column.frame, v);
     return;
   }

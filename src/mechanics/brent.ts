@@ -8,7 +8,9 @@
 export type ParamFn = (x: number, p: Float64Array) => number;
 
 const EPS = 2.220446049250313e-16;
-const MAX_ITER = 200;
+// Enough for plain bisection from an O(1) bracket down to a root near 1e−300 and 53 bits beyond
+// (a near-mechanism: a sway column restrained by R ~ 1e−300 has φ ~ 1e−150); Brent's usual count is ~10.
+const MAX_ITER = 1100;
 
 export function brentRoot(
   f: ParamFn,

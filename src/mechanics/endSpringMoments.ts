@@ -58,10 +58,10 @@ function unstable(load: number, bow: number, Pcr: number): EndSpringMoments {
 
 /**
  * EI (N·m²), L (m), r as in criticalLoad (R = kL/EI; lateral T = kT L³/EI), bow e0 (m, either sign),
- * P (N, compression ≥ 0).
+ * P (N, compression > 0; a net tension P < 0 is allowed: the same modal solution holds and 1/(1 − P/Pcr) < 1).
  */
 export function endSpringMoments(EI: number, L: number, frame: Frame, r: EndRestraint, bow: number, P: number): EndSpringMoments {
-  if (!(P >= 0 && Number.isFinite(P))) throw new RangeError(`axial load must be finite and >= 0 (got ${P})`);
+  if (!Number.isFinite(P)) throw new RangeError(`axial load must be finite (got ${P})`);
   if (!Number.isFinite(bow)) throw new RangeError(`bow must be finite (got ${bow})`);
   const e0 = Math.abs(bow);
   const { Pcr, phi } = criticalLoad(EI, L, frame, r);
@@ -85,7 +85,7 @@ export function endSpringMoments(EI: number, L: number, frame: Frame, r: EndRest
     amplification: 1 / (1 - ratio),
     rotation: { bottom: thetaB, top: thetaT },
     springMoment: { bottom: mB, top: mT },
-    memberMax: (EI * a * m.maxCurvature) / (L * L),
+    memberMax: Math.abs((EI * a * m.maxCurvature) / (L * L)),
     memberMaxAt: m.maxCurvatureAt * L,
     drift: frame === 'sway' ? a * m.sample(1) : 0,
   };

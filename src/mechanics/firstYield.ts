@@ -11,7 +11,8 @@
 export function firstYieldCapacity(A: number, S: number, fy: number, Pcr: number, bow: number, c: number): number {
   if (!(Pcr > 0)) return 0;
   const sigmaE = Pcr / A;
-  const eta = (c * Math.abs(bow) * A) / S;
+  // a straight column has no bending, whatever S is (S = 0 would give 0/0)
+  const eta = bow === 0 ? 0 : (c * Math.abs(bow) * A) / S;
   const b = fy + (1 + eta) * sigmaE;
   const disc = b * b - 4 * fy * sigmaE;
   const sigma = (2 * fy * sigmaE) / (b + Math.sqrt(disc > 0 ? disc : 0));

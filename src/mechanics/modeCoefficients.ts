@@ -28,10 +28,17 @@ export function modeCoefficientsInto(out: Float64Array, frame: Frame, w: Float64
     const t = w[W_TAU];
     x3 = t * s; y3 = t * (c - 1); z3 = t - w[W_UPS] * p2;
   }
-  let n = Math.sqrt(x1 * x1 + y1 * y1 + z1 * z1);
+  // scale by the largest entry first: near a mechanism φ ~ 1e−150 and the squares would underflow
+  let n = Math.max(Math.abs(x1), Math.abs(y1), Math.abs(z1));
   x1 /= n; y1 /= n; z1 /= n;
+  n = Math.sqrt(x1 * x1 + y1 * y1 + z1 * z1);
+  x1 /= n; y1 /= n; z1 /= n;
+  n = Math.max(Math.abs(x2), Math.abs(y2), Math.abs(z2));
+  x2 /= n; y2 /= n; z2 /= n;
   n = Math.sqrt(x2 * x2 + y2 * y2 + z2 * z2);
   x2 /= n; y2 /= n; z2 /= n;
+  n = Math.max(Math.abs(x3), Math.abs(y3), Math.abs(z3));
+  x3 /= n; y3 /= n; z3 /= n;
   n = Math.sqrt(x3 * x3 + y3 * y3 + z3 * z3);
   x3 /= n; y3 /= n; z3 /= n;
   // the three pairwise cross products; keep the largest

@@ -3,7 +3,8 @@
  * From mean μ and sd σ: scale = σ√6/π, loc = μ − γ·scale, γ = Euler's constant.
  */
 import type { Distribution } from './distribution.js';
-import { normalCdf, normalQuantile, normalQuantileUpper } from './normal.js';
+import { logNormalCdf, normalCdf, normalQuantile, normalQuantileUpper } from './normal.js';
+import { clampFinite } from './clampFinite.js';
 
 const EULER_GAMMA = 0.57721566490153286061;
 
@@ -44,9 +45,19 @@ export class GumbelDistribution implements Distribution {
   private upperQuantile(q: number): number {
     return this.loc - this.scale * Math.log(-Math.log1p(-q));
   }
+  /**
+   * Finite for every finite u: −ln F = −ln Φ(u) is taken in log form in the lower tail, and in the
+   * upper tail −ln(1 − q) = q(1 + q/2 + …), so ln(−ln F) → ln q = ln Φ(−u) where q underflows.
+   */
   fromStandardNormal(u: number): number {
-    if (u <= 0) return this.loc - this.scale * Math.log(-Math.log(normalCdf(u)));
-    return this.upperQuantile(normalCdf(-u));
+    if (u <= 0) {
+      const minusLogF = -logNormalCdf(u);
+      const logOfIt = Number.isFinite(minusLogF) ? Math.log(minusLogF) : 2 * Math.log(-u) - Math.LN2;
+      return clampFinite(this.loc - this.scale * logOfIt);
+    }
+    const q = normalCdf(-u);
+    if (q > 1e-300) return clampFinite(this.upperQuantile(q));
+    return clampFinite(this.loc - this.scale * logNormalCdf(-u));
   }
   toStandardNormal(x: number): number {
     const z = (x - this.loc) / this.scale;

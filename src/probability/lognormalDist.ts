@@ -4,6 +4,7 @@
  */
 import type { Distribution } from './distribution.js';
 import { normalCdf, normalPdf, normalQuantile } from './normal.js';
+import { clampFinite } from './clampFinite.js';
 
 export class LognormalDistribution implements Distribution {
   readonly name = 'lognormal' as const;
@@ -39,7 +40,7 @@ export class LognormalDistribution implements Distribution {
     return Math.exp(this.lambda + this.zeta * normalQuantile(p));
   }
   fromStandardNormal(u: number): number {
-    return Math.exp(this.lambda + this.zeta * u);
+    return clampFinite(Math.exp(this.lambda + this.zeta * u));
   }
   toStandardNormal(x: number): number {
     if (!(x > 0)) return -Infinity;

@@ -216,3 +216,46 @@ export function normalQuantile(p: number): number {
 export function normalQuantileUpper(q: number): number {
   return 0 - normalQuantile(q); // 0 − x, not −x, so that q = 1/2 gives +0
 }
+
+const LN_SQRT_2PI = 0.91893853320467274178;
+/** Below this, ln Φ(x) comes from the asymptotic series (Φ(−30) ≈ 4.9e−198 is still a normal double). */
+const LOG_CDF_SERIES_BELOW = -30;
+
+/**
+ * ln Φ(x) for every finite x, also where Φ(x) underflows. For x < −30 the asymptotic expansion
+ * Φ(x) = φ(x)/(−x) · (1 − 1/x² + 3/x⁴ − 15/x⁶ + 105/x⁸ − …) (Abramowitz and Stegun 26.2.12)
+ * is used; its first omitted term is below 1e−13 there.
+ */
+export function logNormalCdf(x: number): number {
+  if (Number.isNaN(x)) return NaN;
+  if (x >= LOG_CDF_SERIES_BELOW) return x > 0 ? Math.log1p(-normalCdf(-x)) : Math.log(normalCdf(x));
+  if (x === -Infinity) return -Infinity;
+  const r = 1 / (x * x);
+  const series = 1 - r * (1 - r * (3 - r * (15 - r * 105)));
+  // −x²/2 overflows only for |x| > 1.3e154; −(x/√2)² keeps the sign right until then.
+  const h = x / Math.SQRT2;
+  return -(h * h) - LN_SQRT_2PI - Math.log(-x) + Math.log(series);
+}
+
+/**
+ * Φ⁻¹ of exp(logP): the x ≤ 0 with ln Φ(x) = logP, for any logP ≤ ln ½, also where exp(logP)
+ * underflows. Newton steps on ln Φ from the leading term x ≈ −√(−2 logP).
+ */
+export function normalQuantileFromLog(logP: number): number {
+  if (Number.isNaN(logP) || logP > 0) return NaN;
+  if (logP === -Infinity) return -Infinity;
+  if (logP > -600) return normalQuantile(Math.exp(logP));
+  let x = -Math.sqrt(-2 * logP);
+  // beyond |x| = 1e7 the leading term's relative error, about ln|x|/x², is below 2e−13
+  if (x < -1e7) return x;
+  for (let k = 0; k < 50; k++) {
+    // d ln Φ / dx = φ(x)/Φ(x) = exp(ln φ − ln Φ), with ln φ(x) = −x²/2 − ln√(2π)
+    const lp = logNormalCdf(x);
+    const slope = Math.exp(-0.5 * x * x - LN_SQRT_2PI - lp);
+    const step = (lp - logP) / slope;
+    if (!Number.isFinite(step)) break;
+    x -= step;
+    if (Math.abs(step) <= 1e-15 * Math.abs(x)) break;
+  }
+  return x;
+}

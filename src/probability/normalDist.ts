@@ -1,6 +1,7 @@
 /** Normal distribution N(mean, sd²). */
 import type { Distribution } from './distribution.js';
 import { normalCdf, normalPdf, normalQuantile } from './normal.js';
+import { clampFinite } from './clampFinite.js';
 
 export class NormalDistribution implements Distribution {
   readonly name = 'normal' as const;
@@ -24,7 +25,7 @@ export class NormalDistribution implements Distribution {
     return this.mean + this.sd * normalQuantile(p);
   }
   fromStandardNormal(u: number): number {
-    return this.mean + this.sd * u;
+    return clampFinite(this.mean + this.sd * u);
   }
   toStandardNormal(x: number): number {
     return (x - this.mean) / this.sd;

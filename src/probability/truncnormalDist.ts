@@ -7,7 +7,8 @@
  * the side of the parent's mean where both are small, so nothing cancels catastrophically.
  */
 import type { Distribution } from './distribution.js';
-import { normalCdf, normalPdf, normalQuantile, normalQuantileUpper } from './normal.js';
+import { clampFinite } from './clampFinite.js';
+import { logNormalCdf, normalCdf, normalPdf, normalQuantile, normalQuantileFromLog, normalQuantileUpper } from './normal.js';
 
 /** Φ(high) − Φ(low) for low ≤ high, from whichever tail keeps the digits. */
 export function normalMassBetween(low: number, high: number): number {
@@ -83,13 +84,22 @@ export class TruncatedNormalDistribution implements Distribution {
   }
   private toX(t: number): number {
     const x = this.mu + this.sigma * t;
-    return x < this.min ? this.min : x > this.max ? this.max : x;
+    return clampFinite(x < this.min ? this.min : x > this.max ? this.max : x);
   }
   quantile(p: number): number {
     return this.toX(p <= 0.5 ? this.lowerT(p) : this.upperT(1 - p));
   }
+  /**
+   * Finite for every finite u. On an unbounded side far out, Φ(t) = Φ(u)·mass is solved in log
+   * form (Φ(u) underflows there); on a bounded side toX clamps to the bound.
+   */
   fromStandardNormal(u: number): number {
-    return this.toX(u <= 0 ? this.lowerT(normalCdf(u)) : this.upperT(normalCdf(-u)));
+    const p = normalCdf(u <= 0 ? u : -u);
+    if (p * this.mass < 1e-300) {
+      if (u <= 0 && this.min === -Infinity) return this.toX(normalQuantileFromLog(logNormalCdf(u) + Math.log(this.mass)));
+      if (u > 0 && this.max === Infinity) return this.toX(-normalQuantileFromLog(logNormalCdf(-u) + Math.log(this.mass)));
+    }
+    return this.toX(u <= 0 ? this.lowerT(p) : this.upperT(p));
   }
   toStandardNormal(x: number): number {
     const p = this.cdf(x);

@@ -5,7 +5,8 @@
  */
 import type { Distribution } from './distribution.js';
 import { logGamma } from './logGamma.js';
-import { normalCdf, normalQuantile, normalQuantileUpper } from './normal.js';
+import { logNormalCdf, normalCdf, normalQuantile, normalQuantileUpper } from './normal.js';
+import { clampFinite } from './clampFinite.js';
 import { findRootBracketed } from './rootBracketed.js';
 
 /** Shape range searched; its CoV range is [weibullCovRange.min, weibullCovRange.max]. */
@@ -74,7 +75,8 @@ export class WeibullDistribution implements Distribution {
     return this.fromHazard(p <= 0.5 ? -Math.log1p(-p) : -Math.log(1 - p));
   }
   fromStandardNormal(u: number): number {
-    return this.fromHazard(u <= 0 ? -Math.log1p(-normalCdf(u)) : -Math.log(normalCdf(-u)));
+    // upper tail: hazard −ln Φ(−u) in log form, finite where Φ(−u) underflows
+    return clampFinite(this.fromHazard(u <= 0 ? -Math.log1p(-normalCdf(u)) : -logNormalCdf(-u)));
   }
   toStandardNormal(x: number): number {
     if (x <= 0) return -Infinity;

@@ -55,6 +55,19 @@ const PROBE_OFFSET = 1;
 /** At most this many doubtful directions are searched (kinks before flat components). */
 const MAX_PROBE_DIRECTIONS = 8;
 
+/** Beyond this distance Φ(−β) underflows to 0 in doubles (Φ(−37.5) ≈ 4.6e−308). */
+const NO_DESIGN_POINT_BEYOND = 37.5;
+
+/**
+ * True when a search that did not converge went out past NO_DESIGN_POINT_BEYOND without g ever
+ * changing sign: no design point within reach (failure impossible over the support, or certain).
+ */
+function noDesignPoint(r: HlrfOutcome, originFails: boolean): boolean {
+  if (r.converged || !(norm(r.u) >= NO_DESIGN_POINT_BEYOND)) return false;
+  return r.history.every((h) => (originFails ? h.g <= 0 : h.g > 0));
+}
+
+
 export function form(problem: ReliabilityProblem, opts: FormOptions = {}): FormResult {
   const n = problem.transform.n;
   if (problem.names.length !== n) throw new Error(`problem has ${problem.names.length} names for ${n} variables`);
@@ -144,17 +157,27 @@ export function form(problem: ReliabilityProblem, opts: FormOptions = {}): FormR
     }
     others.sort((p, q) => p.beta - q.beta);
   }
+  // No design point: β = ±∞ is the result (pf = 0, or 1 when every point fails), not an error.
+  const unreachable = noDesignPoint(best, originFails);
+  if (unreachable) {
+    warnings.push(originFails
+      ? `no design point: g stayed <= 0 along the whole search, out to |u| = ${norm(best.u).toPrecision(3)}; failure is certain (pf = 1) to double precision`
+      : `no design point: g stayed > 0 along the whole search, out to |u| = ${norm(best.u).toPrecision(3)}; failure is impossible or its probability is below ${normalSf(NO_DESIGN_POINT_BEYOND).toPrecision(2)} (β = +∞)`);
+  }
   const multipleDesignPoints = others.length > 0;
   const doubtfulNames = [...doubtful].sort((i, j) => i - j).map((i) => problem.names[i]);
   if (doubtfulNames.length > 0) {
     warnings.push(`the gradient of g vanishes or changes sign along ${doubtfulNames.join(', ')}: searched again from starts offset along ${doubtfulNames.length === 1 ? 'it' : 'them'}`);
   }
-  if (!best.converged) warnings.push(`FORM did not converge: ${best.reason}`);
+  if (!best.converged && !unreachable) warnings.push(`FORM did not converge: ${best.reason}`);
   if (originFails) warnings.push(`g at the origin of u-space is ${g0} <= 0: the median point already fails, β is negative`);
 
-  const beta = (originFails ? -1 : 1) * betaBest;
+  const beta = unreachable ? (originFails ? -Infinity : Infinity) : (originFails ? -1 : 1) * betaBest;
   const gradNorm = norm(best.gradient);
-  const alpha = beta !== 0 ? Array.from(best.u, (v) => v / beta) : Array.from(best.gradient, (v) => -v / gradNorm);
+  const uNorm = norm(best.u);
+  const alpha = unreachable
+    ? Array.from(best.u, (v) => (originFails ? -v : v) / uNorm) // the direction the search went
+    : beta !== 0 ? Array.from(best.u, (v) => v / beta) : Array.from(best.gradient, (v) => -v / gradNorm);
   problem.transform.toPhysical(best.u, x);
   const governing: DesignPointCandidate = { beta, designPointU: Array.from(best.u), designPointX: Array.from(x), alpha };
   const system = formSystem(governing, others, opts.seed);

@@ -5,6 +5,8 @@
  * Unlike α (which depends on the Cholesky order of correlated variables), γ does not depend on
  * the order of the variables; for independent variables γ = α.
  * J_{x,u} by central differences of the transform (no limit-state calls).
+ * Where a bounded variable sits on its bound at the design point its row of J_{x,u} is zero and
+ * J_{u,x} does not exist; γ is then not defined and α is returned (γ = α when independent).
  */
 import type { IsoTransform } from '../probability/nataf.js';
 import { invertMatrix } from './matrixInverse.js';
@@ -27,6 +29,7 @@ export function gammaImportance(transform: IsoTransform, uStar: ArrayLike<number
     for (let i = 0; i < n; i++) jxu[i][j] = (xp[i] - xm[i]) / (2 * h);
   }
   const jux = invertMatrix(jxu);
+  if (jux === null) return Array.from(alpha);
   const gamma = new Array<number>(n).fill(0);
   for (let j = 0; j < n; j++) {
     let sd = 0;

@@ -1,14 +1,15 @@
 /**
  * Inverse of a small dense square matrix by Gauss–Jordan elimination with partial pivoting.
- * Throws on a singular matrix (an internal invariant: Jacobians of a valid transform are regular).
+ * Null for a singular matrix (e.g. the Jacobian of a transform where a bounded variable sits on
+ * its bound, so that its row is zero).
  */
-export function invertMatrix(a: number[][]): number[][] {
+export function invertMatrix(a: number[][]): number[][] | null {
   const n = a.length;
   const m = a.map((row, i) => [...row, ...Array.from({ length: n }, (_, j) => (i === j ? 1 : 0))]);
   for (let col = 0; col < n; col++) {
     let pivot = col;
     for (let r = col + 1; r < n; r++) if (Math.abs(m[r][col]) > Math.abs(m[pivot][col])) pivot = r;
-    if (!(Math.abs(m[pivot][col]) > 0)) throw new Error('invertMatrix: singular matrix');
+    if (!(Math.abs(m[pivot][col]) > 0)) return null;
     [m[col], m[pivot]] = [m[pivot], m[col]];
     const p = m[col][col];
     for (let j = 0; j < 2 * n; j++) m[col][j] /= p;

@@ -240,7 +240,7 @@ function modelSection(input: ReportInput, system: UnitSystem, charts: ChartSpec[
 function methodsSection(input: ReportInput, charts: ChartSpec[]): Section {
   const r = input.reliability;
   const rows: string[][] = [];
-  if (r.form) rows.push(['FORM', formatBeta(r.form.beta), formatProbability(r.form.pf), 'none (approximation)', formatNumber(r.form.calls, 6), r.form.converged ? `converged in ${r.form.iterations} iterations` : `NOT converged after ${r.form.iterations} iterations`]);
+  if (r.form) rows.push(['FORM', formatBeta(r.form.beta), formatProbability(r.form.pf), 'none (approximation)', formatNumber(r.form.calls, 6), r.form.converged ? `converged in ${r.form.iterations} iterations` : Number.isFinite(r.form.beta) ? `NOT converged after ${r.form.iterations} iterations` : `no design point (searched ${r.form.iterations} iterations)`]);
   if (r.sorm) rows.push([r.sorm.formula ? `SORM (${r.sorm.formula})` : METHOD_LABELS.sorm, formatBeta(r.sorm.beta), formatProbability(r.sorm.pf), 'none (approximation)', formatNumber(r.sorm.calls, 6), 'curvature correction at the FORM design point']);
   if (r.is) rows.push([METHOD_LABELS.is, formatBeta(r.is.beta), formatProbability(r.is.pf), `CoV ${(100 * r.is.cov).toFixed(1)} %`, formatNumber(r.is.calls, 6), 'centred on the design point']);
   if (r.mc) rows.push([METHOD_LABELS.mc, formatBeta(r.mc.beta), formatProbability(r.mc.pf), `CoV ${(100 * r.mc.cov).toFixed(1)} %; 95 % CI ${formatProbability(r.mc.ci95[0])} to ${formatProbability(r.mc.ci95[1])}`, formatNumber(r.mc.samples, 6), `${formatNumber(r.mc.failures, 6)} failures`]);

@@ -133,7 +133,7 @@ export function buildScenario(shape: ScenarioShape, lines: ReadonlyMap<string, n
       fail(ctx, ['loads', name], `'${name}' is not a usable load name: use letters, digits, _ and - (starting with a letter or _, at most 64 characters)`);
     }
     const time = readLoadTime(shape.loads[name]!, ['loads', name], ctx);
-    const value = readScalar(time.value, { kind: 'force', domain: 'nonnegative' }, ['loads', name], ctx);
+    const value = readScalar(time.value, { kind: 'force', domain: 'load' }, ['loads', name], ctx);
     return { name, path: `loads.${name}`, value, ...(time.kind !== undefined ? { kind: time.kind } : {}), basis: time.basis };
   });
 

@@ -13,8 +13,13 @@ import { ExpressionError } from './quantityExpression.js';
 import { formatPath, lineOf, type PathSegment } from './rawTree.js';
 import type { Scalar } from './types.js';
 
-/** Allowed values: `positive` > 0; `nonnegative` >= 0; `fixity` in [0, 1); `alignment` >= 0; `any`. */
-export type Domain = 'positive' | 'nonnegative' | 'fixity' | 'alignment' | 'any';
+/**
+ * Allowed values: `positive` > 0; `nonnegative` >= 0; `fixity` in [0, 1); `alignment` >= 0;
+ * `load` >= 0 when fixed, any support when random (a sampled negative load is a tension, which the
+ * limit state takes as it comes); `any`.
+ * For `positive`, `nonnegative` and `alignment` a random value's whole support must stay >= 0.
+ */
+export type Domain = 'positive' | 'nonnegative' | 'fixity' | 'alignment' | 'load' | 'any';
 
 export interface FieldRule {
   /** A quantity kind, or 'number' for a pure number. */
@@ -63,6 +68,7 @@ function checkFixed(value: number, raw: string | number, rule: FieldRule, path: 
       break;
     case 'nonnegative':
     case 'alignment':
+    case 'load':
       if (!(value >= 0)) fail(ctx, path, `must not be negative, got ${shown}`);
       break;
     case 'fixity':
@@ -73,25 +79,83 @@ function checkFixed(value: number, raw: string | number, rule: FieldRule, path: 
   }
 }
 
+/** Lower end of a distribution's support: -Infinity for normal, gumbel and a truncnormal without min. */
+function supportMin(spec: DistSpec): number {
+  switch (spec.dist) {
+    case 'normal':
+    case 'gumbel':
+      return -Infinity;
+    case 'lognormal':
+    case 'weibull':
+      return 0;
+    case 'uniform':
+    case 'beta':
+    case 'truncnormal':
+      return spec.min ?? -Infinity;
+  }
+}
+
+/** Upper end of a distribution's support. */
+function supportMax(spec: DistSpec): number {
+  return spec.dist === 'uniform' || spec.dist === 'beta' || spec.dist === 'truncnormal' ? (spec.max ?? Infinity) : Infinity;
+}
+
+/**
+ * True when every value a random variable can take lies in `domain` (the rule checkRandomDomain
+ * enforces, without its messages). Parameters the distribution itself refuses give false.
+ */
+export function supportInsideDomain(spec: DistSpec, domain: Domain): boolean {
+  try {
+    makeDistribution(spec);
+  } catch (e) {
+    if (e instanceof DistributionError) return false;
+    throw e;
+  }
+  const lo = supportMin(spec);
+  const hi = supportMax(spec);
+  switch (domain) {
+    case 'positive':
+    case 'nonnegative':
+    case 'alignment':
+      return lo >= 0 && (spec.mean === undefined || spec.mean > 0);
+    case 'fixity':
+      return lo >= 0 && hi <= 1;
+    case 'load':
+    case 'any':
+      return true;
+  }
+}
+
+const NONNEGATIVE_ADVICE = 'use lognormal (or weibull), or truncnormal with min >= 0';
+
 /** The support of a random variable must stay inside the field's domain. */
 function checkRandomDomain(spec: DistSpec, rule: FieldRule, path: readonly PathSegment[], ctx: ReadContext): void {
-  const bounded = spec.dist === 'uniform' || spec.dist === 'truncnormal' || spec.dist === 'beta';
+  const lo = supportMin(spec);
+  const hi = supportMax(spec);
   switch (rule.domain) {
     case 'positive':
     case 'nonnegative':
       if (spec.mean !== undefined && !(spec.mean > 0)) fail(ctx, [...path, 'mean'], `must be greater than zero, got ${spec.mean}`);
-      if (bounded && spec.min !== undefined && !(spec.min >= 0)) fail(ctx, [...path, 'min'], `must not be negative (this value cannot be), got ${spec.min}`);
       if (spec.dist === 'uniform' && !(spec.max! > 0)) fail(ctx, [...path, 'max'], `must be greater than zero, got ${spec.max}`);
+      if (!(lo >= 0)) {
+        const where = spec.min !== undefined ? [...path, 'min'] : path;
+        const why = spec.min !== undefined ? `must not be negative (this value cannot be), got ${spec.min}` : `a ${spec.dist} variable can become negative, which this value cannot`;
+        fail(ctx, where, `${why}: ${NONNEGATIVE_ADVICE}`);
+      }
       break;
     case 'fixity':
-      if (!bounded || spec.min === undefined || spec.max === undefined || spec.min < 0 || spec.max > 1) {
-        fail(ctx, path, `a random fixity factor must stay inside [0, 1]: use uniform, truncnormal or beta with min >= 0 and max <= 1 (a ${spec.dist} ${bounded ? 'with these bounds ' : ''}can leave that range)`);
+      if (!(lo >= 0 && hi <= 1)) {
+        fail(ctx, path, `a random fixity factor must stay inside [0, 1]: use uniform, truncnormal or beta with min >= 0 and max <= 1 (a ${spec.dist} ${spec.dist === 'uniform' || spec.dist === 'truncnormal' || spec.dist === 'beta' ? 'with these bounds ' : ''}can leave that range)`);
       }
       break;
     case 'alignment':
-      if (spec.dist === 'normal' || spec.dist === 'gumbel' || (bounded && !(spec.min !== undefined && spec.min >= 0))) {
+      if (!(lo >= 0)) {
         fail(ctx, path, `a random G factor must not become negative: use lognormal or weibull, or uniform, truncnormal or beta with min >= 0`);
       }
+      break;
+    case 'load':
+      if (spec.mean !== undefined && !(spec.mean > 0)) fail(ctx, [...path, 'mean'], `must be greater than zero, got ${spec.mean}`);
+      if (spec.dist === 'uniform' && !(spec.max! > 0)) fail(ctx, [...path, 'max'], `must be greater than zero, got ${spec.max}`);
       break;
     case 'any':
       break;

@@ -32,6 +32,8 @@ export function starterScenario(frame: Frame): string {
 #   {dist: uniform, min: Q, max: Q}
 #   {dist: truncnormal, mean: Q, sd: Q (of the parent normal), min: Q, max: Q}
 #   {dist: beta, min: Q, max: Q, mean: Q, sd: Q}
+# A value that cannot be negative (stiffness, E, fy, section, model_factor) takes lognormal,
+# weibull, or a truncnormal/uniform/beta with min >= 0; a fixity factor stays in [0, 1].
 # The numbers below are invented for the demo: replace every one with your own.
 
 stanchion: 1                         # format version (required)

@@ -52,6 +52,22 @@ function elasticity(variable: string, dMean: number, dSd: number, m: Moments, be
   };
 }
 
+/**
+ * dβ/dθ from β at θ + h, θ and θ − h: central when both sides exist, one-sided when only one does
+ * (β is NaN on a side whose parameters leave the variable's support, e.g. a uniform fixity on
+ * [0, 1] shifted past 1), NaN when neither does or β is not finite (no design point).
+ */
+function difference(up: number, centre: number, down: number, h: number): number {
+  if (!Number.isFinite(centre)) return NaN;
+  const hasUp = Number.isFinite(up);
+  const hasDown = Number.isFinite(down);
+  if (hasUp && hasDown) return (up - down) / (2 * h);
+  if (hasUp) return (up - centre) / h;
+  if (hasDown) return (centre - down) / h;
+  return NaN;
+}
+
+/** `betaOf` may return NaN for parameters it cannot take (see `difference`). */
 export function betaElasticities(
   names: readonly string[],
   moments: readonly Moments[],
@@ -67,10 +83,10 @@ export function betaElasticities(
     const m = moments[i];
     if (!(m.sd > 0)) throw new Error(`${name}: sd must be positive for a sensitivity, got ${m.sd}`);
     const h = relStep * m.sd;
-    const dMean = (betaOf({ [name]: { mean: m.mean + h } }) - betaOf({ [name]: { mean: m.mean - h } })) / (2 * h);
+    const dMean = difference(betaOf({ [name]: { mean: m.mean + h } }), beta, betaOf({ [name]: { mean: m.mean - h } }), h);
     // keep the lower sd positive whatever relStep is
     const hs = Math.min(h, 0.5 * m.sd);
-    const dSd = (betaOf({ [name]: { sd: m.sd + hs } }) - betaOf({ [name]: { sd: m.sd - hs } })) / (2 * hs);
+    const dSd = difference(betaOf({ [name]: { sd: m.sd + hs } }), beta, betaOf({ [name]: { sd: m.sd - hs } }), hs);
     return elasticity(name, dMean, dSd, m, beta);
   });
   return { beta, entries, calls: 1 + 4 * names.length };

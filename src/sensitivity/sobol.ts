@@ -65,7 +65,12 @@ export function sobolIndices(
   const first = new Float64Array(d);
   const total = new Float64Array(d);
   const variance = sobolEstimates(outputs, n, d, all, first, total);
-  if (!(variance > 0)) throw new Error('sobol: the model output does not vary; indices are undefined');
+  if (!(variance > 0)) {
+    // A constant output (e.g. a column with no capacity over the whole sample) has no variance to
+    // apportion: no input moves it, so every index is 0, exactly.
+    const zeros = (): SobolIndex[] => names.map((name) => ({ name, value: 0, lo: 0, hi: 0 }));
+    return { first: zeros(), total: zeros(), calls: n * (d + 2), n, variance: 0, seed: opts.seed };
+  }
 
   // bootstrap: column-major store so each index's resamples sort as one block
   const bootFirst = new Float64Array(resamples * d);

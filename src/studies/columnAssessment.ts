@@ -21,6 +21,8 @@ import { betaElasticities, type ElasticityResult, type Moments } from '../sensit
 import { sobolIndices, type SobolResult } from '../sensitivity/sobol.js';
 import { tornado, type TornadoEntry } from '../sensitivity/tornado.js';
 import { InputError } from '../scenario/inputError.js';
+import { fieldDomain } from '../scenario/fieldDomain.js';
+import { supportInsideDomain } from '../scenario/readScalar.js';
 import type { Method, Scenario } from '../scenario/types.js';
 import { scalarAt } from '../scenario/variables.js';
 import type { DistSpec } from '../probability/distribution.js';
@@ -58,6 +60,8 @@ export interface AssessOptions {
   units?: UnitSystem;
   /** a restraint study already computed for this scenario and `end` (not computed again) */
   restraint?: ColumnRestraintResult;
+  /** base samples N of the Sobol estimators (default SOBOL_N) */
+  sobolSamples?: number;
   /** skip sensitivity and restraint studies (sweeps, quick looks) */
   reliabilityOnly?: boolean;
 }
@@ -126,14 +130,24 @@ function specOf(s: Scenario, path: string): DistSpec {
   return sc.spec;
 }
 
-function sensitivityStudy(s: Scenario, model: ColumnModel, baseline: number, seed: number): SensitivityStudy {
+/**
+ * β of an edited scenario for a sensitivity study: NaN when that FORM did not converge to a
+ * finite β (its last iterate is no reliability index; the tables show '—' and the elasticities fall
+ * back to the other side of their difference). An infinite β (no design point) is kept.
+ */
+function studyBeta(s: Scenario): number {
+  const r = scenarioForm(s);
+  return r.converged || !Number.isFinite(r.beta) ? r.beta : NaN;
+}
+
+function sensitivityStudy(s: Scenario, model: ColumnModel, baseline: number, seed: number, sobolN: number): SensitivityStudy {
   const { names, dists } = model;
   const notes: string[] = [];
   const utilization = { baseline: model.utilization(model.mean), rows: tornado(names, dists, model.utilization) };
   const capacity = { baseline: model.capacity(model.mean), rows: tornado(names, dists, model.capacity) };
   const conditional = {
     baseline,
-    rows: conditionalBeta(names, dists, (i, value) => scenarioForm(withScalar(s, names[i], { kind: 'fixed', value })).beta),
+    rows: conditionalBeta(names, dists, (i, value) => studyBeta(withScalar(s, names[i], { kind: 'fixed', value }))),
   };
   const moments = momentsOf(model);
   const elasticities = betaElasticities(names, moments, (overrides) => {
@@ -141,15 +155,17 @@ function sensitivityStudy(s: Scenario, model: ColumnModel, baseline: number, see
     for (const [path, o] of Object.entries(overrides)) {
       const i = names.indexOf(path);
       const spec = withMoments(specOf(s, path), o.mean ?? moments[i].mean, o.sd ?? moments[i].sd);
+      // e.g. a uniform fixity on [0, 1] shifted past 1: that side of the difference does not exist
+      if (!supportInsideDomain(spec, fieldDomain(path))) return NaN;
       t = withScalar(t, path, { kind: 'random', spec });
     }
-    return scenarioForm(t).beta;
+    return studyBeta(t);
   });
   if (model.correlation) {
     notes.push('Sobol indices treat the variables as independent (the stated correlation is left out of that study only).');
   }
-  const sobolCapacity = sobolIndices(names, dists, model.capacity, { seed, n: SOBOL_N });
-  const sobolG = sobolIndices(names, dists, model.g, { seed: seed + 1, n: SOBOL_N });
+  const sobolCapacity = sobolIndices(names, dists, model.capacity, { seed, n: sobolN });
+  const sobolG = sobolIndices(names, dists, model.g, { seed: seed + 1, n: sobolN });
   return { utilization, capacity, conditionalBeta: conditional, elasticities, sobolCapacity, sobolG, notes };
 }
 
@@ -331,7 +347,7 @@ export async function assessColumn(given: Scenario, opts: AssessOptions = {}): P
   let restraint: ColumnRestraintResult | undefined;
   if (!opts.reliabilityOnly && !interrupted) {
     const baseline = combos ? combos.combinations.find((c) => c.leading === model.combination.leading)!.form.beta : formResult.beta;
-    sensitivity = sensitivityStudy(s, model, baseline, seed);
+    sensitivity = sensitivityStudy(s, model, baseline, seed, opts.sobolSamples ?? SOBOL_N);
     if (combos) sensitivity.notes.push(`The sensitivity and restraint studies use the combination with ${model.combination.leading} leading (the largest mean demand), not the series system.`);
     if (studiedEnds(s, opts.end).length > 0) {
       restraint = opts.restraint ?? (await columnRestraint(s, { end: opts.end, units: opts.units, governing: governingAssessor(seed) }));

@@ -152,14 +152,16 @@ function meanValue(v: Scalar): number {
 
 function baseScalar(s: Scenario, end: EndName, notes: string[]): Scalar {
   const e = s.column.ends[end];
-  if (e.type === 'rotation') return e.k;
+  if (e.type === 'rotation' && meanValue(e.k) > 0) return e.k;
   const model = buildColumnModel(s);
   const st = model.state(model.mean);
   const EI = st.E * st.I;
-  const R = e.type === 'ratio' ? e.R : 1;
+  // a factor times zero stays zero: an end with no stiffness (or an infinite one) is scaled from EI/L
+  const R = e.type === 'ratio' && e.R > 0 && Number.isFinite(e.R) ? e.R : 1;
   const k = (R * EI) / st.L;
+  const given = e.type === 'ratio' ? `a ${e.from === 'fixity' ? 'fixity factor' : 'alignment-chart G'}` : e.type === 'rotation' ? 'a spring of zero stiffness' : e.type;
   notes.push(
-    `the ${end} end is given as ${e.type === 'ratio' ? `a ${e.from === 'fixity' ? 'fixity factor' : 'alignment-chart G'}` : e.type}; ` +
+    `the ${end} end is given as ${given}; ` +
       `the study treats it as a rotational spring of fixed stiffness ${R === 1 ? 'EI/L' : 'R·EI/L'} = ${(k / 1e3).toPrecision(3)} kN·m/rad times the factor`,
   );
   return { kind: 'fixed', value: k };

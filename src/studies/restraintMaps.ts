@@ -9,6 +9,7 @@
  * - the required mean stiffness (and its 5 % fractile) against the stiffness's coefficient of
  *   variation: "how precisely must this connection be known". One root solve per CoV.
  */
+import { supportInsideDomain } from '../scenario/readScalar.js';
 import { withMoments, withEndStiffness } from '../limitState/scenarioEdits.js';
 import { makeDistribution } from '../probability/makeDistribution.js';
 import type { Scalar, Scenario } from '../scenario/types.js';
@@ -211,6 +212,10 @@ export function marchingSquares(z: readonly (readonly number[])[], xs: readonly 
   return segs;
 }
 
+function nullByEnd(ends: readonly string[]): Record<string, number | null> {
+  return Object.fromEntries(ends.map((e) => [e, null]));
+}
+
 function covCurve(input: RestraintMapsInput, random: ('bottom' | 'top')[]): NonNullable<RestraintMaps['covCurve']> {
   const first = input.base[random[0]];
   const assessedCov = first.kind === 'random' ? makeDistribution(first.spec).sd / makeDistribution(first.spec).mean : 0;
@@ -224,6 +229,13 @@ function covCurve(input: RestraintMapsInput, random: ('bottom' | 'top')[]): NonN
       const m = makeDistribution(b.spec).mean;
       bases[e] = { kind: 'random', spec: withMoments(b.spec, m, cov * m) };
     }
+    // a bounded family (uniform, beta, truncnormal) cannot take every CoV at this mean without
+    // reaching below zero stiffness: that point is left out rather than computed on a non-physical spring
+    const outside = random.some((e) => {
+      const b = bases[e];
+      return b.kind === 'random' && !supportInsideDomain(b.spec, 'nonnegative');
+    });
+    if (outside) return { cov, mean: nullByEnd(input.ends), characteristic: nullByEnd(input.ends) };
     const baseStiffness = Object.fromEntries(input.ends.map((e) => [e, meanOf(bases[e])]));
     const r = restraintStudy({
       baseStiffness,

@@ -103,7 +103,7 @@ describe('second-order moments of the bowed, spring-restrained column', () => {
   });
 
   // common practice: no equilibrium at or above Pcr, nothing at zero load
-  it('unstable at P ≥ Pcr; zero at P = 0; rejects a negative load', () => {
+  it('unstable at P ≥ Pcr; zero at P = 0; a net tension straightens the bow (amplification below 1)', () => {
     const r = { bottom: 1, top: 1 };
     const { Pcr } = criticalLoad(EI, L, 'braced', r);
     const m = endSpringMoments(EI, L, 'braced', r, e0, Pcr);
@@ -113,6 +113,12 @@ describe('second-order moments of the bowed, spring-restrained column', () => {
     const z = endSpringMoments(EI, L, 'braced', r, e0, 0);
     expect(z.memberMax).toBe(0);
     expect(z.springMoment.bottom).toBe(0);
-    expect(() => endSpringMoments(EI, L, 'braced', r, e0, -1)).toThrow(RangeError);
+    // same modal solution with P < 0: added deflection e0·(P/Pcr)/(1 − P/Pcr), opposite to the bow
+    const t = endSpringMoments(EI, L, 'braced', r, e0, -0.5 * Pcr);
+    const c = endSpringMoments(EI, L, 'braced', r, e0, 0.5 * Pcr);
+    expect(t.stable).toBe(true);
+    expect(t.memberMax).toBeGreaterThan(0);
+    expect(t.memberMax / c.memberMax).toBeCloseTo((0.5 / 1.5) / (0.5 / 0.5), 12);
+    expect(() => endSpringMoments(EI, L, 'braced', r, e0, Number.NaN)).toThrow(RangeError);
   });
 });

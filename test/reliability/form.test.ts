@@ -6,6 +6,8 @@ import {
 } from '../../src/reliability/testProblems.js';
 import { normalSf } from '../../src/probability/normal.js';
 import type { ReliabilityProblem } from '../../src/reliability/types.js';
+import { makeDistribution } from '../../src/probability/makeDistribution.js';
+import { natafTransform } from '../../src/probability/nataf.js';
 
 /** |a − e| within half a unit of the last of `digits` significant digits of e. */
 function expectDigits(actual: number, expected: number, digits = 6): void {
@@ -209,5 +211,27 @@ describe('FORM special cases', () => {
     expect(e.names).toEqual(['R', 'S']);
     expect(e.x[1]).toBeGreaterThan(120);
     expect(e.message).toMatch(/FORM: limit state returned NaN .*S = /);
+  });
+});
+
+describe('FORM when no design point exists', () => {
+  // common practice: X ~ U(0, 1) bounds g = c − X, so with c = 2 g > 0 everywhere (pf = 0) and
+  // with c = −1 g < 0 everywhere (pf = 1); neither surface g = 0 exists to find
+  const bounded = (c: number): ReliabilityProblem => ({
+    names: ['X', 'Y'],
+    transform: natafTransform([makeDistribution({ dist: 'uniform', min: 0, max: 1 }), makeDistribution({ dist: 'beta', min: 0, max: 1, mean: 0.5, sd: 0.2 })], null),
+    g: (x) => c - x[0] - 0.1 * x[1],
+  });
+  it('impossible failure: β = +∞, pf = 0, said in a warning', () => {
+    const r = form(bounded(2));
+    expect(r.beta).toBe(Infinity);
+    expect(r.pf).toBe(0);
+    expect(r.warnings.join(' ')).toMatch(/no design point/);
+    expect(r.gamma.every(Number.isFinite)).toBe(true);
+  });
+  it('certain failure: a result with pf = 1 (the search stops where the bounded inputs saturate, or β = −∞)', () => {
+    const r = form(bounded(-1));
+    expect(r.beta).toBeLessThan(-8);
+    expect(r.pf).toBe(1);
   });
 });

@@ -248,3 +248,50 @@ describe('other keys', () => {
     expect(e.line).toBeGreaterThan(1);
   });
 });
+
+describe('physical supports: a value that cannot be negative gets no distribution that can', () => {
+  // common practice: stiffness, modulus, strength and section properties are >= 0 by definition
+  const set = (path: string[], value: unknown) => (o: Json) => {
+    sub(o, ...path.slice(0, -1))[path[path.length - 1]!] = value;
+  };
+  test.each([
+    [['column', 'material', 'E'], { dist: 'normal', mean: '200 GPa', cov: 0.1 }, 'column.material.E'],
+    [['column', 'material', 'fy'], { dist: 'gumbel', mean: '310 MPa', cov: 0.1 }, 'column.material.fy'],
+    [['column', 'section', 'area'], { dist: 'truncnormal', mean: '7640 mm^2', sd: '100 mm^2', max: '9000 mm^2' }, 'column.section.area'],
+    [['column', 'section', 'inertia'], { dist: 'truncnormal', mean: '25e6 mm^4', sd: '1e6 mm^4', min: '-1 mm^4' }, 'column.section.inertia.min'],
+    [['column', 'section', 'section_modulus'], { dist: 'uniform', min: '-1 mm^3', max: '300e3 mm^3' }, 'column.section.section_modulus.min'],
+    [['column', 'material', 'E'], { dist: 'beta', min: '-10 GPa', max: '400 GPa', mean: '200 GPa', sd: '10 GPa' }, 'column.material.E.min'],
+    [['column', 'ends', 'top'], { rotation: { dist: 'normal', mean: '2 MN m/rad', cov: 0.3 } }, 'column.ends.top.rotation'],
+    [['model_factor'], { dist: 'normal', mean: 1, cov: 0.1 }, 'model_factor'],
+  ])('%j → %j', (path, value, field) => {
+    const e = errorAfter(set(path, value));
+    expect(e.field).toBe(field);
+    expect(e.message).toMatch(/lognormal.*truncnormal with min >= 0/);
+  });
+  test('a lateral spring on a sway column', () => {
+    const e = errorAfter((o) => {
+      column(o)['frame'] = 'sway';
+      sub(o, 'column', 'ends')['lateral'] = { dist: 'normal', mean: '500 kN/m', cov: 0.2 };
+    });
+    expect(e.field).toBe('column.ends.lateral');
+  });
+  test.each([
+    [{ dist: 'lognormal', mean: '200 GPa', cov: 0.05 }],
+    [{ dist: 'weibull', mean: '200 GPa', cov: 0.05 }],
+    [{ dist: 'truncnormal', mean: '200 GPa', sd: '50 GPa', min: '0 GPa' }],
+    [{ dist: 'uniform', min: '0 GPa', max: '400 GPa' }],
+    [{ dist: 'beta', min: '0 GPa', max: '400 GPa', mean: '200 GPa', sd: '20 GPa' }],
+  ])('accepted: %j', (value) => {
+    expect(() => loadChanged((o) => { sub(o, 'column', 'material')['E'] = value; })).not.toThrow();
+  });
+  test('loads may stay normal or gumbel (a sampled negative load is a tension)', () => {
+    expect(() => loadChanged((o) => { sub(o, 'loads')['dead'] = { dist: 'normal', mean: '420 kN', cov: 0.8 }; })).not.toThrow();
+  });
+  test.each([
+    [{ dist: 'uniform', min: 0, max: 1 }],
+    [{ dist: 'beta', min: 0, max: 1, mean: 0.5, sd: 0.2 }],
+    [{ dist: 'truncnormal', min: 0, max: 1, mean: 0.9, sd: 0.5 }],
+  ])('a fixity factor on all of [0, 1] is accepted: %j', (fixity) => {
+    expect(() => loadChanged((o) => { sub(o, 'column', 'ends')['top'] = { fixity }; })).not.toThrow();
+  });
+});

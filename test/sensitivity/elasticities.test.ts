@@ -54,3 +54,20 @@ describe('β elasticities on g = R − S', () => {
     expect(out.entries[0].sdElasticity).toBeLessThan(0);
   });
 });
+
+describe('β elasticities where a perturbed side does not exist', () => {
+  // same closed form as above (source: Cornell 1969; reliability.md §1a); a side returning NaN
+  // (parameters outside the variable's support) leaves a one-sided difference
+  it('one side NaN: one-sided difference, still close to the exact derivative', () => {
+    const noUpperMean = (o: ParamOverrides): number => (o.R?.mean !== undefined && o.R.mean > base.R.mean ? NaN : betaOf(o));
+    const out = betaElasticities(['R', 'S'], [base.R, base.S], noUpperMean);
+    expect(out.entries[0].dBetaDMean).toBeCloseTo(exact.R.dMean, 9); // β is linear in μ: exact either way
+    expect(out.entries[1].dBetaDMean).toBeCloseTo(exact.S.dMean, 9);
+  });
+  it('both sides NaN, or β infinite: NaN, not an exception', () => {
+    const none = (o: ParamOverrides): number => (o.R !== undefined ? NaN : betaOf(o));
+    expect(betaElasticities(['R', 'S'], [base.R, base.S], none).entries[0].dBetaDMean).toBeNaN();
+    const infinite = betaElasticities(['R'], [base.R], () => Infinity);
+    expect(infinite.entries[0].dBetaDMean).toBeNaN();
+  });
+});

@@ -76,8 +76,11 @@ describe('Sobol indices (Saltelli 2010 first order, Jansen 1999 total)', () => {
     check(result, exact, exact, 0.15);
   });
 
-  it('rejects a constant model and mismatched names', () => {
-    expect(() => sobolIndices(['x'], uniforms(1, 0, 1), () => 1, { n: 100, seed: 1 })).toThrow(/does not vary/);
+  it('gives a constant model zero indices (no variance to apportion) and rejects mismatched names', () => {
+    // common practice: S_i = V_i / V; with V = 0 no input moves the output, reported as 0
+    const flat = sobolIndices(['x', 'y'], uniforms(2, 0, 1), () => 1, { n: 100, seed: 1 });
+    expect(flat.variance).toBe(0);
+    for (const s of [...flat.first, ...flat.total]) expect([s.value, s.lo, s.hi]).toEqual([0, 0, 0]);
     expect(() => sobolIndices(['x', 'y'], uniforms(1, 0, 1), (x) => x[0], { n: 100, seed: 1 })).toThrow();
   });
 });

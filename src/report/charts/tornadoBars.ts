@@ -21,13 +21,19 @@ export interface TornadoOptions {
 
 export function tornadoSpec(o: TornadoOptions): VegaLiteSpec {
   const variables = o.rows.map((r) => r.variable);
-  const segments = o.rows.flatMap((r) => [
-    { variable: r.variable, side: LOW_LABEL, from: o.baseline, to: r.low },
-    { variable: r.variable, side: HIGH_LABEL, from: o.baseline, to: r.high },
-  ]);
+  // A bar to ±∞ or to '—' (e.g. β where no design point exists, or FORM did not converge) cannot
+  // be drawn on a linear axis: it is left out here, said in the subtitle, and stays in CSV and JSON.
+  const all = o.rows
+    .flatMap((r) => [
+      { variable: r.variable, side: LOW_LABEL, from: o.baseline, to: r.low },
+      { variable: r.variable, side: HIGH_LABEL, from: o.baseline, to: r.high },
+    ]);
+  const segments = all.filter((seg) => Number.isFinite(seg.from) && Number.isFinite(seg.to));
+  const dropped = all.length - segments.length;
+  const subtitle = dropped === 0 ? o.subtitle : [...(o.subtitle === undefined ? [] : [o.subtitle].flat()), `${dropped} bar${dropped === 1 ? '' : 's'} without a finite end (an infinite or undefined value) not drawn; see the CSV and JSON.`];
   const y = { field: 'variable', type: 'nominal', sort: variables, title: null };
   return {
-    ...chartBase(o.title, o.subtitle),
+    ...chartBase(o.title, subtitle),
     width: 420,
     height: { step: 26 },
     layer: [
@@ -49,7 +55,7 @@ export function tornadoSpec(o: TornadoOptions): VegaLiteSpec {
       },
       {
         name: 'baseline',
-        data: { values: [{ x: o.baseline }] },
+        data: { values: Number.isFinite(o.baseline) ? [{ x: o.baseline }] : [] },
         mark: { type: 'rule', color: PALETTE.ink, strokeWidth: 1.5 },
         encoding: { x: { field: 'x', type: 'quantitative' } },
       },

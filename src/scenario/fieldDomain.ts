@@ -1,0 +1,14 @@
+/**
+ * The physical domain of each value by its contract path (the same rules the reader applies), so
+ * that a study which perturbs a distribution can tell whether the perturbed one is still admissible.
+ */
+import type { Domain } from './readScalar.js';
+
+export function fieldDomain(path: string): Domain {
+  if (path.startsWith('loads.')) return 'load';
+  if (path.endsWith('.fixity')) return 'fixity';
+  if (path.endsWith('.alignment_g')) return 'alignment';
+  if (path.endsWith('.rotation') || path === 'column.ends.lateral') return 'nonnegative';
+  if (path === 'column.imperfection.bow') return 'any';
+  return 'positive'; // section, material, model_factor
+}

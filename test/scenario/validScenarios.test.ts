@@ -1,0 +1,45 @@
+/**
+ * Property: every generated valid scenario ends in a result or an InputError (exit 2) through
+ * `check` and every method and study of `assess`, never in an internal error (common practice:
+ * robustness property test; the long run is `npm run bench -- valid`).
+ */
+import { describe, expect, test } from 'vitest';
+import { generateScenarioText, runGeneratedScenarios } from '../../bench/validScenarios.js';
+import { uniformStream } from '../../src/probability/rng.js';
+import { loadScenario } from '../../src/scenario/loadScenario.js';
+import { randomVariables } from '../../src/scenario/variables.js';
+
+const SEED = 20261202;
+const COUNT = 24;
+
+describe('generated valid scenarios', () => {
+  test('the generator is seeded: same seed, same text; and it covers the input forms', () => {
+    expect(generateScenarioText(uniformStream(SEED, 3), 3)).toBe(generateScenarioText(uniformStream(SEED, 3), 3));
+    const texts = Array.from({ length: 200 }, (_, i) => generateScenarioText(uniformStream(SEED, i), i));
+    const all = texts.join('\n');
+    for (const form of ['dist: normal', 'dist: lognormal', 'dist: gumbel', 'dist: uniform', 'dist: truncnormal', 'dist: weibull', 'dist: beta',
+      'fixity:', 'alignment_g:', 'rotation:', 'pinned', 'fixed', 'lateral:', 'frame: sway', 'frame: braced', 'correlation:', 'model_factor:',
+      'first-yield', 'aisc360-e3', 'en1993-a0', 'en1993-a\n', 'en1993-b', 'en1993-c', 'en1993-d']) {
+      expect(all, form).toContain(form);
+    }
+    // nearly all of them pass the reader (the rest must be InputErrors, checked below)
+    let read = 0;
+    for (const t of texts) {
+      try {
+        randomVariables(loadScenario(t, 'g.yaml'));
+        read++;
+      } catch {
+        /* counted below through runGeneratedScenarios */
+      }
+    }
+    expect(read).toBeGreaterThan(180);
+  });
+
+  test(`${COUNT} scenarios through check and every method and study: results or input errors only`, async () => {
+    const r = await runGeneratedScenarios(SEED, COUNT);
+    const report = r.internalErrors.map((e) => `--- scenario ${e.index}: ${e.message}\n${e.text}`).join('\n');
+    expect(r.internalErrors.length, report).toBe(0);
+    expect(r.results + r.inputErrors).toBe(COUNT);
+    expect(r.results).toBeGreaterThan(COUNT / 2);
+  }, 120_000);
+});

@@ -46,7 +46,8 @@ export function describeInput(input: unknown): string {
   return 'a mapping';
 }
 
-const NUMBER_AND_UNIT = /^\s*[-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?\s*[A-Za-zµΩ°(]/;
+// a number (also `25.1×10⁶` and a real minus, as reports print them), then a unit or feet-and-inches mark
+const NUMBER_AND_UNIT = /^\s*[-+\u2212]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+|\s*×\s*10(?:[⁻⁺]?[⁰¹²³⁴⁵⁶⁷⁸⁹]+|\^\(?[-+]?\d+\)?))?\s*[A-Za-zµΩ°('"]/;
 
 function quantityMessage(kind: QuantityKind, input: unknown, lengthExpression: boolean): string {
   const info = KINDS[kind];

@@ -43,7 +43,7 @@ describe('syntax errors name the line', () => {
 describe('quantities', () => {
   test('E: 4 m names field, line and both dimensions', () => {
     const e = errorIn(edit('    E: {dist: lognormal, mean: 200 GPa, cov: 0.03}', '    E: 4 m'));
-    expect(e.describe()).toBe('column.material.E (line 11): expected a stress (e.g. 200 GPa), got a length (4 m)');
+    expect(e.describe()).toBe('column.material.E (line 11): expected a stress (e.g. 200 GPa), got a length (4 m) (units accepted for a stress: Pa, kPa, MPa, GPa, N/mm², psi, ksi)');
   });
   test('a random parameter of the wrong dimension', () => {
     const e = errorIn(edit('mean: 310 MPa', 'mean: 310 kN'));

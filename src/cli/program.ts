@@ -13,6 +13,7 @@ import { registerNew } from './newCommand.js';
 import { registerAssess } from './assessCommand.js';
 import { CAUTION } from './textTable.js';
 import { boundLines } from '../scenario/shortenEcho.js';
+import { refuseRepeatedOptions } from './repeatedOptions.js';
 
 const program = new Command();
 
@@ -38,7 +39,7 @@ program
   .addOption(unitsOption())
   .addHelpText(
     'after',
-    `\nExamples:\n  stanchion check scenarios/braced-base-plate.yaml\n  stanchion check scenarios/sway-canopy-post.yaml --json\n  stanchion new | stanchion check -\n\n${CAUTION}\n`,
+    `\nExamples:\n  stanchion check scenarios/braced-base-plate.yaml\n  stanchion check scenarios/sway-canopy-post.yaml --json\n  stanchion new | stanchion check -\n\nEach option by example:\n  --json      one JSON document on stdout (SI units)\n  --units us  kip, ft, ksi for people\n\n${CAUTION}\n`,
   )
   .action((file: string, opts: { json?: boolean; units?: 'si' | 'us' }) => runCheck(file, opts));
 
@@ -55,7 +56,7 @@ program
   .addOption(unitsOption())
   .addHelpText(
     'after',
-    `\nExamples:\n  stanchion restraint scenarios/braced-base-plate.yaml\n  stanchion restraint scenarios/sway-canopy-post.yaml --end bottom --json\n  stanchion restraint scenarios/braced-base-plate.yaml --out reports/c3-restraint\n\n${CAUTION}\n`,
+    `\nExamples:\n  stanchion restraint scenarios/braced-base-plate.yaml\n  stanchion restraint scenarios/sway-canopy-post.yaml --end bottom --json\n  stanchion restraint scenarios/braced-base-plate.yaml --out reports/c3-restraint\n\nEach option by example:\n  --json                            one JSON document on stdout (SI units)\n  --end top                         study the top connection only (bottom, top or both)\n  --out reports/c3-restraint --force  report folder; --force replaces one stanchion wrote\n  --units us                        kip·in/rad, ft, ksi for people\n\n${CAUTION}\n`,
   )
   .action((file: string, opts: RestraintOptions) => runRestraint(file, opts));
 
@@ -65,6 +66,7 @@ registerNew(program);
 /** Run the command line `argv` (node, script, args...) and return the exit code. */
 export async function runProgram(argv: string[]): Promise<number> {
   try {
+    refuseRepeatedOptions(program, argv.slice(2));
     await program.parseAsync(argv);
     return EXIT_OK;
   } catch (err) {

@@ -55,8 +55,21 @@ function rewriteName(name: string): string {
   return name;
 }
 
+const CACHE_LIMIT = 2000;
+const rewritten = new Map<string, string>();
+
 /** The text with every unit spelling above rewritten; other text unchanged. */
 export function normaliseUnitSpelling(text: string): string {
+  // scenarios and sweeps repeat the same few texts: remember them (bounded)
+  const known = rewritten.get(text);
+  if (known !== undefined) return known;
+  const result = rewrite(text);
+  if (rewritten.size >= CACHE_LIMIT) rewritten.clear();
+  rewritten.set(text, result);
+  return result;
+}
+
+function rewrite(text: string): string {
   let s = text.replace(/\u2212/g, '-');
   s = s.replace(POWER_OF_TEN, (_m, digit: string, sup?: string, plain?: string) => `${digit}e${sup !== undefined ? fromSuperscript(sup) : plain}`);
   s = s.replace(SUPERSCRIPT_RUN, (run) => `^(${fromSuperscript(run)})`);

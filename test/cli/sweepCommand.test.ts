@@ -162,7 +162,7 @@ describe('stanchion sweep', () => {
     expect(doc.varied).toEqual(['loads.dead.mean']);
     expect(doc.methods).toEqual(['form']);
     const demand = doc.results.map((c: { result: { demand: number } }) => c.result.demand);
-    // demand = dead + imposed means (common practice: CONTRACT §3, S is the sum of the loads)
+    // demand = dead + imposed means (common practice: docs/mechanics.md, S is the sum of the loads)
     expect(demand[0]).toBeCloseTo(300e3 + 150e3, 6);
     expect(demand[2]).toBeCloseTo(400e3 + 150e3, 6);
   });

@@ -4,7 +4,7 @@
  *
  * 1. floor: a bare loop g = R − S, R lognormal, S Gumbel, inverse-CDF sampling from one
  *    uniform stream (no transform object, no chunking): evaluations per second on one core.
- * 2. crude MC on the given recipe (default: the Euler column of references §1g) with 1 and
+ * 2. crude MC on the given recipe (default: the Euler column of docs/verification.md §R1g) with 1 and
  *    2 workers, and the ratio of its throughput to the floor.
  * 3. a rare event (pf near 1e-6; default: g = β − Σu/√n, n = 10, β = 4.75342, pf = 1e-6):
  *    limit-state calls that FORM + IS and subset simulation need to reach CoV <= 10 %.
@@ -56,7 +56,7 @@ export async function runReliabilityBench(opts: ReliabilityBenchOptions = {}): P
 
   const columnRecipe = opts.columnRecipe ?? testProblemRecipe('eulerColumn', { length: 5 });
   const column = await loadRecipe(columnRecipe);
-  const label = opts.columnRecipe ? 'column recipe' : 'textbook Euler column (references §1g)';
+  const label = opts.columnRecipe ? 'column recipe' : 'textbook Euler column (docs/verification.md §R1g)';
   // Warm-up, then a timed pilot to size the run at about 3 s on one worker.
   await monteCarlo(column, { samples: 65_536, seed: SEED });
   const t0 = performance.now();
@@ -73,7 +73,7 @@ export async function runReliabilityBench(opts: ReliabilityBenchOptions = {}): P
 
   const rareRecipe = opts.rareColumnRecipe ?? testProblemRecipe('linearSum', { n: 10, beta: 4.75342 });
   const rare = await loadRecipe(rareRecipe);
-  const rareLabel = opts.rareColumnRecipe ? 'rare-event recipe' : 'g = β − Σu/√n, n = 10, pf = 1e-6 (references §1c3)';
+  const rareLabel = opts.rareColumnRecipe ? 'rare-event recipe' : 'g = β − Σu/√n, n = 10, pf = 1e-6 (docs/verification.md §R1c3)';
   const f = form(rare);
   const is = await importanceSamplingAtDesignPoint(rare, f, { samples: 1_000_000, seed: SEED, targetCov: TARGET_COV });
   lines.push(`rare event, ${rareLabel}: FORM β ${f.beta.toFixed(4)} (${f.calls} calls)`);

@@ -1,7 +1,7 @@
 import { InputError } from '../scenario/inputError.js';
 import { boundEchoes } from '../scenario/shortenEcho.js';
 
-/** Exit codes of CONTRACT.md §1. */
+/** Exit codes of docs/json-output.md. */
 export const EXIT_OK = 0;
 export const EXIT_INTERNAL = 1;
 export const EXIT_INPUT = 2;

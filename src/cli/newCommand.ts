@@ -4,6 +4,7 @@
  * not at all (temporary file, then a hard link that fails if FILE exists), and an existing
  * FILE is kept unless --force.
  */
+import { didYouMean } from '../scenario/nearestName.js';
 import { closeSync, existsSync, fsyncSync, linkSync, openSync, renameSync, statSync, unlinkSync, writeSync } from 'node:fs';
 import { basename, dirname, join } from 'node:path';
 import { Command, InvalidArgumentError, Option } from 'commander';
@@ -17,7 +18,7 @@ export interface NewOptions {
 }
 
 function parseFrame(value: string): Frame {
-  if (value !== 'braced' && value !== 'sway') throw new InvalidArgumentError("expected 'braced' or 'sway'.");
+  if (value !== 'braced' && value !== 'sway') throw new InvalidArgumentError(`expected 'braced' or 'sway'${didYouMean(value, ['braced', 'sway'])}.`);
   return value;
 }
 
@@ -75,7 +76,7 @@ export function registerNew(program: Command): void {
     .option('--force', 'replace FILE if it exists')
     .addHelpText(
       'after',
-      '\nExamples:\n  stanchion new > column.yaml\n  stanchion new --frame sway canopy-post.yaml\n  stanchion new | stanchion check -\n',
+      '\nExamples:\n  stanchion new > column.yaml\n  stanchion new --frame sway canopy-post.yaml\n  stanchion new | stanchion check -\n  stanchion new column.yaml --force   (replace column.yaml)\n',
     )
     .action((file: string | undefined, opts: NewOptions) => runNew(file, opts));
 }

@@ -3,22 +3,30 @@ import { InvalidArgumentError } from 'commander';
 const METHODS = ['form', 'sorm', 'is', 'mc', 'subset'] as const;
 export type MethodName = (typeof METHODS)[number];
 
+/** A seed: a whole number ≥ 0. */
 export function parseNonNegativeInteger(value: string): number {
   if (!/^\d+$/.test(value.trim()) || !Number.isSafeInteger(Number(value))) {
-    throw new InvalidArgumentError('expected a whole number ≥ 0.');
+    throw new InvalidArgumentError('expected a whole number ≥ 0 (e.g. 20261201).');
   }
   return Number(value);
 }
 
-export function parsePositiveInteger(value: string): number {
-  const v = value.trim();
-  // allow 1e6 style counts, but only when they denote a whole number
-  const n = Number(v);
-  if (!/^[0-9.eE+]+$/.test(v) || !Number.isSafeInteger(n) || n < 1) {
-    throw new InvalidArgumentError('expected a whole number ≥ 1 (e.g. 100000 or 1e6).');
-  }
-  return n;
+/** A count ≥ 1, with an example that fits the option (a worker count is not a sample count). */
+function positiveInteger(example: string): (value: string) => number {
+  return (value) => {
+    const v = value.trim();
+    // allow 1e6 style counts, but only when they denote a whole number
+    const n = Number(v);
+    if (!/^[0-9.eE+]+$/.test(v) || !Number.isSafeInteger(n) || n < 1) {
+      throw new InvalidArgumentError(`expected a whole number ≥ 1 (e.g. ${example}).`);
+    }
+    return n;
+  };
 }
+
+export const parseSampleCount = positiveInteger('100000 or 1e6');
+export const parseWorkerCount = positiveInteger('2');
+export const parseCaseCount = positiveInteger('200');
 
 export function parseFraction(value: string): number {
   const n = Number(value.trim());

@@ -13,6 +13,7 @@ import { registerNew } from './newCommand.js';
 import { registerAssess } from './assessCommand.js';
 import { CAUTION } from './textTable.js';
 import { boundLines } from '../scenario/shortenEcho.js';
+import { refuseRepeatedOptions } from './repeatedOptions.js';
 
 const program = new Command();
 
@@ -38,7 +39,7 @@ program
   .addOption(unitsOption())
   .addHelpText(
     'after',
-    `\nExamples:\n  stanchion check scenarios/braced-base-plate.yaml\n  stanchion check scenarios/sway-canopy-post.yaml --json\n  stanchion new | stanchion check -\n\n${CAUTION}\n`,
+    `\nExamples:\n  stanchion check scenarios/braced-base-plate.yaml\n  stanchion check scenarios/sway-canopy-post.yaml --json\n  stanchion new | stanchion check -\n\nEach option by example:\n  --json      one JSON document on stdout (SI units)\n  --units us  kip, ft, ksi for people\n\n${CAUTION}\n`,
   )
   .action((file: string, opts: { json?: boolean; units?: 'si' | 'us' }) => runCheck(file, opts));
 
@@ -46,7 +47,7 @@ registerAssess(program, unitsOption);
 
 program
   .command('restraint')
-  .description('how much end restraint the target reliability needs (FORM β against connection stiffness)')
+  .description('how much end restraint the target reliability needs (the connection stiffness at which β reaches the target, confirmed with the governing method)')
   .argument('<FILE>', 'scenario (.yaml, .yml, .json, or - for stdin)')
   .option('--json', 'print one JSON document (SI units) on stdout')
   .addOption(new Option('--end <end>', 'which connection to study: bottom, top or both (default: the ends given as springs)').argParser(parseEnd))
@@ -57,7 +58,7 @@ program
   .addOption(unitsOption())
   .addHelpText(
     'after',
-    `\nExamples:\n  stanchion restraint scenarios/braced-base-plate.yaml\n  stanchion restraint scenarios/sway-canopy-post.yaml --end bottom --json\n  stanchion restraint scenarios/braced-base-plate.yaml --out reports/c3-restraint\n\n${CAUTION}\n`,
+    `\nExamples:\n  stanchion restraint scenarios/braced-base-plate.yaml\n  stanchion restraint scenarios/sway-canopy-post.yaml --end bottom --json\n  stanchion restraint scenarios/braced-base-plate.yaml --out reports/c3-restraint\n\nEach option by example:\n  --json                            one JSON document on stdout (SI units)\n  --end top                         study the top connection only (bottom, top or both)\n  --method is                       solve the requirement with importance sampling (form, sorm or is)\n  --design-alpha standard           design stiffness with the standard α = 0.8 / 0.4 × 0.8 (or form)\n  --out reports/c3-restraint --force  report folder; --force replaces one stanchion wrote\n  --units us                        kip·in/rad, ft, ksi for people\n\n${CAUTION}\n`,
   )
   .action((file: string, opts: RestraintOptions) => runRestraint(file, opts));
 
@@ -67,6 +68,7 @@ registerNew(program);
 /** Run the command line `argv` (node, script, args...) and return the exit code. */
 export async function runProgram(argv: string[]): Promise<number> {
   try {
+    refuseRepeatedOptions(program, argv.slice(2));
     await program.parseAsync(argv);
     return EXIT_OK;
   } catch (err) {

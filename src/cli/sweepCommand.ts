@@ -36,7 +36,7 @@ import { InterruptedError, isInterruptedError } from '../runtime/interruptFlag.j
 import type { SweepTable } from '../studies/sweepTable.js';
 import type { CaseTable, Shard, SweepDefinition, SweepRecord } from '../studies/sweepTypes.js';
 import { parseVaryOption } from '../studies/varyOption.js';
-import { parseMethods, parseNonNegativeInteger, parsePositiveInteger, parseShard } from './optionParsers.js';
+import { parseMethods, parseNonNegativeInteger, parseSampleCount, parseWorkerCount, parseCaseCount, parseShard } from './optionParsers.js';
 import { readScenarioText, readTextFileBounded } from './readScenarioText.js';
 import { checkFolderTarget } from './outputFolder.js';
 import { CAUTION } from './textTable.js';
@@ -174,7 +174,14 @@ function checkCases(base: SweepBase, plan: SweepPlan): void {
     try {
       buildColumnModel(scenarioWithValues(base, values, plan.fieldOf));
     } catch (err) {
-      if (err instanceof InputError) throw new InputError(err.field, `${err.message} (${where})`, err.line);
+      if (err instanceof InputError) {
+        // a value the sweep set is the sweep's fault, not the scenario line's: name where it was given
+        const varied = plan.table.varied.find((p) => err.field === p || err.field.startsWith(`${p}.`));
+        if (varied === undefined) throw new InputError(err.field, `${err.message} (${where})`, err.line);
+        const givenIn = plan.fieldOf(varied);
+        const field = givenIn === '--vary' ? `--vary ${varied}` : `${givenIn} (${err.field})`;
+        throw new InputError(field, `${err.message} (${where})`);
+      }
       // a distribution the values make impossible (e.g. a negative cov)
       if (err instanceof Error && err.name === 'DistributionError') throw new InputError(index === null ? 'sweep values' : `sweep case ${index}`, `${err.message} (${where})`);
       throw err;
@@ -542,11 +549,11 @@ export function registerSweep(program: Command, unitsOption: () => Option): void
     .argument('<FILE>', 'a scenario (with --vary) or a sweep file (scenario: + vary: or list:)')
     .option('--vary <PATH=FROM:TO:STEPS>', 'vary one input (repeatable); also log:FROM:TO:STEPS, FROM:TO (lhs) or A,B,C', collect)
     .addOption(new Option('--design <design>', 'grid (every combination) or lhs (Latin hypercube)').argParser(parseDesign))
-    .addOption(new Option('--cases <n>', 'number of cases of a Latin hypercube').argParser(parsePositiveInteger))
+    .addOption(new Option('--cases <n>', 'number of cases of a Latin hypercube').argParser(parseCaseCount))
     .addOption(new Option('--methods <list>', 'comma-separated: form, sorm, is, mc, subset (default form)').argParser(parseMethods))
     .addOption(new Option('--seed <n>', 'sweep seed; each case derives its own (default: the file\'s, else 1)').argParser(parseNonNegativeInteger))
-    .addOption(new Option('--samples <n>', 'Monte Carlo samples per case (default: the scenario\'s mc_samples, else 100000)').argParser(parsePositiveInteger))
-    .addOption(new Option('--workers <n>', 'worker threads (at most the cores available; more are capped)').argParser(parsePositiveInteger).default(1))
+    .addOption(new Option('--samples <n>', 'Monte Carlo samples per case (default: the scenario\'s mc_samples, else 100000)').argParser(parseSampleCount))
+    .addOption(new Option('--workers <n>', 'worker threads (at most the cores available; more are capped)').argParser(parseWorkerCount).default(1))
     .addOption(new Option('--shard <I/N>', 'run only the cases with index % N == I; join shards with `stanchion merge`').argParser(parseShard))
     .option('--state <dir>', 'journal folder for resuming (default OUT/.state)')
     .option('--out <dir>', 'output folder (default sweep-out/<FILE name>)')
@@ -567,6 +574,17 @@ export function registerSweep(program: Command, unitsOption: () => Option): void
         '  stanchion sweep scenarios/braced-base-plate.yaml --vary "column.length=4 m:7 m:7" --vary "loads.dead.mean=300 kN:400 kN:5"',
         '  stanchion sweep scenarios/sweep-base-stiffness.yaml --workers 2',
         '  stanchion sweep scenarios/sweep-base-stiffness.yaml --shard 0/2 --state st   (and 1/2 elsewhere, then: stanchion merge st --out res)',
+        '',
+        'Each option by example:',
+        '  --vary "loads.dead.mean=300 kN:500 kN:5"   repeat for a second axis; log:FROM:TO:STEPS, FROM:TO, A,B,C',
+        '  --design lhs --cases 200                   Latin hypercube of 200 cases (default grid)',
+        '  --methods form,mc                          given once, as one list',
+        '  --seed 7                                   sweep seed',
+        '  --samples 1e5                              Monte Carlo samples per case',
+        '  --workers 2                                worker threads',
+        '  --shard 0/2                                first of two shards',
+        '  --state st  --out res  --force             journal folder, output folder, replace another sweep',
+        '  --json  --units us                         JSON on stdout; kip, ft, ksi for people',
         '',
         'PATH is a scenario path (column.length, loads.dead) or a parameter of a random variable',
         '(column.ends.bottom.rotation.mean, loads.imposed.cov). Run the same command again to resume.',

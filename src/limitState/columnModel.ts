@@ -1,7 +1,7 @@
 /**
  * The bridge from a scenario to numbers: which scenario values are random (and where each one
  * sits in the vector x), and the column's capacity, demand and limit state at any x.
- * g(x) = θ·capacity(x) − Σ loads (CONTRACT.md §3). Hot path: no allocation per call.
+ * g(x) = θ·capacity(x) − Σ loads (docs/mechanics.md). Hot path: no allocation per call.
  */
 import type { Distribution } from '../probability/distribution.js';
 import { combinationDistributions, defaultCombination } from '../loads/combinationDistributions.js';

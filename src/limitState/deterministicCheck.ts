@@ -1,5 +1,5 @@
 /**
- * `stanchion check`: the column with every random variable at its mean (CONTRACT.md §1, §4).
+ * `stanchion check`: the column with every random variable at its mean (docs/json-output.md).
  * Also the buckled shapes of the first modes, for people and for the report.
  */
 import { criticalLoad } from '../mechanics/criticalLoad.js';

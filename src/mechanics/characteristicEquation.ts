@@ -6,7 +6,7 @@
  * (natural conditions of the energy ½∫EI y''² − ½P∫y'² + ½k_A y'(0)² + ½k_B y'(L)² + ½k_T y(L)²):
  *   y(0) = 0,  y''(0) = R_A y'(0),  y''(1) = −R_B y'(1),
  *   braced: y(1) = 0;   sway: y'''(1) + φ² y'(1) = T y(1)  ⇔  φ² C = T y(1).
- * Expanding the determinant (checked symbolically) gives, with Δb and Δs as in the shared references §2
+ * Expanding the determinant (checked symbolically) gives, with Δb and Δs as in docs/verification.md §M2
  * (Timoshenko & Gere 1961 ch. 2; Chen & Lui 1987 §2.3):
  *   Δb = R_A R_B [2(1 − cos φ) − φ sin φ] + (R_A + R_B) φ (sin φ − φ cos φ) + φ³ sin φ
  *   Δs = (R_A R_B − φ²) sin φ + (R_A + R_B) φ cos φ

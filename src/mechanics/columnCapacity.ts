@@ -28,7 +28,7 @@ export function isStrengthModel(s: string): s is StrengthModel {
 }
 
 /**
- * Axial capacity of the restrained column (CONTRACT §3), exact path: critical load from the
+ * Axial capacity of the restrained column (docs/mechanics.md), exact path: critical load from the
  * characteristic equation, c from the closed-form first mode. A mechanism gives capacity 0.
  */
 export function columnCapacity(model: StrengthModel, s: ColumnState): CapacityResult {

@@ -3,7 +3,7 @@
  * w'' = −φ² g with g(θ) = A sin θ + B cos θ = ρ sin(θ + γ), θ = φξ, ρ = √(A² + B²), γ = atan2(B, A);
  * w'  = φ ρ cos(θ + δ) + C with δ = atan2(B, A) as well, so the interior extremes of w sit where
  * cos(θ + δ) = −C/(φρ).
- * c = EI max|w''| / (Pcr max|w|) = max|g| / max|w| (CONTRACT §3; φ² cancels).
+ * c = EI max|w''| / (Pcr max|w|) = max|g| / max|w| (docs/mechanics.md; φ² cancels).
  */
 
 export const EX_MAX_W = 0; // max |w|

@@ -6,7 +6,7 @@ import type { EndRestraint, Frame } from './types.js';
  * Second-order moments and rotations of the bowed, spring-restrained column under axial load P
  * (derivation: docs/mechanics-moments.md).
  *
- * The initial shape is w0 = e0·ŵ, ŵ the first buckling mode normalised as in CONTRACT §3 (max|ŵ| = 1,
+ * The initial shape is w0 = e0·ŵ, ŵ the first buckling mode normalised as in docs/mechanics.md (max|ŵ| = 1,
  * braced: from the chord; sway: from the vertical through the base). The added deflection v = w − w0
  * solves EI v'''' + P (v + w0)'' = 0 with the homogeneous spring conditions of the perfect column.
  * Because ŵ is an eigenfunction (EI ŵ'''' = −Pcr ŵ'', and the sway shear condition holds for it at

@@ -7,7 +7,7 @@ import { firstYieldCapacity } from './firstYield.js';
  *   e0 = α (λ̄ − 0.2) · M_Rk/N_Rk · (1 − χ λ̄²/γ_M1) / (1 − χ λ̄²)   for λ̄ > 0.2 (else 0),
  * with η_cr the first buckling mode of the restrained column and λ̄ = √(A fy / Ncr).
  * With η_cr normalised to max|η_cr| = 1, the amplitude of η_init is e0·Ncr/(EI max|η''|) = e0/c, c the
- * curvature factor of CONTRACT §3; the first-yield moment is then P e0 / (1 − P/Ncr) whatever the
+ * curvature factor of docs/mechanics.md; the first-yield moment is then P e0 / (1 − P/Ncr) whatever the
  * restraint. M_Rk/N_Rk = S/A here (the elastic modulus, the same one the first-yield check uses), and
  * γ_M1 = 1 for a mean-level model, so the last fraction is 1 and the result is χ·A·fy of the curve:
  * the Ayrton–Perry form of Eq. (6.49) with η = α(λ̄ − 0.2).

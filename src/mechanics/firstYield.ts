@@ -1,6 +1,6 @@
 /**
  * First-yield (Perry–Robertson / Ayrton–Perry) axial capacity of an imperfect column whose initial
- * bow is affine to its first buckling mode (CONTRACT §3):
+ * bow is affine to its first buckling mode (docs/mechanics.md):
  *   P/A + P e0 c / (S (1 − P/Pcr)) = fy,   the smaller positive root.
  * Ayrton & Perry, The Engineer 62, 1886; Robertson, ICE Selected Engineering Paper 28, 1925;
  * Timoshenko & Gere 1961 ch. 1 (amplification y0/(1 − P/Pcr)). In stresses, with σE = Pcr/A and

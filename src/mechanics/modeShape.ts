@@ -85,7 +85,7 @@ function rigidTilt(frame: Frame): ModeShape {
   };
 }
 
-/** Curvature factor c of mode `mode` (CONTRACT §3); 0 for a mechanism. */
+/** Curvature factor c of mode `mode` (docs/mechanics.md); 0 for a mechanism. */
 export function modeCurvatureFactor(frame: Frame, r: EndRestraint, mode = 1): number {
   return modeShape(frame, r, criticalPhi(frame, r, mode)).curvatureFactor;
 }

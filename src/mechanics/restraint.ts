@@ -39,7 +39,7 @@ export function ratioFromFixity(f: number): number {
  *
  * With these substitutions the alignment-chart equations (AISC 360-16 Commentary App. 7,
  * Eqs. C-A-7-1 and C-A-7-2; Julian and Lawrence 1959) become exactly the characteristic equations of
- * the spring-restrained column (shared references/mechanics.md §3). The charts' assumptions carry over:
+ * the spring-restrained column (docs/verification.md §M3). The charts' assumptions carry over:
  * elastic behaviour; prismatic members; rigid joints; girders bent in single curvature with equal and
  * opposite end rotations when braced (end stiffness 2EI/L) and in double curvature with equal rotations
  * in sway (6EI/L); every column buckles at once with the same L√(P/EI); the joint restraint is shared

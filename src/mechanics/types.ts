@@ -41,7 +41,7 @@ export interface ModeShape {
   readonly maxCurvature: number;
   /** ξ where |w''| is largest */
   readonly maxCurvatureAt: number;
-  /** c = EI max|w''| / (Pcr max|w|) (CONTRACT §3); 0 for a mechanism (no curvature) */
+  /** c = EI max|w''| / (Pcr max|w|) (docs/mechanics.md); 0 for a mechanism (no curvature) */
   readonly curvatureFactor: number;
   /** zeros of w'' strictly inside (0, 1), increasing */
   readonly inflectionPoints: readonly number[];

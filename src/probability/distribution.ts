@@ -1,7 +1,7 @@
 /**
  * The shape every marginal distribution offers to the rest of the program.
  * Parameters are SI numbers; which DistSpec fields a distribution needs is set by
- * CONTRACT.md §2 and checked in makeDistribution.ts.
+ * docs/scenario-format.md and checked in makeDistribution.ts.
  */
 
 export type DistName = 'normal' | 'lognormal' | 'gumbel' | 'uniform' | 'truncnormal' | 'weibull' | 'beta';

@@ -1,5 +1,5 @@
 /**
- * Build a Distribution from a user's DistSpec (CONTRACT.md §2), validating every parameter.
+ * Build a Distribution from a user's DistSpec (docs/scenario-format.md), validating every parameter.
  * Bad input throws DistributionError with a message naming the parameter (no path: the
  * caller knows which variable it was building).
  */

@@ -1,5 +1,5 @@
 /**
- * Textbook limit states with known answers (see /work/shared/references/reliability.md), built
+ * Textbook limit states with known answers (see docs/verification.md, part R), built
  * from plain arguments so a worker thread can rebuild them from a ProblemRecipe. Used by the
  * tests and by the benchmark when no column recipe is given.
  */
@@ -80,7 +80,7 @@ export function resistanceMinusLoad(args: { r: DistSpec; s: DistSpec; rho?: numb
   };
 }
 
-/** g = R·θ − S with independent variables (reliability.md §1e). */
+/** g = R·θ − S with independent variables (docs/verification.md §R1e). */
 export function resistanceModelLoad(args: { r: DistSpec; theta: DistSpec; s: DistSpec }): ReliabilityProblem {
   return {
     names: ['R', 'theta', 'S'],
@@ -89,7 +89,7 @@ export function resistanceModelLoad(args: { r: DistSpec; theta: DistSpec; s: Dis
   };
 }
 
-/** Euler column with uncertain effective-length factor (reliability.md §1g): g = π²EI/(KL)² − P. */
+/** Euler column with uncertain effective-length factor (docs/verification.md §R1g): g = π²EI/(KL)² − P. */
 export function eulerColumn(args: { length: number }): ReliabilityProblem {
   const L = args.length;
   return {

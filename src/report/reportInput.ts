@@ -5,7 +5,7 @@
  * formatting and simple comparisons. Every number is in SI base units
  * (N, m, m², m⁴, m³, Pa, N·m/rad, N/m) unless its comment says otherwise; the report
  * converts to the display system chosen at write time. Variable names are the scenario
- * paths of CONTRACT.md §2 (`column.material.E`, `loads.dead`, `model_factor` ...).
+ * paths of docs/scenario-format.md (`column.material.E`, `loads.dead`, `model_factor` ...).
  */
 
 /** What a number measures, so the report can pick a display unit. */
@@ -108,7 +108,7 @@ export interface ModeShapeData {
   effectiveLength: number | null; // m; distance between inflection points, null if undefined
 }
 
-/** The deterministic check with every random variable at its mean (CONTRACT.md §4 `check`). */
+/** The deterministic check with every random variable at its mean (docs/json-output.md `check`). */
 export interface CheckResult {
   criticalLoad: number; // Pcr, N
   effectiveLengthFactor: number; // K

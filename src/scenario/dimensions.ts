@@ -20,7 +20,8 @@ export type QuantityKind =
   | 'stress'
   | 'force'
   | 'rotationalStiffness'
-  | 'translationalStiffness';
+  | 'translationalStiffness'
+  | 'moment';
 
 export interface KindInfo {
   /** "a stress": used in "expected a stress (e.g. 200 GPa)". */
@@ -41,6 +42,8 @@ export const KINDS: Readonly<Record<QuantityKind, KindInfo>> = {
   force: { noun: 'a force', dimensions: dims(1, 1, -2), siUnit: 'N', example: '420 kN', defaultDisplay: { unit: 'kN', factor: 1e3 } },
   rotationalStiffness: { noun: 'a rotational stiffness', dimensions: dims(1, 2, -2, -1), siUnit: 'N m/rad', example: '2.5 MN m/rad', defaultDisplay: { unit: 'kN m/rad', factor: 1e3 } },
   translationalStiffness: { noun: 'a translational stiffness', dimensions: dims(1, 0, -2), siUnit: 'N/m', example: '500 kN/m', defaultDisplay: { unit: 'kN/m', factor: 1e3 } },
+  // no scenario field is a moment yet; reports print moments, so they must read back
+  moment: { noun: 'a moment', dimensions: dims(1, 2, -2), siUnit: 'N m', example: '35 kN·m', defaultDisplay: { unit: 'kN·m', factor: 1e3 } },
 };
 
 export function sameDimensions(a: Dimensions, b: Dimensions): boolean {

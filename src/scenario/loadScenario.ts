@@ -1,5 +1,5 @@
 /**
- * Scenario text → Scenario (CONTRACT.md §2), or an InputError naming the field and line.
+ * Scenario text → Scenario (docs/scenario-format.md), or an InputError naming the field and line.
  * Three stages: parse (YAML/JSON with lines) → shape (zod) → meaning (units, rules).
  */
 import { createHash } from 'node:crypto';

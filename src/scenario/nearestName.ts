@@ -16,8 +16,50 @@ export function editDistance(a: string, b: string): number {
   return row[b.length]!;
 }
 
+/**
+ * Words of the trade for the same thing, mapped to this tool's name. Spelling distance alone
+ * gets these wrong: `unbraced` is one letter pair from `braced`, which means the opposite.
+ * Keys are written in the folded form of `foldWord`.
+ */
+const TRADE_SYNONYMS: Readonly<Record<string, string>> = {
+  unbraced: 'sway',
+  swayframe: 'sway',
+  sidesway: 'sway',
+  swaypermitted: 'sway',
+  momentframe: 'sway',
+  momentresisting: 'sway',
+  nonsway: 'braced',
+  nosway: 'braced',
+  swayprevented: 'braced',
+  braceframe: 'braced',
+  bracedframe: 'braced',
+  clamped: 'fixed',
+  encastre: 'fixed',
+  builtin: 'fixed',
+  rigid: 'fixed',
+  fix: 'fixed',
+  pin: 'pinned',
+  pined: 'pinned',
+  hinge: 'pinned',
+  hinged: 'pinned',
+  simplysupported: 'pinned',
+  spring: 'rotation',
+  semirigid: 'rotation',
+  rotationalspring: 'rotation',
+  stiffness: 'rotation',
+};
+
+/** Case, spaces, hyphens and underscores do not matter to a synonym. */
+function foldWord(word: string): string {
+  return word.toLowerCase().replace(/[\s_-]+/g, '');
+}
+
 /** The closest candidate when it is close enough to be a likely typo, else undefined. */
 export function nearestName(word: string, candidates: readonly string[]): string | undefined {
+  const synonym = TRADE_SYNONYMS[foldWord(word)];
+  if (synonym !== undefined && Object.prototype.hasOwnProperty.call(TRADE_SYNONYMS, foldWord(word)) && candidates.includes(synonym)) {
+    return synonym;
+  }
   let best: string | undefined;
   let bestDistance = Infinity;
   for (const c of candidates) {

@@ -5,6 +5,7 @@
  */
 import { KINDS, describeDimensions, sameDimensions, type QuantityKind } from './dimensions.js';
 import { evaluateQuantity, ExpressionError } from './quantityExpression.js';
+import { acceptedUnitsPhrase, LIKELY_SLIPS, suggestUnit } from './acceptedUnits.js';
 
 /** The unit the user wrote, kept so reports can echo inputs as given. */
 export interface DisplayUnit {
@@ -21,7 +22,9 @@ export interface Quantity {
   readonly display: DisplayUnit;
 }
 
-const LEADING_NUMBER = /^\s*[-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?\s*/;
+// also `25.1×10⁶` and a real minus sign, as the reports print them
+const LEADING_NUMBER = /^\s*[-+\u2212]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+|\s*×\s*10(?:[⁻⁺]?[⁰¹²³⁴⁵⁶⁷⁸⁹]+|\^\(?[-+]?\d+\)?))?\s*/;
+const NAME = /[A-Za-zµΩ°_][A-Za-z0-9µΩ°_]*/g;
 
 /**
  * Reads `text` as a quantity of `kind`; `columnLength` (m) enables the symbol L.
@@ -30,18 +33,25 @@ const LEADING_NUMBER = /^\s*[-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?\s*/;
 export function readQuantity(text: string, kind: QuantityKind, columnLength?: number): Quantity {
   const info = KINDS[kind];
   const expected = `expected ${info.noun} (e.g. ${info.example})`;
+  const accepted = acceptedUnitsPhrase(kind, info.noun);
+  for (const name of text.match(NAME) ?? []) {
+    const meant = Object.prototype.hasOwnProperty.call(LIKELY_SLIPS, name) ? LIKELY_SLIPS[name] : undefined;
+    if (meant !== undefined) throw new ExpressionError(`${expected}: '${text}' uses '${name}' (a unit a thousandth of '${meant}'): did you mean '${meant}'? (${accepted})`);
+  }
   let evaluated;
   try {
     evaluated = evaluateQuantity(text, columnLength === undefined ? {} : { columnLength });
   } catch (e) {
-    if (e instanceof ExpressionError) throw new ExpressionError(`${expected}: '${text}' ${e.message}`);
-    throw e;
+    if (!(e instanceof ExpressionError)) throw e;
+    const meant = e.unknownName === undefined ? undefined : suggestUnit(e.unknownName);
+    const why = meant === undefined ? e.message : `uses '${e.unknownName}', which is not a known unit: did you mean '${meant}'?`;
+    throw new ExpressionError(`${expected}: '${text}' ${why} (${accepted})`);
   }
   if (!evaluated.hasUnit) {
-    throw new ExpressionError(`${expected}, got a bare number (${text.trim()}): give a unit`);
+    throw new ExpressionError(`${expected}, got a bare number (${text.trim()}): give a unit (${accepted})`);
   }
   if (!sameDimensions(evaluated.dimensions, info.dimensions)) {
-    throw new ExpressionError(`${expected}, got ${describeDimensions(evaluated.dimensions)} (${text.trim()})`);
+    throw new ExpressionError(`${expected}, got ${describeDimensions(evaluated.dimensions)} (${text.trim()}) (${accepted})`);
   }
   return { value: evaluated.value, display: displayUnitOf(text, kind) };
 }

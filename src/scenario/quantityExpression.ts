@@ -10,10 +10,12 @@
 import { parseExpression, type MathNode } from './mathjsBundle.js';
 import { DIMENSIONLESS, describeDimensions, sameDimensions, type Dimensions } from './dimensions.js';
 import { COLUMN_LENGTH_SYMBOL, lookupUnit } from './units.js';
+import { normaliseUnitSpelling } from './unitSpelling.js';
 
 /** A problem with an expression; the caller adds the field path. */
 export class ExpressionError extends Error {
-  constructor(message: string) {
+  /** `unknownName`: the name that is not a unit, when that is the problem (for a did-you-mean). */
+  constructor(message: string, readonly unknownName?: string) {
     super(message);
     this.name = 'ExpressionError';
   }
@@ -41,10 +43,10 @@ export function evaluateQuantity(text: string, options: EvaluateOptions = {}): E
   if (text.trim() === '') throw new ExpressionError('is empty');
   let tree: MathNode;
   try {
-    tree = parseExpression(text);
-  } catch (e) {
-    const detail = e instanceof Error && !(e instanceof RangeError) ? e.message : 'cannot be read';
-    throw new ExpressionError(`cannot read '${text}': ${detail}`);
+    tree = parseExpression(normaliseUnitSpelling(text));
+  } catch {
+    // the parser's own wording ("Value expected (char 13)") means nothing to an engineer
+    throw new ExpressionError('cannot be read as a number with a unit (or, for a length, an expression of L)');
   }
   return walk(tree, options, 0);
 }
@@ -68,7 +70,7 @@ function walk(node: MathNode, options: EvaluateOptions, depth: number): Evaluate
       throw new ExpressionError('contains an assignment: assignments are not allowed');
     case 'AccessorNode':
     case 'IndexNode':
-      throw new ExpressionError('contains a property access or index: not allowed');
+      throw new ExpressionError("contains a '.' or '[' after a name (a property access or index): not allowed");
     default:
       throw new ExpressionError(`contains ${describeNodeType(node.type)}: only numbers, units, L and + - * / ^ are allowed`);
   }
@@ -93,7 +95,7 @@ function symbol(name: string, options: EvaluateOptions): Evaluated {
   const unit = lookupUnit(name);
   if (unit === undefined) {
     if (name === 'NaN' || name === 'Infinity') throw new ExpressionError('is not a finite number');
-    throw new ExpressionError(`uses '${name}', which is not a known unit (the only symbol allowed is L, the column length)`);
+    throw new ExpressionError(`uses '${name}', which is not a known unit (the only symbol allowed is L, the column length)`, name);
   }
   return { value: unit.factor, dimensions: unit.dimensions, hasUnit: true };
 }

@@ -66,7 +66,7 @@ export function readEnds(raw: RawEnds, frame: Frame, ctx: ReadContext): { bottom
   const bottom = readEnd(raw.bottom, frame, [...base, 'bottom'], ctx);
   const top = readEnd(raw.top, frame, [...base, 'top'], ctx);
   if (frame === 'braced') {
-    // A zero spring is harmless (CONTRACT.md §2's own example writes `lateral: 0 kN/m` on a
+    // A zero spring is harmless (docs/scenario-format.md's own example writes `lateral: 0 kN/m` on a
     // braced column); any other value would silently mean nothing, so it is refused.
     if (raw.lateral !== undefined) {
       const lateral = readScalar(raw.lateral, { kind: 'translationalStiffness', domain: 'nonnegative' }, [...base, 'lateral'], ctx);

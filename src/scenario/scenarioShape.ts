@@ -46,7 +46,8 @@ export function describeInput(input: unknown): string {
   return 'a mapping';
 }
 
-const NUMBER_AND_UNIT = /^\s*[-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?\s*[A-Za-zµΩ°(]/;
+// a number (also `25.1×10⁶` and a real minus, as reports print them), then a unit or feet-and-inches mark
+const NUMBER_AND_UNIT = /^\s*[-+\u2212]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+|\s*×\s*10(?:[⁻⁺]?[⁰¹²³⁴⁵⁶⁷⁸⁹]+|\^\(?[-+]?\d+\)?))?\s*[A-Za-zµΩ°('"]/;
 
 function quantityMessage(kind: QuantityKind, input: unknown, lengthExpression: boolean): string {
   const info = KINDS[kind];
@@ -117,7 +118,7 @@ function strict<T extends z.core.$ZodLooseShape>(shape: T, what: string) {
 
 const covSchema = pureNumberSchema('a coefficient of variation (sd / mean), e.g. 0.1');
 
-/** `{dist: NAME, ...}` with the parameters CONTRACT.md §2 gives each distribution. */
+/** `{dist: NAME, ...}` with the parameters docs/scenario-format.md gives each distribution. */
 export function randomVariableSchema<X extends z.core.$ZodLooseShape = Record<never, never>>(value: () => ValueSchema, extra: X = {} as X) {
   const meanSdCov = <const D extends DistName>(dist: D) =>
     strict({ dist: z.literal(dist), mean: value(), sd: value().optional(), cov: covSchema.optional(), ...extra }, `a ${dist} variable (mean and one of sd, cov)`);
@@ -228,7 +229,7 @@ const integer = (what: string, minimum: number) =>
 const periodText = (description: string) =>
   z.string({ error: (iss) => `expected a period such as 50 years or 1 year, got ${describeInput(iss.input)}` }).meta({ description, examples: ['50 years', '1 year'] });
 
-/** The keys a random load may carry to say what it is and which period it describes (CONTRACT.md §5). */
+/** The keys a random load may carry to say what it is and which period it describes (docs/scenario-format.md). */
 const LOAD_TIME_KEYS = {
   kind: choice(LOAD_KIND_NAMES, 'a load kind').optional().meta({ description: 'permanent | imposed | snow | wind | other; permanent loads are never converted in time' }),
   maximum_over: periodText('the distribution is that of the maximum over this period, e.g. 1 year (annual maximum)').optional(),

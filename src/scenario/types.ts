@@ -1,6 +1,6 @@
 /**
  * A validated scenario: every number in SI (N, m, Pa, N·m/rad, N/m), every scalar either
- * fixed or a random variable, named everywhere by its path in the file (CONTRACT.md §2).
+ * fixed or a random variable, named everywhere by its path in the file (docs/scenario-format.md).
  */
 import type { DistSpec } from '../probability/distribution.js';
 import type { DisplayUnit } from './quantity.js';
@@ -53,7 +53,7 @@ export interface Beam {
   readonly length: number;
 }
 
-/** What a load is (CONTRACT.md §5): permanent loads are never converted in time. */
+/** What a load is (docs/scenario-format.md): permanent loads are never converted in time. */
 export type LoadKind = 'permanent' | 'imposed' | 'snow' | 'wind' | 'other';
 export const LOAD_KINDS: readonly LoadKind[] = ['permanent', 'imposed', 'snow', 'wind', 'other'];
 

@@ -1,5 +1,5 @@
 /**
- * Every value of a scenario by its contract path (CONTRACT.md §2), in one stable order:
+ * Every value of a scenario by its contract path (docs/scenario-format.md), in one stable order:
  * section, material, ends (bottom, top, lateral), bow, loads in file order, model factor.
  */
 import type { End, RandomVariable, Scalar, Scenario } from './types.js';

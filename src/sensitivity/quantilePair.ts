@@ -1,6 +1,6 @@
 /**
  * The low and high probability levels shared by the one-at-a-time studies (tornado and
- * conditional β): 5 % and 95 % unless told otherwise (CONTRACT §4).
+ * conditional β): 5 % and 95 % unless told otherwise (docs/json-output.md).
  */
 export interface QuantileLevels {
   lowQ?: number;

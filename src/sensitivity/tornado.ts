@@ -1,7 +1,7 @@
 /**
  * Tornado diagram data: one variable at a time at its low / high quantile, every other
  * variable at its mean, and the response recorded. Sorted by swing |high − low|, largest
- * first (CONTRACT §4 uses utilization as the response; capacity works the same way).
+ * first (docs/json-output.md uses utilization as the response; capacity works the same way).
  */
 import type { Distribution } from '../probability/distribution.js';
 import { throwIfInterrupted } from '../runtime/interruptFlag.js';

@@ -1,5 +1,5 @@
 /**
- * The contract JSON of `stanchion assess` (CONTRACT.md §4): contract keys first, extensions after.
+ * The contract JSON of `stanchion assess` (docs/json-output.md): contract keys first, extensions after.
  * JSON has no Infinity: a non-finite number is written as null.
  */
 import { checkJson } from '../limitState/deterministicCheck.js';

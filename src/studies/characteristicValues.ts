@@ -60,7 +60,7 @@ export interface CharacteristicSummary {
 
 const PERMANENT_NAMES = /^(dead|permanent|self[_-]?weight)$/i;
 
-/** A load's `kind` when the scenario gives one (CONTRACT §5), else a permanent-sounding name. */
+/** A load's `kind` when the scenario gives one (docs/scenario-format.md), else a permanent-sounding name. */
 export function isPermanentLoad(load: Load): { permanent: boolean; by: string } {
   const kind = (load as Load & { readonly kind?: string }).kind;
   if (kind !== undefined) return { permanent: kind === 'permanent', by: `kind: ${kind}` };

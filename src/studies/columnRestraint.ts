@@ -1,6 +1,6 @@
 /**
  * The restraint justification for a column: FORM β as the mean rotational stiffness of the studied
- * ends is multiplied by one common factor (CONTRACT.md §4 `restraint`), the least stiffness that
+ * ends is multiplied by one common factor (docs/json-output.md `restraint`), the least stiffness that
  * reaches the target, and a sentence a reviewer can read.
  */
 import { buildColumnModel } from '../limitState/columnModel.js';
@@ -398,7 +398,7 @@ function methodSentence(method: RestraintMethod, c: RestraintConfirmation | null
 
 const finite = (v: number): number | null => (Number.isFinite(v) ? v : null);
 
-/** The contract's `restraint` object (CONTRACT.md §4), with extensions after the contract keys. */
+/** The contract's `restraint` object (docs/json-output.md), with extensions after the contract keys. */
 export function restraintJson(r: ColumnRestraintResult): Record<string, unknown> {
   const { study } = r;
   const required: Record<string, number | null> = {};

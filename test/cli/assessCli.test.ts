@@ -4,7 +4,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { runCli } from './runCli.js';
 
-// Contract checks of CONTRACT.md §1 and §4 (common practice for a CLI: one JSON document on stdout).
+// Checks of docs/json-output.md (common practice for a CLI: one JSON document on stdout).
 describe('stanchion assess (end to end)', () => {
   it('prints the contract JSON; importance sums to 1; tornado sorted by swing', () => {
     const r = runCli(['assess', 'scenarios/braced-base-plate.yaml', '--json', '--methods', 'form,sorm,mc', '--samples', '50000', '--seed', '3']);
@@ -28,7 +28,7 @@ describe('stanchion assess (end to end)', () => {
     expect(doc.meta.seed).toBe(3);
     expect(doc.meta.scenario_sha256).toMatch(/^[0-9a-f]{64}$/);
     expect(doc.restraint.required.bottom).toBeGreaterThan(0);
-    // CONTRACT.md §5: reliability.by_strength_model [{strength, beta, model_factor: {mean, cov}}]
+    // docs/json-output.md: reliability.by_strength_model [{strength, beta, model_factor: {mean, cov}}]
     const rows = doc.reliability.by_strength_model as { strength: string; beta: number; model_factor: { mean: number; cov: number } }[];
     expect(rows.map((m) => m.strength)).toContain('first-yield');
     for (const m of rows) expect(Object.keys(m)).toEqual(expect.arrayContaining(['strength', 'beta', 'model_factor']));

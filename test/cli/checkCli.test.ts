@@ -9,7 +9,7 @@ describe('stanchion check (end to end)', () => {
   it.each(scenarios)('%s: contract JSON with finite numbers', (file) => {
     const r = runCli(['check', join('scenarios', file), '--json']);
     expect(r.status, r.stderr).toBe(0);
-    const doc = JSON.parse(r.stdout); // exactly one JSON document on stdout (CONTRACT.md §1)
+    const doc = JSON.parse(r.stdout); // exactly one JSON document on stdout (docs/json-output.md)
     const c = doc.check;
     for (const key of ['critical_load', 'effective_length_factor', 'capacity', 'demand', 'utilization']) {
       expect(Number.isFinite(c[key]), key).toBe(true);
@@ -49,8 +49,8 @@ strength: first-yield
     const EI = 200e9 * 20e-6;
     expect(c.critical_load / ((4 * Math.PI ** 2 * EI) / 16)).toBeCloseTo(1, 9);
     expect(c.effective_length_factor).toBeCloseTo(0.5, 9);
-    expect(c.restraint_ratio).toEqual({ bottom: null, top: null }); // CONTRACT.md §4: fixed → null
-    // source: shared references §4 worked example 3 (Perry–Robertson with c = 1/2, Ayrton & Perry 1886): 1300.13 kN
+    expect(c.restraint_ratio).toEqual({ bottom: null, top: null }); // docs/json-output.md: fixed → null
+    // source: docs/verification.md §M4 worked example 3 (Perry–Robertson with c = 1/2, Ayrton & Perry 1886): 1300.13 kN
     expect(c.capacity / 1e3).toBeCloseTo(1300.13, 1);
   });
 

@@ -130,13 +130,15 @@ describe('stanchion sweep', () => {
   });
 
   it('a bad --vary exits 2 with one line on stderr naming --vary, and writes nothing', () => {
-    for (const bad of ['column.lenght=4 m:7 m:3', 'column.length=4 m:7 mm:3']) {
+    for (const bad of ['column.lenght=4 m:7 m:3', 'column.length=4 m:7 mm:3', 'loads.dead.mean=300 kN,abc', 'loads.dead.mean=300 MPa:400 MPa:3']) {
       const r = runCli(['sweep', scenario, '--vary', bad, '--out', join(dir, 'bad')]);
       expect(r.status).toBe(2);
       expect(r.stdout).toBe('');
       const lines = r.stderr.trim().split('\n');
       expect(lines).toHaveLength(1);
       expect(lines[0]).toContain('--vary');
+      // the value came from the command line, not from a line of the scenario file
+      expect(lines[0]).not.toMatch(/\(line \d+\)/);
     }
     expect(existsSync(join(dir, 'bad'))).toBe(false);
   });
@@ -160,7 +162,7 @@ describe('stanchion sweep', () => {
     expect(doc.varied).toEqual(['loads.dead.mean']);
     expect(doc.methods).toEqual(['form']);
     const demand = doc.results.map((c: { result: { demand: number } }) => c.result.demand);
-    // demand = dead + imposed means (common practice: CONTRACT §3, S is the sum of the loads)
+    // demand = dead + imposed means (common practice: docs/mechanics.md, S is the sum of the loads)
     expect(demand[0]).toBeCloseTo(300e3 + 150e3, 6);
     expect(demand[2]).toBeCloseTo(400e3 + 150e3, 6);
   });

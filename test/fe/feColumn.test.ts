@@ -8,7 +8,7 @@ const GRID = [0, 0.1, 0.5, 1, 2, 5, 10, 50, 1e3, Infinity];
 
 describe('finite-element column vs exact characteristic equation', () => {
   // source: Hermite-cubic elements with consistent geometric stiffness, Przemieniecki 1968 (from memory); the exact roots are checked
-  // against Timoshenko & Gere 1961 ch. 2 / shared references §2 [V] in test/mechanics. Here: two independent methods agree ≤ 1e-5.
+  // against Timoshenko & Gere 1961 ch. 2 / docs/verification.md §M2 [V] in test/mechanics. Here: two independent methods agree ≤ 1e-5.
   it.each(['braced', 'sway'] as Frame[])('%s: lowest two modes over a 10 × 10 grid of R', (frame) => {
     let worst = 0;
     for (const RA of GRID) {
@@ -50,7 +50,7 @@ describe('finite-element column vs exact characteristic equation', () => {
     expect(Math.log2(e1 / e2)).toBeLessThan(4.2);
   });
 
-  // source: Timoshenko & Gere 1961 ch. 2 (from memory): fixed–fixed 4π²EI/L², higher modes 8.182994, 16 × π²EI/L² (shared references §1 [V])
+  // source: Timoshenko & Gere 1961 ch. 2 (from memory): fixed–fixed 4π²EI/L², higher modes 8.182994, 16 × π²EI/L² (docs/verification.md §M1 [V])
   it('SI critical loads and higher modes', () => {
     const EI = 5e6, L = 3;
     const P = feCriticalLoads(EI, L, 'braced', { bottom: Infinity, top: Infinity }, { elements: 24, count: 3 });

@@ -8,7 +8,7 @@ const K = (frame: Frame, r: EndRestraint, mode = 1): number => criticalLoad(1, 1
 const phi = (frame: Frame, r: EndRestraint, mode = 1): number => criticalPhi(frame, r, mode);
 
 describe('ideal end conditions', () => {
-  // source: Timoshenko & Gere, Theory of Elastic Stability, 2nd ed. 1961, ch. 2 (from memory); Chen & Lui 1987 §2.2; values verified in shared references/mechanics.md §1 [V]
+  // source: Timoshenko & Gere, Theory of Elastic Stability, 2nd ed. 1961, ch. 2 (from memory); Chen & Lui 1987 §2.2; values verified in docs/verification.md §M1 [V]
   it('gives the classical effective length factors', () => {
     expect(rel(K('braced', { bottom: 0, top: 0 }), 1)).toBeLessThan(1e-12); // pinned–pinned
     expect(rel(K('braced', { bottom: Infinity, top: Infinity }), 0.5)).toBeLessThan(1e-12); // fixed–fixed
@@ -19,7 +19,7 @@ describe('ideal end conditions', () => {
     expect(rel(K('sway', { bottom: 0, top: Infinity }), 2)).toBeLessThan(1e-12); // pinned–guided
   });
 
-  // source: Timoshenko & Gere 1961 ch. 2 (from memory): Pcr = 4π²EI/L² for fixed–fixed; 20.1907 EI/L² fixed–pinned (shared references §1 [V])
+  // source: Timoshenko & Gere 1961 ch. 2 (from memory): Pcr = 4π²EI/L² for fixed–fixed; 20.1907 EI/L² fixed–pinned (docs/verification.md §M1 [V])
   it('gives Pcr in SI for a real column', () => {
     const EI = 200e9 * 25.1e-6;
     const L = 4.2;
@@ -29,7 +29,7 @@ describe('ideal end conditions', () => {
 });
 
 describe('higher modes', () => {
-  // source: Timoshenko & Gere 1961 ch. 2 (from memory); fixed–fixed factorisation 4 sin(φ/2)[sin(φ/2) − (φ/2)cos(φ/2)]; table in shared references §1 [V]
+  // source: Timoshenko & Gere 1961 ch. 2 (from memory); fixed–fixed factorisation 4 sin(φ/2)[sin(φ/2) − (φ/2)cos(φ/2)]; table in docs/verification.md §M1 [V]
   it('fixed–fixed modes 4, 8.182994, 16, 24.18720 × π²EI/L²', () => {
     const expected = [4, 8.182994, 16, 24.1872];
     expected.forEach((v, i) => {
@@ -41,7 +41,7 @@ describe('higher modes', () => {
   it('pinned–pinned modes n²', () => {
     for (let n = 1; n <= 5; n++) expect(rel(criticalLoad(1, 1, 'braced', { bottom: 0, top: 0 }, n).Pcr, n * n * PI * PI)).toBeLessThan(1e-12);
   });
-  // source: second root of tan x = x, 7.72525184 (shared references §1 [V]; classical, from memory)
+  // source: second root of tan x = x, 7.72525184 (docs/verification.md §M1 [V]; classical, from memory)
   it('second fixed–pinned mode', () => {
     expect(rel(phi('braced', { bottom: Infinity, top: 0 }, 2), 7.72525184)).toBeLessThan(1e-8);
     expect(rel(K('braced', { bottom: Infinity, top: 0 }, 2), 0.406665)).toBeLessThan(2e-6);
@@ -73,7 +73,7 @@ describe('higher modes', () => {
 });
 
 // Table rows: R, symmetric K (kL), (R, 0) K (kL), (∞, R) K (kL).
-// source: Timoshenko & Gere 1961 ch. 2 and Chen & Lui 1987 §2.3 (equations, from memory); values from shared references/mechanics.md §2 Tables 2a/2b [V, exact root and FE]
+// source: Timoshenko & Gere 1961 ch. 2 and Chen & Lui 1987 §2.3 (equations, from memory); values from docs/verification.md §M2 Tables 2a/2b [V, exact root and FE]
 const TABLE_2A: [number, number, number, number, number, number, number][] = [
   [0, 1.0, 3.141593, 1.0, 3.141593, 0.699156, 4.493409],
   [0.5, 0.915645, 3.431014, 0.956052, 3.286007, 0.675035, 4.653969],
@@ -116,12 +116,12 @@ function checkRow(frame: Frame, row: [number, number, number, number, number, nu
 describe('spring-restrained columns', () => {
   it('Table 2a (braced) all rows', () => TABLE_2A.forEach((row) => checkRow('braced', row)));
   it('Table 2b (sway) all rows', () => TABLE_2B.forEach((row) => checkRow('sway', row)));
-  // source: shared references §2 Table 2b row R = 0 [V]: flagpole K = 2 when the other end is fixed
+  // source: docs/verification.md §M2 Table 2b row R = 0 [V]: flagpole K = 2 when the other end is fixed
   it('Table 2b row R = 0', () => {
     expect(rel(K('sway', { bottom: Infinity, top: 0 }), 2)).toBeLessThan(1e-12);
   });
 
-  // source: symmetric factorisations of Δb, Δs (shared references §2 [V]; Chen & Lui 1987 §2.3, from memory)
+  // source: symmetric factorisations of Δb, Δs (docs/verification.md §M2 [V]; Chen & Lui 1987 §2.3, from memory)
   it('symmetric springs satisfy tan(φ/2) = −φ/R (braced) and φ tan(φ/2) = R (sway)', () => {
     for (const R of [0.01, 0.7, 3, 25, 400]) {
       const pb = phi('braced', { bottom: R, top: R });
@@ -130,21 +130,21 @@ describe('spring-restrained columns', () => {
       expect(rel(ps * Math.tan(ps / 2), R)).toBeLessThan(1e-10);
     }
   });
-  // source: half-column identities, shared references §2 [V] (3.673194 = 2 × 1.836597; 1.306542 = 2 × 0.6532712)
+  // source: half-column identities, docs/verification.md §M2 [V] (3.673194 = 2 × 1.836597; 1.306542 = 2 × 0.6532712)
   it('half-column identities', () => {
     for (const R of [0.5, 1, 4, 30]) {
       expect(rel(phi('braced', { bottom: R, top: R }), 2 * phi('sway', { bottom: Infinity, top: R / 2 }))).toBeLessThan(1e-12);
       expect(rel(phi('sway', { bottom: R, top: R }), 2 * phi('sway', { bottom: R / 2, top: 0 }))).toBeLessThan(1e-12);
     }
   });
-  // source: shared references §2 "Notes for the implementer" [V]: K ≈ K∞(1 + a/R), a = 2 braced symmetric, 1 braced other end fixed, 2 sway symmetric
+  // source: docs/verification.md §M2 "large but finite springs" [V]: K ≈ K∞(1 + a/R), a = 2 braced symmetric, 1 braced other end fixed, 2 sway symmetric
   it('large finite springs approach the fixed limit as K∞(1 + a/R)', () => {
     const R = 1e6;
     expect(rel(K('braced', { bottom: R, top: R }), 0.5 * (1 + 2 / R))).toBeLessThan(1e-9);
     expect(rel(K('braced', { bottom: Infinity, top: R }), 0.5 * (1 + 1 / R))).toBeLessThan(1e-9);
     expect(rel(K('sway', { bottom: R, top: R }), 1 + 2 / R)).toBeLessThan(1e-9);
   });
-  // source: shared references §2 symmetric sway "for small R, φ² ≈ 2R" [V]
+  // source: docs/verification.md §M2 symmetric sway "for small R, φ² ≈ 2R" [V]
   it('tiny springs in sway give φ² ≈ 2R (no spurious φ = π)', () => {
     for (const R of [1e-12, 1e-8, 1e-4]) {
       const p = phi('sway', { bottom: R, top: R });
@@ -165,7 +165,7 @@ describe('spring-restrained columns', () => {
 });
 
 describe('mechanism', () => {
-  // source: shared references §2 Table 2b R = 0 row and limit checks [V]: sway (0, 0) is a mechanism, K = ∞ (not the braced root φ = π)
+  // source: docs/verification.md §M2 Table 2b R = 0 row and limit checks [V]: sway (0, 0) is a mechanism, K = ∞ (not the braced root φ = π)
   it('sway with no restraint gives Pcr = 0 and K = Infinity', () => {
     const res = criticalLoad(5e6, 3, 'sway', { bottom: 0, top: 0 });
     expect(res.Pcr).toBe(0);
@@ -215,7 +215,7 @@ describe('translational spring at the top (sway)', () => {
   // common practice: with equal springs the symmetric braced mode has no end shear, so a stiff lateral spring cannot raise Pcr above it
   it('equal springs: stiff lateral spring gives the symmetric braced root', () => {
     const r = { bottom: 2, top: 2, lateral: 50 };
-    // source: shared references §2 Table 2a, R = 2 symmetric: kL = 4.057516 [V]
+    // source: docs/verification.md §M2 Table 2a, R = 2 symmetric: kL = 4.057516 [V]
     expect(rel(phi('sway', r), 4.057516)).toBeLessThan(1e-6);
     // a soft lateral spring leaves the antisymmetric sway mode lowest, between 1.720667 (T = 0, Table 2b) and 4.057516
     const soft = phi('sway', { ...r, lateral: 5 });

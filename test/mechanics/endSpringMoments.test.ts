@@ -6,7 +6,7 @@ import { modeCurvatureFactor } from '../../src/mechanics/modeShape.js';
 import type { EndRestraint, Frame } from '../../src/mechanics/types.js';
 
 const rel = (a: number, b: number): number => Math.abs(a - b) / Math.abs(b);
-// the worked-example section of the shared references §4: E = 200 000 MPa, I = 20e6 mm⁴, L = 4 m
+// the worked-example section of docs/verification.md §M4: E = 200 000 MPa, I = 20e6 mm⁴, L = 4 m
 const EI = 200e9 * 20e-6;
 const L = 4;
 const e0 = L / 1000;
@@ -31,7 +31,7 @@ describe('second-order moments of the bowed, spring-restrained column', () => {
   });
 
   // source: Timoshenko & Gere 2nd ed. §1.11–1.12 amplification applied to the fixed–fixed mode w0 = e0(1 − cos 2πx/L)/2
-  // (Pcr = 4π²EI/L², shared references §4 [V] "c = 1/2, |M| peaks equally at the ends and at mid-span"):
+  // (Pcr = 4π²EI/L², docs/verification.md §M4 [V] "c = 1/2, |M| peaks equally at the ends and at mid-span"):
   // v = a(1 − cos 2πξ)/2, M = EI v'' ⇒ |M| = a·2π²EI/L² = P e0 /(2(1 − P/Pcr)) at both ends and mid-span
   it('fixed–fixed: the fixed-end moments equal the mid-span moment, P e0/(2(1 − P/Pcr))', () => {
     const Pcr = (4 * Math.PI ** 2 * EI) / (L * L);
@@ -82,7 +82,7 @@ describe('second-order moments of the bowed, spring-restrained column', () => {
     }
   });
 
-  // source: CONTRACT §3 / shared references §4 [V]: max|M| = P e0 c/(1 − P/Pcr); at the first-yield capacity P/A + M/S = fy
+  // source: docs/mechanics.md / docs/verification.md §M4 [V]: max|M| = P e0 c/(1 − P/Pcr); at the first-yield capacity P/A + M/S = fy
   it('member maximum is the first-yield moment P e0 c/(1 − P/Pcr)', () => {
     const A = 5000e-6, S = 200e3 * 1e-9, fy = 275e6;
     for (const r of [{ bottom: 2, top: 2 }, { bottom: Infinity, top: 0 }, { bottom: 0.5, top: 7 }]) {
@@ -94,7 +94,7 @@ describe('second-order moments of the bowed, spring-restrained column', () => {
     }
   });
 
-  // source: shared references §4 [V]: fixed–pinned, max|M| in the span at x/L = 0.650422, fixed-end moment 0.976 of it
+  // source: docs/verification.md §M4 [V]: fixed–pinned, max|M| in the span at x/L = 0.650422, fixed-end moment 0.976 of it
   it('fixed–pinned: span maximum and fixed-end ratio', () => {
     const m = endSpringMoments(EI, L, 'braced', { bottom: Infinity, top: 0 }, e0, 1e5);
     expect(Math.abs(m.memberMaxAt / L - 0.650422)).toBeLessThan(1e-6);

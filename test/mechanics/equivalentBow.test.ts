@@ -42,7 +42,7 @@ describe('first yield with the equivalent bow of EN 1993-1-1 5.3.2(11)', () => {
     expect(worst).toBeLessThan(1e-9);
   });
 
-  // source: shared mechanics references §5(b) χ table [V], curve b at λ̄ = 1.0: χ = 0.5970 (pinned column, c = 1)
+  // source: docs/verification.md §M5b χ table [V], curve b at λ̄ = 1.0: χ = 0.5970 (pinned column, c = 1)
   it('gives χ = 0.5970 for curve b at λ̄ = 1 on a pinned column', () => {
     const L = Math.PI * Math.sqrt((E * I) / (A * fy)); // λ̄ = 1 when Pcr = A fy
     const r = columnCapacity('first-yield-en1993-b', state(L, 'braced', { bottom: 0, top: 0 }));

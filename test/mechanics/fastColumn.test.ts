@@ -9,7 +9,7 @@ import { ratioFromFixity } from '../../src/mechanics/restraint.js';
 import { STRENGTH_MODELS, type Frame } from '../../src/mechanics/types.js';
 
 // The oracle is the exact characteristic-equation solver, itself checked against
-// source: Timoshenko & Gere 1961 ch. 2 and shared references/mechanics.md §2 Tables 2a/2b [V] (criticalLoad.test.ts).
+// source: Timoshenko & Gere 1961 ch. 2 and docs/verification.md §M2 Tables 2a/2b [V] (criticalLoad.test.ts).
 
 const rel = (a: number, b: number): number => (a === b ? 0 : Math.abs(a - b) / Math.abs(b));
 
@@ -76,7 +76,7 @@ describe.each(['braced', 'sway'] as Frame[])('fast path, %s', (frame) => {
 });
 
 describe('fast path details', () => {
-  // source: shared references §2 Table 2b [V]: sway (0,0) is a mechanism; near it φ² ≈ R_A + R_B is reached by the exact fallback
+  // source: docs/verification.md §M2 Table 2b [V]: sway (0,0) is a mechanism; near it φ² ≈ R_A + R_B is reached by the exact fallback
   it('sway corner: mechanism and exact fallback', () => {
     expect(fastPhi('sway', 0, 0)).toBe(0);
     for (const R of [1e-12, 1e-6, 1e-4, 1.4e-3]) {

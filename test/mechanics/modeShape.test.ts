@@ -58,7 +58,7 @@ describe('boundary conditions and normalisation', () => {
 
 describe('curvature factor c', () => {
   // source: Timoshenko & Gere 1961 ch. 1, beam-columns with initial curvature (from memory) and Chen & Lui 1987 §2.6 for the
-  // amplification; c = EI max|φ''|/(Pcr max|φ|) table verified in shared references/mechanics.md §4 [V]
+  // amplification; c = EI max|φ''|/(Pcr max|φ|) table verified in docs/verification.md §M4 [V]
   const TABLE: [number, number, number, number, number | null, number | null, number][] = [
     [0, 1.0, 1.0, 0.732644, null, null, 1.0],
     [0.5, 0.873968, 0.934795, 0.686928, 0.5, 1, 0.791965],
@@ -80,7 +80,7 @@ describe('curvature factor c', () => {
       expect(Math.abs(modeCurvatureFactor('sway', { bottom: Infinity, top: R }) - sf)).toBeLessThan(1e-6);
     }
   });
-  // source: shared references §4 [V]: braced symmetric springs c = 1/(1 − cos(φ/2)); fixed–pinned c = √(1+u²)/(2π)
+  // source: docs/verification.md §M4 [V]: braced symmetric springs c = 1/(1 − cos(φ/2)); fixed–pinned c = √(1+u²)/(2π)
   it('closed forms', () => {
     for (const R of [0.2, 3, 80]) {
       const p = criticalPhi('braced', { bottom: R, top: R });
@@ -109,7 +109,7 @@ describe('inflection points and effective length', () => {
     expect(m.effectiveLengthFromInflections).toBe(true);
   });
   // source: Timoshenko & Gere 1961 ch. 2 (from memory): fixed–pinned effective length 0.699 L between the inflection and the pin;
-  // max deflection at 2 atan(u)/u = 0.601689 and max moment at (π − atan(1/u))/u = 0.650422 (shared references §4 [V])
+  // max deflection at 2 atan(u)/u = 0.601689 and max moment at (π − atan(1/u))/u = 0.650422 (docs/verification.md §M4 [V])
   it('fixed–pinned', () => {
     const m = shape('braced', { bottom: Infinity, top: 0 });
     expect(m.inflectionPoints.length).toBe(1);
@@ -154,7 +154,7 @@ describe('inflection points and effective length', () => {
     expect(s.effectiveLengthFromInflections).toBe(false);
     expect(rel(s.effectiveLength, Math.PI / s.phi)).toBeLessThan(1e-12);
   });
-  // source: shared references §1 [V]: fixed–fixed mode 2 is antisymmetric, mode 3 symmetric
+  // source: docs/verification.md §M1 [V]: fixed–fixed mode 2 is antisymmetric, mode 3 symmetric
   it('higher-mode symmetry', () => {
     const m2 = shape('braced', { bottom: Infinity, top: Infinity }, 2);
     const m3 = shape('braced', { bottom: Infinity, top: Infinity }, 3);

@@ -7,7 +7,7 @@ import {
 const rel = (a: number, b: number): number => Math.abs(a - b) / Math.abs(b);
 
 describe('restraint measures', () => {
-  // source: CONTRACT.md §2/§3: R = kL/(EI); fixity X = R/(R+3) (Monforton and Wu, 1963)
+  // source: docs/scenario-format.md: R = kL/(EI); fixity X = R/(R+3) (Monforton and Wu, 1963)
   it('converts k, R and fixity', () => {
     expect(restraintRatio(2.5e6, 4.2, 200e9 * 25.1e-6)).toBeCloseTo((2.5e6 * 4.2) / (200e9 * 25.1e-6), 12);
     expect(restraintRatio(Infinity, 4, 1e6)).toBe(Infinity);
@@ -24,7 +24,7 @@ describe('restraint measures', () => {
 
 describe('alignment-chart equivalence R = 2/G (braced), 6/G (sway)', () => {
   // source: AISC 360-16 Commentary App. 7, Eqs. C-A-7-1/C-A-7-2 and Figs. C-A-7.1/7.2 (from memory; Julian & Lawrence 1959);
-  // sample solutions of the chart equations verified in shared references/mechanics.md §3 [V] (4 decimals)
+  // sample solutions of the chart equations verified in docs/verification.md §M3 [V] (4 decimals)
   const SAMPLES: [number, number, number, number | null][] = [
     [0, 0, 0.5, 1.0],
     [0.5, 0.5, 0.6863, 1.1639],
@@ -46,13 +46,13 @@ describe('alignment-chart equivalence R = 2/G (braced), 6/G (sway)', () => {
       }
     }
   });
-  // source: shared references §3 cross-links [V]: G = 1 sway ⇔ R = 6, K = 1.317275; G = (1, 10) sway ⇔ K = 1.902969; G = 1 braced ⇔ 0.774265
+  // source: docs/verification.md §M3 cross-links [V]: G = 1 sway ⇔ R = 6, K = 1.317275; G = (1, 10) sway ⇔ K = 1.902969; G = 1 braced ⇔ 0.774265
   it('matches the 6-figure cross-links', () => {
     expect(rel(criticalLoad(1, 1, 'sway', { bottom: ratioFromAlignmentG(1, 'sway'), top: 6 }).K, 1.317275)).toBeLessThan(1e-6);
     expect(rel(criticalLoad(1, 1, 'sway', { bottom: 6, top: ratioFromAlignmentG(10, 'sway') }).K, 1.902969)).toBeLessThan(1e-6);
     expect(rel(criticalLoad(1, 1, 'braced', { bottom: ratioFromAlignmentG(1, 'braced'), top: 2 }).K, 0.774265)).toBeLessThan(1e-6);
   });
-  // source: shared references §3 [V]: G = ∞ both ends is K = 1 braced and a mechanism (K = ∞) in sway; G = 0 ⇔ fixed
+  // source: docs/verification.md §M3 [V]: G = ∞ both ends is K = 1 braced and a mechanism (K = ∞) in sway; G = 0 ⇔ fixed
   it('maps G = 0 and G = ∞ to fixed and pinned', () => {
     expect(ratioFromAlignmentG(0, 'sway')).toBe(Infinity);
     expect(ratioFromAlignmentG(Infinity, 'braced')).toBe(0);

@@ -43,11 +43,11 @@ describe('characteristic functions', () => {
       expect(Math.abs(e1(p) - direct1(p)) / direct1(p)).toBeLessThan(1e-11);
       expect(Math.abs(e2(p) - direct2(p)) / direct2(p)).toBeLessThan(1e-12);
     }
-    // source: shared references §2 [V]: Δb ≈ φ⁴(R_A R_B/12 + (R_A+R_B)/3 + 1) as φ → 0 (Taylor expansion)
+    // source: docs/verification.md §M2 [V]: Δb ≈ φ⁴(R_A R_B/12 + (R_A+R_B)/3 + 1) as φ → 0 (Taylor expansion)
     expect(e1(0)).toBe(1 / 12);
     expect(e2(0)).toBe(1 / 3);
   });
-  // source: Δb and Δs of shared references/mechanics.md §2 [V] (Chen & Lui 1987 §2.3, from memory): the normalised forms equal Δb/φ⁴ and Δs/φ (scaled by (1+R_A)(1+R_B))
+  // source: Δb and Δs of docs/verification.md §M2 [V] (Chen & Lui 1987 §2.3, from memory): the normalised forms equal Δb/φ⁴ and Δs/φ (scaled by (1+R_A)(1+R_B))
   it('normalised forms equal the published determinants', () => {
     const w = new Float64Array(WEIGHT_LENGTH);
     for (const [RA, RB] of [[0.5, 3], [10, 0], [2, 2]]) {

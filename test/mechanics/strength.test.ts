@@ -16,7 +16,7 @@ const state = (L: number, bow: number, frame: Frame, r: EndRestraint): ColumnSta
 
 describe('first yield (Perry–Robertson)', () => {
   // source: Ayrton & Perry, The Engineer 62 (1886) and Robertson, ICE Selected Engineering Paper 28 (1925), from memory;
-  // worked examples 1–6 computed two ways in shared references/mechanics.md §4 [V] (closed form at 30 digits and second-order FE)
+  // worked examples 1–6 computed two ways in docs/verification.md §M4 [V] (closed form at 30 digits and second-order FE)
   const EXAMPLES: [string, number, number, Frame, EndRestraint, number, number, number, number][] = [
     // name, L, e0, frame, r, K, Pcr kN, P kN, quoted unit of P
     ['1 pinned', 4, 0.004, 'braced', { bottom: 0, top: 0 }, 1, 2467.4, 1157.1066, 1e-4],
@@ -32,10 +32,10 @@ describe('first yield (Perry–Robertson)', () => {
     nearQuoted(res.K, K, 1e-6);
     nearQuoted(res.Pcr / 1e3, PcrkN, 1e-2);
     nearQuoted(res.capacity / 1e3, PkN, unit);
-    // the sign of the bow does not matter (CONTRACT §3)
+    // the sign of the bow does not matter (docs/mechanics.md)
     expect(columnCapacity('first-yield', state(L, -e0, frame, r)).capacity).toBe(res.capacity);
   });
-  // source: shared references §4 [V], example 1 intermediates: σE = 493.480 MPa, η = 0.1, χ = 0.841532
+  // source: docs/verification.md §M4 [V], example 1 intermediates: σE = 493.480 MPa, η = 0.1, χ = 0.841532
   it('example 1 intermediates', () => {
     const P = firstYieldCapacity(base.A, base.S, base.fy, 2467.401e3, 0.004, 1);
     nearQuoted(P / (base.A * base.fy), 0.841532, 1e-6);
@@ -50,7 +50,7 @@ describe('first yield (Perry–Robertson)', () => {
 
 describe('EN 1993-1-1 §6.3.1.2 buckling curves', () => {
   // source: EN 1993-1-1:2005 §6.3.1.2, Eq. 6.49 and Table 6.1 (numbers from memory; α values seen in secondary pages);
-  // χ values computed in shared references/mechanics.md §5(b) [V]
+  // χ values computed in docs/verification.md §M5b [V]
   const CHI: [EnCurve, number, number, number, number, number][] = [
     ['a0', 0.13, 0.9513, 0.7253, 0.3953, 0.2323],
     ['a', 0.21, 0.9243, 0.6656, 0.3724, 0.2229],
@@ -72,25 +72,25 @@ describe('EN 1993-1-1 §6.3.1.2 buckling curves', () => {
     const L = Math.PI * Math.sqrt((base.E * base.I) / (base.A * base.fy));
     const res = columnCapacity('en1993-b', state(L, 0.01, 'braced', { bottom: 0, top: 0 }));
     nearQuoted(res.capacity / (base.A * base.fy), 0.597, 1e-4);
-    // the code curves ignore the bow (CONTRACT §3)
+    // the code curves ignore the bow (docs/mechanics.md)
     expect(columnCapacity('en1993-b', state(L, 0, 'braced', { bottom: 0, top: 0 })).capacity).toBe(res.capacity);
   });
 });
 
 describe('AISC 360-16 §E3', () => {
-  // source: AISC 360-16 §E3, Eqs. E3-2/E3-3 (numbers from memory); Fcr/Fy values computed in shared references/mechanics.md §5(a) [V]
+  // source: AISC 360-16 §E3, Eqs. E3-2/E3-3 (numbers from memory); Fcr/Fy values computed in docs/verification.md §M5a [V]
   it('Fcr/Fy table', () => {
     const FCR: [number, number][] = [[0.5, 0.900651], [1.0, 0.658], [1.5, 0.389949], [2.0, 0.21925]];
     for (const [lc, v] of FCR) nearQuoted(aiscCriticalStress(1, 1 / (lc * lc)), v, 1e-6);
   });
-  // source: shared references §5(a) [V]: at Fy/Fe = 2.25 the branches give 0.389949 and 0.389778 (0.044 % jump); we branch on Fy/Fe ≤ 2.25
+  // source: docs/verification.md §M5a [V]: at Fy/Fe = 2.25 the branches give 0.389949 and 0.389778 (0.044 % jump); we branch on Fy/Fe ≤ 2.25
   it('branch boundary', () => {
     expect(AISC_BRANCH_LIMIT).toBe(2.25);
     nearQuoted(aiscCriticalStress(1, 1 / 2.25), 0.389949, 1e-6);
     nearQuoted(aiscCriticalStress(1, 1 / 2.2500001), 0.389778, 1e-6);
   });
   // source: AISC Manual table "Available Critical Stress for Compression Members", Fy = 50 ksi (from memory);
-  // Fcr values computed in shared references/mechanics.md §5(a) [V]
+  // Fcr values computed in docs/verification.md §M5a [V]
   it('ksi example, Fy = 50 ksi, E = 29 000 ksi', () => {
     const ROWS: [number, number, number][] = [[40, 44.48, 40.0], [80, 31.31, 28.2], [100, 24.07, 21.7], [120, 17.43, 15.7], [150, 11.16, 10.0]];
     for (const [slenderness, fcr, phiFcr] of ROWS) {
@@ -103,7 +103,7 @@ describe('AISC 360-16 §E3', () => {
 });
 
 describe('columnCapacity', () => {
-  // source: shared references §2 Table 2b R = 0 [V]: a sway column with no restraint is a mechanism — every model gives 0
+  // source: docs/verification.md §M2 Table 2b R = 0 [V]: a sway column with no restraint is a mechanism — every model gives 0
   it('mechanism gives zero capacity for every model', () => {
     for (const model of STRENGTH_MODELS) {
       const res = columnCapacity(model, state(4, 0.004, 'sway', { bottom: 0, top: 0 }));

@@ -43,22 +43,22 @@ function simpson(f: (x: number) => number, a: number, b: number, n = 4000): numb
 
 describe('parameters fitted from the moments', () => {
   it('reproduce the reference parameter values', () => {
-    // source: references/reliability.md §1b: mean 200 V 0.10 → lambda 5.29334, zeta 0.0997513; mean 100 V 0.25 → 4.57486, 0.246221
+    // source: docs/verification.md §R1b: mean 200 V 0.10 → lambda 5.29334, zeta 0.0997513; mean 100 V 0.25 → 4.57486, 0.246221
     const r = makeDistribution({ dist: 'lognormal', mean: 200, cov: 0.1 });
     expect(r.params.lambda).toBeCloseTo(5.29334, 5);
     expect(r.params.zeta).toBeCloseTo(0.0997513, 7);
     const s = makeDistribution({ dist: 'lognormal', mean: 100, cov: 0.25 });
     expect(s.params.lambda).toBeCloseTo(4.57486, 5);
     expect(s.params.zeta).toBeCloseTo(0.246221, 6);
-    // source: references/reliability.md §1e: theta LN(1.0, 0.05) → lamT −0.00124844, zetaT 0.0499688
+    // source: docs/verification.md §R1e: theta LN(1.0, 0.05) → lamT −0.00124844, zetaT 0.0499688
     const t = makeDistribution({ dist: 'lognormal', mean: 1, cov: 0.05 });
     expect(relErr(t.params.lambda, -0.00124844)).toBeLessThan(1e-5);
     expect(t.params.zeta).toBeCloseTo(0.0499688, 7);
-    // source: references/reliability.md §2b (Der Kiureghian 2005 data): Gumbel(2500, 0.2) → a 2274.97, b 389.848
+    // source: docs/verification.md §R2b (Der Kiureghian 2005 data): Gumbel(2500, 0.2) → a 2274.97, b 389.848
     const g = makeDistribution({ dist: 'gumbel', mean: 2500, cov: 0.2 });
     expect(g.params.loc).toBeCloseTo(2274.97, 2);
     expect(g.params.scale).toBeCloseTo(389.848, 3);
-    // source: references/reliability.md §2b: Weibull(40, 0.1) → k 12.1534, scale 41.7215
+    // source: docs/verification.md §R2b: Weibull(40, 0.1) → k 12.1534, scale 41.7215
     const w = makeDistribution({ dist: 'weibull', mean: 40, cov: 0.1 });
     expect(w.params.shape).toBeCloseTo(12.1534, 4);
     expect(w.params.scale).toBeCloseTo(41.7215, 4);

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { DistributionError, type DistSpec } from '../../src/probability/distribution.js';
 import { makeDistribution } from '../../src/probability/makeDistribution.js';
 
-// Validation rules follow CONTRACT.md §2 (which fields each distribution takes); common practice for the limits.
+// Validation rules follow docs/scenario-format.md (which fields each distribution takes); common practice for the limits.
 function rejects(spec: DistSpec, pattern: RegExp): void {
   let caught: unknown;
   try {

@@ -25,21 +25,21 @@ function rejectsWith(fn: () => unknown, pattern: RegExp): void {
 }
 
 describe('equivalentCorrelation (Nataf rho0)', () => {
-  it('reproduces the rho0 table of references/reliability.md §1h', () => {
-    // source: references/reliability.md §1h (64×64 Gauss–Hermite, checked against closed forms)
+  it('reproduces the rho0 table of docs/verification.md §R1h', () => {
+    // source: docs/verification.md §R1h (64×64 Gauss–Hermite, checked against closed forms)
     expect(equivalentCorrelation(normal, gumbel2, 0.3)).toBeCloseTo(0.309449, 6);
     expect(equivalentCorrelation(normal, gumbel2, 0.8)).toBeCloseTo(0.825198, 6);
     expect(equivalentCorrelation(normal, ln02, 0.5)).toBeCloseTo(0.504943, 6);
     expect(equivalentCorrelation(ln10, ln25, 0.5)).toBeCloseTo(0.505786, 6);
     expect(equivalentCorrelation(gumbel2, gumbel3, 0.5)).toBeCloseTo(0.515428, 6);
     expect(equivalentCorrelation(normal, weibull10, 0.5)).toBeCloseTo(0.506978, 6);
-    // source: references/reliability.md §1f4: LN–LN rho −0.5 → rho0 −0.512148
+    // source: docs/verification.md §R1f4: LN–LN rho −0.5 → rho0 −0.512148
     expect(equivalentCorrelation(ln10, ln25, -0.5)).toBeCloseTo(-0.512148, 6);
   });
 
   it('matches the exact lognormal formulas to 1e-10', () => {
     // source: Liu & Der Kiureghian 1986 (from memory): LN–LN rho0 = ln(1 + rho V1 V2)/(zeta1 zeta2);
-    // N–LN rho0 = rho V/√ln(1 + V²) (references/reliability.md §1h "exact F")
+    // N–LN rho0 = rho V/√ln(1 + V²) (docs/verification.md §R1h "exact F")
     const z1 = Math.sqrt(Math.log1p(0.01));
     const z2 = Math.sqrt(Math.log1p(0.0625));
     for (const rho of [-0.7, -0.3, 0.2, 0.5, 0.9]) {
@@ -77,7 +77,7 @@ describe('equivalentCorrelation (Nataf rho0)', () => {
 });
 
 describe('natafTransform', () => {
-  // source: references/reliability.md §2b (Der Kiureghian 2005 short column): M1, M2 ~ N, P ~ Gumbel, Y ~ Weibull
+  // source: docs/verification.md §R2b (Der Kiureghian 2005 short column): M1, M2 ~ N, P ~ Gumbel, Y ~ Weibull
   const m1 = makeDistribution({ dist: 'normal', mean: 250e3, cov: 0.3 });
   const m2 = makeDistribution({ dist: 'normal', mean: 125e3, cov: 0.3 });
   const R = [
@@ -89,7 +89,7 @@ describe('natafTransform', () => {
   const transform = natafTransform([m1, m2, gumbel2, weibull10], R);
 
   it('builds the reference equivalent correlation matrix', () => {
-    // source: references/reliability.md §2b: rho0(M1,P) = rho0(M2,P) = 0.309449, rho0(M1,M2) = 0.5
+    // source: docs/verification.md §R2b: rho0(M1,P) = rho0(M2,P) = 0.309449, rho0(M1,M2) = 0.5
     expect(transform.normalCorrelation[0][2]).toBeCloseTo(0.309449, 6);
     expect(transform.normalCorrelation[1][2]).toBeCloseTo(0.309449, 6);
     expect(transform.normalCorrelation[0][1]).toBe(0.5);
@@ -111,7 +111,7 @@ describe('natafTransform', () => {
     const again = new Float64Array(4);
     transform.toPhysical(us, again);
     for (let i = 0; i < 4; i++) expect(Math.abs(again[i] - xs[i]) / xs[i]).toBeLessThan(1e-12);
-    // source: references/reliability.md §2b: FORM beta at that design point = 2.46602 (6 digits given)
+    // source: docs/verification.md §R2b: FORM beta at that design point = 2.46602 (6 digits given)
     expect(Math.hypot(...us)).toBeCloseTo(2.46602, 4);
     const inPlace = Float64Array.from(u);
     transform.toPhysical(inPlace, inPlace);

@@ -44,7 +44,7 @@ describe('normalCdf (Cody)', () => {
     // source: Abramowitz & Stegun (1964) Table 26.1, P(1) = 0.841344746068543 (digits from memory)
     expect(relErr(normalCdf(-1), 0.158655253931457)).toBeLessThan(1e-14);
     expect(relErr(normalCdf(1), 0.841344746068543)).toBeLessThan(1e-14);
-    // source: references/reliability.md §1c2: pf = Φ(−5) = 2.86652e-7 (mpmath); full digits from memory
+    // source: docs/verification.md §R1c2: pf = Φ(−5) = 2.86652e-7 (mpmath); full digits from memory
     expect(relErr(normalCdf(-5), 2.866515718791939e-7)).toBeLessThan(1e-14);
     // from memory: Φ(−10) = 7.619853024160527e-24; confirmed by mpmath 1.3.0 ncdf(−10) = 7.619853024160526066e-24 (30 digits)
     expect(relErr(normalCdf(-10), 7.619853024160526066e-24)).toBeLessThan(1e-14);
@@ -52,8 +52,8 @@ describe('normalCdf (Cody)', () => {
     expect(relErr(normalCdf(-37), 5.7255712225245768227e-300)).toBeLessThan(1e-14);
   });
 
-  it('reproduces the pf of the closed-form oracles of references/reliability.md §1', () => {
-    // source: references/reliability.md §1a (beta 3.12348 → pf 8.93645e-4), §1c1, §1c3, §1f1 (6 digits)
+  it('reproduces the pf of the closed-form oracles of docs/verification.md §R1', () => {
+    // source: docs/verification.md §R1a (beta 3.12348 → pf 8.93645e-4), §R1c1, §R1c3, §R1f1 (6 digits)
     expect(relErr(normalCdf(-3.12348), 8.93645e-4)).toBeLessThan(3e-5);
     expect(relErr(normalSf(3.5), 2.32629e-4)).toBeLessThan(3e-6);
     expect(relErr(normalSf(4.75342), 1.0e-6)).toBeLessThan(3e-5);
@@ -61,7 +61,7 @@ describe('normalCdf (Cody)', () => {
   });
 
   it('keeps the upper tail without cancellation: β₅₀ from β₁ (Φ(β₅₀) = Φ(β₁)^50)', () => {
-    // source: references/reliability.md §5, period conversion check values (4.7 → 3.82631, 5.2 → 4.41794, 2.9 → 1.34600)
+    // source: docs/verification.md §R5, period conversion check values (4.7 → 3.82631, 5.2 → 4.41794, 2.9 → 1.34600)
     const beta50 = (beta1: number) => normalQuantileUpper(-Math.expm1(50 * Math.log1p(-normalSf(beta1))));
     expect(beta50(4.7)).toBeCloseTo(3.82631, 5);
     expect(beta50(5.2)).toBeCloseTo(4.41794, 5);
@@ -124,7 +124,7 @@ describe('normalQuantile (Wichura AS241)', () => {
     // from memory: Φ⁻¹(0.975) = 1.959963984540054, Φ⁻¹(0.05) = −1.6448536269514722
     expect(relErr(normalQuantile(0.975), 1.959963984540054)).toBeLessThan(1e-15);
     expect(relErr(normalQuantile(0.05), -1.6448536269514722)).toBeLessThan(1e-15);
-    // source: references/reliability.md §1c3: Φ⁻¹(1e-6) = −4.75342
+    // source: docs/verification.md §R1c3: Φ⁻¹(1e-6) = −4.75342
     expect(normalQuantile(1e-6)).toBeCloseTo(-4.75342, 5);
     expect(normalQuantileUpper(1e-6)).toBeCloseTo(4.75342, 5);
     expect(normalQuantile(0.5)).toBe(0);

@@ -21,9 +21,9 @@ const R_B = { dist: 'lognormal', mean: 200, cov: 0.1 } as const;
 const S_B = { dist: 'lognormal', mean: 100, cov: 0.25 } as const;
 
 describe('FORM on closed-form oracles', () => {
-  it('§1a R − S normal: β, pf, design point, α', () => {
+  it('§R1a R − S normal: β, pf, design point, α', () => {
     const r = form(resistanceMinusLoad({ r: R_A, s: S_A }));
-    // source: Cornell 1969; Hasofer & Lind 1974 — references/reliability.md §1a
+    // source: Cornell 1969; Hasofer & Lind 1974 — docs/verification.md §R1a
     expectDigits(r.beta, 3.12348);
     expectDigits(r.pf, 8.93645e-4);
     expectDigits(r.designPointX[0], 160.976);
@@ -41,8 +41,8 @@ describe('FORM on closed-form oracles', () => {
     expect(r.calls).toBeGreaterThan(0);
   });
 
-  it('§1b R − S lognormal: β 2.70453, design point and α', () => {
-    // source: Melchers 1999 ch. 3 lognormal safety margin (from memory) — references/reliability.md §1b
+  it('§R1b R − S lognormal: β 2.70453, design point and α', () => {
+    // source: Melchers 1999 ch. 3 lognormal safety margin (from memory) — docs/verification.md §R1b
     const r = form(resistanceMinusLoad({ r: R_B, s: S_B }));
     expectDigits(r.beta, 2.70453);
     expectDigits(r.pf, 3.42004e-3);
@@ -51,8 +51,8 @@ describe('FORM on closed-form oracles', () => {
     expectDigits(r.alpha[1], 0.926828);
   });
 
-  it('§1e R·θ − S lognormal: β 2.65330', () => {
-    // source: Nowak & Collins 2000 ch. 5 (from memory) — references/reliability.md §1e
+  it('§R1e R·θ − S lognormal: β 2.65330', () => {
+    // source: Nowak & Collins 2000 ch. 5 (from memory) — docs/verification.md §R1e
     const r = form(resistanceModelLoad({ r: R_B, theta: { dist: 'lognormal', mean: 1, cov: 0.05 }, s: S_B }));
     expectDigits(r.beta, 2.6533);
     expectDigits(r.designPointX[0], 180.49);
@@ -63,20 +63,20 @@ describe('FORM on closed-form oracles', () => {
     expectDigits(r.alpha[2], 0.910856);
   });
 
-  it('§1f correlated normal pairs: β 4.36436 (ρ = +0.5) and 2.56074 (ρ = −0.5)', () => {
-    // source: Hasofer & Lind 1974 second-moment theory — references/reliability.md §1f1, §1f2
+  it('§R1f correlated normal pairs: β 4.36436 (ρ = +0.5) and 2.56074 (ρ = −0.5)', () => {
+    // source: Hasofer & Lind 1974 second-moment theory — docs/verification.md §R1f1, §R1f2
     expectDigits(form(resistanceMinusLoad({ r: R_A, s: S_A, rho: 0.5 })).beta, 4.36436);
     expectDigits(form(resistanceMinusLoad({ r: R_A, s: S_A, rho: -0.5 })).beta, 2.56074);
   });
 
-  it('§1f3/f4 correlated lognormals through Nataf: β 3.35983 and 2.32214', () => {
-    // source: Liu & Der Kiureghian 1986 (from memory) — references/reliability.md §1f3, §1f4
+  it('§R1f3/f4 correlated lognormals through Nataf: β 3.35983 and 2.32214', () => {
+    // source: Liu & Der Kiureghian 1986 (from memory) — docs/verification.md §R1f3, §R1f4
     expectDigits(form(resistanceMinusLoad({ r: R_B, s: S_B, rho: 0.5 })).beta, 3.35983);
     expectDigits(form(resistanceMinusLoad({ r: R_B, s: S_B, rho: -0.5 })).beta, 2.32214);
   });
 
-  it('§1g Euler column with uncertain K: β 3.40057, design point and α', () => {
-    // source: references/reliability.md §1g (exact: ln(Pcr/P) linear in the log-variables)
+  it('§R1g Euler column with uncertain K: β 3.40057, design point and α', () => {
+    // source: docs/verification.md §R1g (exact: ln(Pcr/P) linear in the log-variables)
     const r = form(eulerColumn({ length: 5 }));
     expectDigits(r.beta, 3.40057);
     expectDigits(r.pf, 3.36223e-4);
@@ -88,8 +88,8 @@ describe('FORM on closed-form oracles', () => {
     expectDigits(r.designPointX[3], 992.63e3);
   });
 
-  it('§1c linear in 100 normals: β = 3.5, u*_i = 0.35', () => {
-    // source: references/reliability.md §1c1
+  it('§R1c linear in 100 normals: β = 3.5, u*_i = 0.35', () => {
+    // source: docs/verification.md §R1c1
     const r = form(linearSum({ n: 100, beta: 3.5 }), { restarts: 0 });
     expect(r.beta).toBeCloseTo(3.5, 7);
     for (const u of r.designPointU) expect(u).toBeCloseTo(0.35, 7);
@@ -97,25 +97,25 @@ describe('FORM on closed-form oracles', () => {
 });
 
 describe('FORM on textbook examples', () => {
-  it('§2a Haldar & Mahadevan steel beam: 4.261 (normals), 5.151 (lognormal Fy)', () => {
+  it('§R2a Haldar & Mahadevan steel beam: 4.261 (normals), 5.151 (lognormal Fy)', () => {
     const z = { dist: 'normal', mean: 54, cov: 0.05 } as const;
     const normal = form(steelBeam({ fy: { dist: 'normal', mean: 38, cov: 0.1 }, z }));
-    // from memory: Haldar & Mahadevan 2000 ch. 7, published 4.261; computed 4.26135 (references §2a)
+    // from memory: Haldar & Mahadevan 2000 ch. 7, published 4.261; computed 4.26135 (docs/verification.md §R2a)
     expectDigits(normal.beta, 4.261, 4);
     expectDigits(normal.beta, 4.26135);
     expectDigits(normal.designPointX[0], 22.5655);
     expectDigits(normal.designPointX[1], 50.5195);
     const logFy = form(steelBeam({ fy: { dist: 'lognormal', mean: 38, cov: 0.1 }, z }));
-    // from memory: Haldar & Mahadevan 2000 ch. 7, published 5.151; computed 5.15079 (references §2a)
+    // from memory: Haldar & Mahadevan 2000 ch. 7, published 5.151; computed 5.15079 (docs/verification.md §R2a)
     expectDigits(logFy.beta, 5.151, 4);
     expectDigits(logFy.beta, 5.15079);
     expectDigits(logFy.alpha[0], -0.866876);
     expectDigits(logFy.alpha[1], -0.498524);
   });
 
-  it('§2b Der Kiureghian 2005 short column: β 2.46602, design point, α, γ', () => {
+  it('§R2b Der Kiureghian 2005 short column: β 2.46602, design point, α, γ', () => {
     const r = form(shortColumn({}));
-    // from memory: Der Kiureghian 2005 ch. 14 publishes 2.47; computed 2.46602 (references §2b)
+    // from memory: Der Kiureghian 2005 ch. 14 publishes 2.47; computed 2.46602 (docs/verification.md §R2b)
     expectDigits(r.beta, 2.46602);
     expectDigits(r.pf, 6.83116e-3);
     [340.726e3, 170.363e3, 3222.41e3, 31.7692e6].forEach((x, i) => expectDigits(r.designPointX[i], x));
@@ -125,8 +125,8 @@ describe('FORM on textbook examples', () => {
     expect(r.gamma[0]).toBeCloseTo(r.gamma[1], 7); // M1/S1 and M2/S2 are exchangeable
   });
 
-  it('§2b permuting the variables leaves β and γ unchanged, but not α', () => {
-    // source: Der Kiureghian 2005 ch. 14 (γ is order-free; from memory) — references §2b
+  it('§R2b permuting the variables leaves β and γ unchanged, but not α', () => {
+    // source: Der Kiureghian 2005 ch. 14 (γ is order-free; from memory) — docs/verification.md §R2b
     const base = form(shortColumn({}));
     const order = [3, 2, 1, 0];
     const permuted = form(shortColumn({ order }));
@@ -192,7 +192,7 @@ describe('FORM special cases', () => {
   });
 
   it('forward differences reach the same β', () => {
-    // source: references/reliability.md §1b
+    // source: docs/verification.md §R1b
     const r = form(resistanceMinusLoad({ r: R_B, s: S_B }), { differences: 'forward' });
     expect(r.beta).toBeCloseTo(2.70453, 4);
   });

@@ -65,7 +65,7 @@ describe('FORM self-check', () => {
     const problem = linearSum({ n: 4, beta: 3.5 });
     const f = form(problem);
     const c = checkForm(problem, f, { seed: 9 });
-    // source: references/reliability.md §1c exact pf = Φ(−β) for the linear sum
+    // source: docs/verification.md §R1c exact pf = Φ(−β) for the linear sum
     const exact = normalSf(3.5);
     expect(c.method).toBe('importance sampling');
     expect(c.samples).toBe(FORM_CHECK_SAMPLES);
@@ -79,7 +79,7 @@ describe('FORM self-check', () => {
   it('is crude Monte Carlo when pf is large, within 4 binomial standard errors', () => {
     const problem = linearSum({ n: 2, beta: 1 });
     const c = checkForm(problem, form(problem), { seed: 2, samples: 4000 });
-    // source: references/reliability.md §1c exact pf; common practice: binomial s.e. √(p(1 − p)/N)
+    // source: docs/verification.md §R1c exact pf; common practice: binomial s.e. √(p(1 − p)/N)
     const p = normalSf(1);
     expect(c.method).toBe('Monte Carlo');
     expect(Math.abs(c.pf - p)).toBeLessThanOrEqual(4 * Math.sqrt((p * (1 - p)) / 4000));

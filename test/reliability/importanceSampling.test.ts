@@ -5,7 +5,7 @@ import { linearSum, paraboloid, shortColumn, testProblemRecipe } from '../../src
 import { normalSf } from '../../src/probability/normal.js';
 
 /**
- * Exact CoV of IS at the design point for the linear limit state (references/reliability.md §1i):
+ * Exact CoV of IS at the design point for the linear limit state (docs/verification.md §R1i):
  * CoV = sqrt((exp(β²) Φ(−2β)/Φ(−β)² − 1)/N).
  */
 function exactIsCov(beta: number, n: number): number {
@@ -18,7 +18,7 @@ describe('importance sampling at the design point', () => {
       const problem = linearSum({ n: 100, beta });
       const f = form(problem, { restarts: 0 });
       const r = await importanceSamplingAtDesignPoint(problem, f, { samples: 2000, seed: 21 });
-      // source: references/reliability.md §1c exact pf and §1i exact IS variance (own derivation there)
+      // source: docs/verification.md §R1c exact pf and §R1i exact IS variance (own derivation there)
       const cov = exactIsCov(beta, 2000);
       expect(Math.abs(r.pf / pf - 1)).toBeLessThanOrEqual(4 * cov);
       // the sample CoV estimates the exact one: its own relative error is about 5 % here
@@ -29,11 +29,11 @@ describe('importance sampling at the design point', () => {
     });
   }
 
-  it('§1i stops at the target CoV after about the predicted number of samples', async () => {
+  it('§R1i stops at the target CoV after about the predicted number of samples', async () => {
     const problem = linearSum({ n: 100, beta: 5 });
     const f = form(problem, { restarts: 0 });
     const r = await importanceSamplingAtDesignPoint(problem, f, { samples: 100_000, seed: 8, targetCov: 0.1 });
-    // source: references/reliability.md §1i: N for 10 % CoV at β = 5 is 568
+    // source: docs/verification.md §R1i: N for 10 % CoV at β = 5 is 568
     expect(r.stoppedEarly).toBe(true);
     expect(r.stopReason).toBe('target-cov');
     expect(r.cov).toBeLessThanOrEqual(0.1);
@@ -42,18 +42,18 @@ describe('importance sampling at the design point', () => {
     expect(Math.abs(r.pf / 2.86652e-7 - 1)).toBeLessThanOrEqual(4 * exactIsCov(5, r.samples));
   });
 
-  it('§1d paraboloid n = 10, κ = 0.1: within 4 reported standard errors of the exact 3.53069e-4', async () => {
+  it('§R1d paraboloid n = 10, κ = 0.1: within 4 reported standard errors of the exact 3.53069e-4', async () => {
     const problem = paraboloid({ n: 10, beta: 3, kappa: 0.1 });
     const r = await importanceSamplingAtDesignPoint(problem, form(problem), { samples: 20_000, seed: 3 });
-    // source: references/reliability.md §1d exact column
+    // source: docs/verification.md §R1d exact column
     expect(r.cov).toBeLessThan(0.05);
     expect(Math.abs(r.pf / 3.53069e-4 - 1)).toBeLessThanOrEqual(4 * r.cov);
   });
 
-  it('§2b short column: agrees with the 4e7-sample MC of the reference', async () => {
+  it('§R2b short column: agrees with the 4e7-sample MC of the reference', async () => {
     const problem = shortColumn({});
     const r = await importanceSamplingAtDesignPoint(problem, form(problem), { samples: 20_000, seed: 9 });
-    // source: references/reliability.md §2b, crude MC 4e7 samples: 9.2762e-3 ± 0.0152e-3
+    // source: docs/verification.md §R2b, crude MC 4e7 samples: 9.2762e-3 ± 0.0152e-3
     const sigma = Math.hypot(r.cov * r.pf, 0.0152e-3);
     expect(Math.abs(r.pf - 9.2762e-3)).toBeLessThanOrEqual(4 * sigma);
   });

@@ -21,9 +21,9 @@ function numbers(r: McResult): unknown {
 }
 
 describe('crude Monte Carlo', () => {
-  it('§1a R − S: pf within 4σ of 8.93645e-4; CoV, β and Wilson interval consistent', async () => {
+  it('§R1a R − S: pf within 4σ of 8.93645e-4; CoV, β and Wilson interval consistent', async () => {
     const r = await monteCarlo(resistanceMinusLoad(A_ARGS), { samples: 200_000, seed: 1 });
-    // source: references/reliability.md §1a exact pf; CoV formula §6 (binomial variance)
+    // source: docs/verification.md §R1a exact pf; CoV formula §R6 (binomial variance)
     expectWithin4Sigma(r, 8.93645e-4);
     expect(r.samples).toBe(200_000);
     expect(r.calls).toBe(200_000);
@@ -36,9 +36,9 @@ describe('crude Monte Carlo', () => {
     expect(r.stoppedEarly).toBe(false);
   });
 
-  it('§1d paraboloid n = 10, κ = 0.1: pf within 4σ of the exact 3.53069e-4', async () => {
+  it('§R1d paraboloid n = 10, κ = 0.1: pf within 4σ of the exact 3.53069e-4', async () => {
     const r = await monteCarlo(paraboloid({ n: 10, beta: 3, kappa: 0.1 }), { samples: 1_000_000, seed: 7 });
-    // source: references/reliability.md §1d exact column (two quadratures)
+    // source: docs/verification.md §R1d exact column (two quadratures)
     expectWithin4Sigma(r, 3.53069e-4);
   });
 
@@ -68,7 +68,7 @@ describe('crude Monte Carlo', () => {
     expect(one.workers).toBe(1);
     expect(numbers(two)).toEqual(numbers(one));
     expect(numbers(plain)).toEqual(numbers(one));
-    // source: references/reliability.md §1b exact pf 3.42004e-3
+    // source: docs/verification.md §R1b exact pf 3.42004e-3
     expectWithin4Sigma(two, 3.42004e-3);
   });
 

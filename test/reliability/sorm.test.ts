@@ -13,7 +13,7 @@ function expectDigits(actual: number | null, expected: number, digits = 6): void
   expect(Math.abs(actual! - expected), `${actual} vs ${expected}`).toBeLessThanOrEqual(0.5 * unit * 1.0001);
 }
 
-// source: references/reliability.md §1d (paraboloid; Breitung 1984, Hohenbichler & Rackwitz 1988,
+// source: docs/verification.md §R1d (paraboloid; Breitung 1984, Hohenbichler & Rackwitz 1988,
 // Tvedt 1990 formulas from memory, values computed there): n, beta, kappa, Breitung, HR, Tvedt
 const PARABOLOID: [number, number, number, number, number, number][] = [
   [2, 3, 0.1, 1.18394e-3, 1.17125e-3, 1.16878e-3],
@@ -35,7 +35,7 @@ describe('SORM formulas on the paraboloid table (exact curvatures)', () => {
   }
 
   it('n = 100, β = 2, κ = 0.05: Breitung and HR as tabulated, Tvedt breaks down (negative)', () => {
-    // source: references/reliability.md §1d, last row (Tvedt gives −2.27e-4 there)
+    // source: docs/verification.md §R1d, last row (Tvedt gives −2.27e-4 there)
     const k = new Array<number>(99).fill(0.05);
     expectDigits(breitung(2, k), 2.03257e-4);
     expectDigits(hohenbichlerRackwitz(2, k), 8.83919e-5);
@@ -60,7 +60,7 @@ describe('SORM at the FORM design point', () => {
     const s = sorm(p, f);
     expect(s.curvatures).toHaveLength(9);
     for (const k of s.curvatures) expect(k).toBeCloseTo(0.1, 6);
-    // source: references/reliability.md §1d row n = 10, β = 3, κ = 0.1
+    // source: docs/verification.md §R1d row n = 10, β = 3, κ = 0.1
     expectDigits(s.breitung, 4.1453e-4, 5);
     expectDigits(s.hohenbichlerRackwitz, 3.7623e-4, 5);
     expectDigits(s.tvedt, 3.47692e-4, 5);
@@ -75,12 +75,12 @@ describe('SORM at the FORM design point', () => {
     const p = paraboloid({ n: 2, beta: 3, kappa: -0.1 });
     const s = sorm(p, form(p));
     expect(s.curvatures[0]).toBeCloseTo(-0.1, 6);
-    // source: references/reliability.md §1d row n = 2, β = 3, κ = −0.1
+    // source: docs/verification.md §R1d row n = 2, β = 3, κ = −0.1
     expectDigits(s.tvedt, 1.63626e-3, 5);
   });
 
   it('a linear limit state has zero curvature, SORM = FORM', () => {
-    // source: references/reliability.md §1a (linear in normals)
+    // source: docs/verification.md §R1a (linear in normals)
     const p = resistanceMinusLoad({ r: { dist: 'normal', mean: 200, sd: 20 }, s: { dist: 'normal', mean: 100, sd: 25 } });
     const f = form(p);
     const s = sorm(p, f);
@@ -88,18 +88,18 @@ describe('SORM at the FORM design point', () => {
     expect(s.pf / f.pf).toBeCloseTo(1, 4);
   });
 
-  it('§2a Haldar & Mahadevan beam, both normal: Breitung 1.08623e-5, κ = −0.0294', () => {
+  it('§R2a Haldar & Mahadevan beam, both normal: Breitung 1.08623e-5, κ = −0.0294', () => {
     const p = steelBeam({ fy: { dist: 'normal', mean: 38, cov: 0.1 }, z: { dist: 'normal', mean: 54, cov: 0.05 } });
     const s = sorm(p, form(p));
-    // from memory: data of Haldar & Mahadevan 2000 ch. 7; Breitung value computed in references §2a
+    // from memory: data of Haldar & Mahadevan 2000 ch. 7; Breitung value computed in docs/verification.md §R2a
     expect(s.curvatures[0]).toBeCloseTo(-0.0294, 4);
     expectDigits(s.breitung, 1.08623e-5, 4);
   });
 
-  it('§2b short column: curvatures and the three SORM estimates', () => {
+  it('§R2b short column: curvatures and the three SORM estimates', () => {
     const p = shortColumn({});
     const s = sorm(p, form(p));
-    // from memory: Der Kiureghian 2005 data; curvatures and SORM values computed in references §2b
+    // from memory: Der Kiureghian 2005 data; curvatures and SORM values computed in docs/verification.md §R2b
     expect(s.curvatures[0]).toBeCloseTo(-0.15474, 4);
     expect(s.curvatures[1]).toBeCloseTo(-0.0398998, 4);
     expect(Math.abs(s.curvatures[2])).toBeLessThan(1e-4);

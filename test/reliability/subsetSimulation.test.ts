@@ -16,7 +16,7 @@ function repeat(problem: ReliabilityProblem, runs: number, seed: number): RunSta
 
 /**
  * Subset simulation is right-skewed and biased by O(1/N): test the mean of independent runs
- * against the exact pf with 3 standard errors of that mean (references/reliability.md §6 advice).
+ * against the exact pf with 3 standard errors of that mean (docs/verification.md §R6 advice).
  */
 function expectMeanNearExact(s: RunStats, exact: number, runs: number): void {
   const tolerance = (3 * s.runCov) / Math.sqrt(runs);
@@ -24,11 +24,11 @@ function expectMeanNearExact(s: RunStats, exact: number, runs: number): void {
 }
 
 describe('subset simulation', () => {
-  it('§1c1 linear in 100 normals, β = 3.5: mean of 50 runs near 2.32629e-4', () => {
+  it('§R1c1 linear in 100 normals, β = 3.5: mean of 50 runs near 2.32629e-4', () => {
     const s = repeat(linearSum({ n: 100, beta: 3.5 }), 50, 101);
-    // source: references/reliability.md §1c1 exact pf; Au & Beck 2001 (formulas from memory)
+    // source: docs/verification.md §R1c1 exact pf; Au & Beck 2001 (formulas from memory)
     expectMeanNearExact(s, 2.32629e-4, 50);
-    // source: references/reliability.md §6, run-to-run CoV about 0.3 at this pf (own runs there)
+    // source: docs/verification.md §R6, run-to-run CoV about 0.3 at this pf (own runs there)
     expect(s.runCov).toBeGreaterThan(0.15);
     expect(s.runCov).toBeLessThan(0.5);
     // the reported CoV (levels taken as independent) is of the size of the observed scatter
@@ -36,9 +36,9 @@ describe('subset simulation', () => {
     expect(s.meanReportedCov / s.runCov).toBeLessThan(1.5);
   });
 
-  it('§1c2 linear in 100 normals, β = 5: mean of 50 runs near 2.86652e-7, about 6 400 calls', () => {
+  it('§R1c2 linear in 100 normals, β = 5: mean of 50 runs near 2.86652e-7, about 6 400 calls', () => {
     const s = repeat(linearSum({ n: 100, beta: 5 }), 50, 202);
-    // source: references/reliability.md §1c2 exact pf and §6 (about 6 430 calls, CoV about 0.5)
+    // source: docs/verification.md §R1c2 exact pf and §R6 (about 6 430 calls, CoV about 0.5)
     expectMeanNearExact(s, 2.86652e-7, 50);
     expect(s.runCov).toBeGreaterThan(0.3);
     expect(s.runCov).toBeLessThan(0.8);
@@ -47,15 +47,15 @@ describe('subset simulation', () => {
     expect(meanCalls).toBeLessThan(7400);
   });
 
-  it('§1d paraboloid n = 2, κ = 0.1: mean of 100 runs near 1.16896e-3', () => {
+  it('§R1d paraboloid n = 2, κ = 0.1: mean of 100 runs near 1.16896e-3', () => {
     const s = repeat(paraboloid({ n: 2, beta: 3, kappa: 0.1 }), 100, 303);
-    // source: references/reliability.md §1d exact column
+    // source: docs/verification.md §R1d exact column
     expectMeanNearExact(s, 1.16896e-3, 100);
   });
 
   it('costs N + (m − 1)(1 − p0)N calls and its levels multiply to pf', () => {
     const r = subsetSimulation(linearSum({ n: 10, beta: 4.75342 }), { seed: 5 });
-    // source: references/reliability.md §6: 1000 + 5·900 = 5 500 calls for m = 6 levels at pf = 1e-6
+    // source: docs/verification.md §R6: 1000 + 5·900 = 5 500 calls for m = 6 levels at pf = 1e-6
     expect(r.calls).toBe(1000 + (r.levels.length - 1) * 900);
     expect(r.levels.length).toBeGreaterThanOrEqual(5);
     expect(r.levels.length).toBeLessThanOrEqual(7);

@@ -9,8 +9,8 @@ import { linearSum, paraboloid, resistanceMinusLoad } from '../../src/reliabilit
 import type { ReliabilityProblem } from '../../src/reliability/types.js';
 
 describe('verdict', () => {
-  it('§1a: everything agrees and the least uncertain simulation is trusted', async () => {
-    // source: references/reliability.md §1a (linear in normals: FORM is exact)
+  it('§R1a: everything agrees and the least uncertain simulation is trusted', async () => {
+    // source: docs/verification.md §R1a (linear in normals: FORM is exact)
     const p = resistanceMinusLoad({ r: { dist: 'normal', mean: 200, sd: 20 }, s: { dist: 'normal', mean: 100, sd: 25 } });
     const f = form(p);
     const s = sorm(p, f);
@@ -24,8 +24,8 @@ describe('verdict', () => {
     expect(v.comparisons.map((c) => c.method)).toEqual(['form', 'sorm', 'mc', 'is']);
   });
 
-  it('§1d n = 10: FORM is off but SORM agrees with IS', async () => {
-    // source: references/reliability.md §1d (FORM 1.35e-3, Tvedt 3.48e-4, exact 3.53e-4)
+  it('§R1d n = 10: FORM is off but SORM agrees with IS', async () => {
+    // source: docs/verification.md §R1d (FORM 1.35e-3, Tvedt 3.48e-4, exact 3.53e-4)
     const p = paraboloid({ n: 10, beta: 3, kappa: 0.1 });
     const f = form(p);
     const is = await importanceSamplingAtDesignPoint(p, f, { samples: 20_000, seed: 2 });
@@ -36,8 +36,8 @@ describe('verdict', () => {
     expect(v.reason).toMatch(/FORM differs from IS .* but SORM agrees: curvature matters/);
   });
 
-  it('§1d n = 100: FORM and SORM both fail, subset simulation is trusted', () => {
-    // source: references/reliability.md §1d last row (all asymptotic formulas fail; exact 1.07966e-5)
+  it('§R1d n = 100: FORM and SORM both fail, subset simulation is trusted', () => {
+    // source: docs/verification.md §R1d last row (all asymptotic formulas fail; exact 1.07966e-5)
     const p = paraboloid({ n: 100, beta: 2, kappa: 0.05 });
     const f = form(p, { restarts: 0 });
     const sub = subsetSimulation(p, { seed: 3, samplesPerLevel: 4000 });
@@ -49,7 +49,7 @@ describe('verdict', () => {
   });
 
   it('MC without failures is only an upper bound', async () => {
-    // source: references/reliability.md §1c2 (pf 2.87e-7, far below what 20 000 samples can see)
+    // source: docs/verification.md §R1c2 (pf 2.87e-7, far below what 20 000 samples can see)
     const p = linearSum({ n: 3, beta: 5 });
     const f = form(p);
     const mc = await monteCarlo(p, { samples: 20_000, seed: 1 });
@@ -61,7 +61,7 @@ describe('verdict', () => {
   });
 
   it('FORM and SORM alone: a large difference means curvature matters', () => {
-    // source: references/reliability.md §1d row n = 10 (FORM 1.35e-3 vs SORM 3.5e-4)
+    // source: docs/verification.md §R1d row n = 10 (FORM 1.35e-3 vs SORM 3.5e-4)
     const p = paraboloid({ n: 10, beta: 3, kappa: 0.1 });
     const f = form(p);
     const v = verdict({ form: f, sorm: sorm(p, f) });

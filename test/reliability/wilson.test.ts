@@ -8,7 +8,7 @@ function expectSixDigits(actual: number, expected: number): void {
 }
 
 describe('Wilson 95 % interval', () => {
-  // source: Wilson 1927, JASA 22:209; values from references/reliability.md §6 (computed with scipy)
+  // source: Wilson 1927, JASA 22:209; values from docs/verification.md §R6 (computed with scipy)
   const table: [number, number, number, number][] = [
     [10, 10_000, 5.43286e-4, 1.83994e-3],
     [100, 100_000, 8.22338e-4, 1.216e-3],
@@ -22,7 +22,7 @@ describe('Wilson 95 % interval', () => {
     });
   }
   it('0 failures in 1e6 gives [0, 3.84144e-6]', () => {
-    // source: references/reliability.md §6, Wilson row for 0 / 1 000 000
+    // source: docs/verification.md §R6, Wilson row for 0 / 1 000 000
     const [a, b] = wilsonInterval(0, 1_000_000);
     expect(a).toBe(0);
     expectSixDigits(b, 3.84144e-6);

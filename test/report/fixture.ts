@@ -332,7 +332,7 @@ export function demoReportInput(): ReportInput {
   };
 }
 
-/** The contract JSON (CONTRACT.md §4) the lead would pass alongside the demo input. */
+/** The contract JSON (docs/json-output.md) the lead would pass alongside the demo input. */
 export function demoResultJson(input: ReportInput): Record<string, unknown> {
   const r = input.reliability;
   return {

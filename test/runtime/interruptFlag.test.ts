@@ -223,11 +223,13 @@ describe('temporaries noted for a hard stop', () => {
   it('are held until released, and read back by path', () => {
     const registry = createTemporaryRegistry();
     useTemporaryRegistry(registry);
-    const releaseA = holdTemporary('/tmp/a/.report.partial-1');
-    const releaseB = holdTemporary('/tmp/b/.sweep.csv.1.tmp');
-    expect(heldTemporaries(registry)).toEqual(['/tmp/a/.report.partial-1', '/tmp/b/.sweep.csv.1.tmp']);
+    const a = join(tmpdir(), 'a', '.report.partial-1');
+    const b = join(tmpdir(), 'b', '.sweep.csv.1.tmp');
+    const releaseA = holdTemporary(a);
+    const releaseB = holdTemporary(b);
+    expect(heldTemporaries(registry)).toEqual([a, b]);
     releaseA();
-    expect(heldTemporaries(registry)).toEqual(['/tmp/b/.sweep.csv.1.tmp']);
+    expect(heldTemporaries(registry)).toEqual([b]);
     releaseB();
     expect(heldTemporaries(registry)).toEqual([]);
   });

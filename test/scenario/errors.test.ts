@@ -1,12 +1,12 @@
 import { describe, expect, test } from 'vitest';
 import { loadScenario } from '../../src/scenario/loadScenario.js';
-import { CONTRACT_EXAMPLE } from './contractExample.js';
+import { FORMAT_EXAMPLE } from './formatExample.js';
 import { column, inputErrorOf, loadChanged, sub, type Json } from './helpers.js';
 
-// Line numbers refer to CONTRACT_EXAMPLE (source: CONTRACT.md §2, copied verbatim).
+// Line numbers refer to FORMAT_EXAMPLE (source: docs/scenario-format.md, copied verbatim).
 const edit = (from: string, to: string) => {
-  expect(CONTRACT_EXAMPLE).toContain(from);
-  return CONTRACT_EXAMPLE.replace(from, to);
+  expect(FORMAT_EXAMPLE).toContain(from);
+  return FORMAT_EXAMPLE.replace(from, to);
 };
 const errorIn = (text: string, fileName = 'm4.yaml') => inputErrorOf(() => loadScenario(text, fileName));
 const errorAfter = (change: (o: Json) => void, fileName?: string) => inputErrorOf(() => loadChanged(change, fileName));
@@ -43,7 +43,7 @@ describe('syntax errors name the line', () => {
 describe('quantities', () => {
   test('E: 4 m names field, line and both dimensions', () => {
     const e = errorIn(edit('    E: {dist: lognormal, mean: 200 GPa, cov: 0.03}', '    E: 4 m'));
-    expect(e.describe()).toBe('column.material.E (line 11): expected a stress (e.g. 200 GPa), got a length (4 m)');
+    expect(e.describe()).toBe('column.material.E (line 11): expected a stress (e.g. 200 GPa), got a length (4 m) (units accepted for a stress: Pa, kPa, MPa, GPa, N/mm², psi, ksi)');
   });
   test('a random parameter of the wrong dimension', () => {
     const e = errorIn(edit('mean: 310 MPa', 'mean: 310 kN'));
@@ -184,7 +184,7 @@ describe('other keys', () => {
   });
   test('format version', () => {
     expect(errorIn(edit('stanchion: 1 ', 'stanchion: 2 ')).describe()).toMatch(/^stanchion \(line 1\): must be 1/);
-    expect(errorIn(CONTRACT_EXAMPLE.replace(/^stanchion: 1.*\n/, '')).field).toBe('stanchion');
+    expect(errorIn(FORMAT_EXAMPLE.replace(/^stanchion: 1.*\n/, '')).field).toBe('stanchion');
   });
   test('missing required parts name their path', () => {
     expect(errorAfter((o) => delete sub(o, 'column', 'section')['inertia']).describe()).toMatch(/^column\.section\.inertia \(line 6\): is missing/);

@@ -3,13 +3,13 @@ import { expect } from 'vitest';
 import { InputError } from '../../src/scenario/inputError.js';
 import { loadScenario } from '../../src/scenario/loadScenario.js';
 import type { Scenario } from '../../src/scenario/types.js';
-import { CONTRACT_EXAMPLE } from './contractExample.js';
+import { FORMAT_EXAMPLE } from './formatExample.js';
 
 export type Json = Record<string, unknown>;
 
 /** The contract example as a plain object, a fresh copy each call. */
 export function baseObject(): Json {
-  return parse(CONTRACT_EXAMPLE) as Json;
+  return parse(FORMAT_EXAMPLE) as Json;
 }
 
 /** Loads the contract example after `change` edited a copy of it (as YAML). */

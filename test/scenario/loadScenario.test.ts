@@ -3,13 +3,13 @@ import { describe, expect, test } from 'vitest';
 import { loadScenario } from '../../src/scenario/loadScenario.js';
 import { randomVariables, listScalars, scalarAt } from '../../src/scenario/variables.js';
 import { restraintRatio } from '../../src/scenario/restraintRatio.js';
-import { CONTRACT_EXAMPLE } from './contractExample.js';
+import { FORMAT_EXAMPLE } from './formatExample.js';
 import { baseObject, column, loadChanged, sub } from './helpers.js';
 
 const rel = (a: number, b: number) => Math.abs(a - b) / Math.abs(b);
 
-describe('the example of CONTRACT.md §2', () => {
-  const s = loadScenario(CONTRACT_EXAMPLE, 'm4.yaml');
+describe('the example of docs/scenario-format.md', () => {
+  const s = loadScenario(FORMAT_EXAMPLE, 'm4.yaml');
 
   test('SI numbers', () => {
     // common practice: SI prefixes (BIPM SI Brochure, 9th ed.): mm² = 1e-6 m², mm⁴ = 1e-12 m⁴, mm³ = 1e-9 m³
@@ -70,13 +70,13 @@ describe('the example of CONTRACT.md §2', () => {
 
   test('the SHA-256 of the text is kept', () => {
     // common practice: SHA-256 of the UTF-8 bytes, lower-case hex
-    expect(s.sha256).toBe(createHash('sha256').update(Buffer.from(CONTRACT_EXAMPLE, 'utf8')).digest('hex'));
+    expect(s.sha256).toBe(createHash('sha256').update(Buffer.from(FORMAT_EXAMPLE, 'utf8')).digest('hex'));
     expect(s.sha256).toMatch(/^[0-9a-f]{64}$/);
   });
 });
 
 describe('YAML and JSON', () => {
-  const fromYaml = loadScenario(CONTRACT_EXAMPLE, 'm4.yaml');
+  const fromYaml = loadScenario(FORMAT_EXAMPLE, 'm4.yaml');
   const json = JSON.stringify(baseObject(), null, 2);
   const strip = (x: object) => ({ ...x, sha256: '', fileName: '', format: '' });
 
@@ -87,7 +87,7 @@ describe('YAML and JSON', () => {
   });
   test('stdin is read as JSON when it starts with {, else as YAML', () => {
     expect(loadScenario(`  ${json}`, '-').format).toBe('json');
-    expect(loadScenario(CONTRACT_EXAMPLE, '-').format).toBe('yaml');
+    expect(loadScenario(FORMAT_EXAMPLE, '-').format).toBe('yaml');
     expect(strip(loadScenario(json, '-'))).toEqual(strip(fromYaml));
   });
   test('a .yml file and a flow-style YAML file read the same', () => {
@@ -156,7 +156,7 @@ describe('ends', () => {
   test('fixed, fixity and alignment_g', () => {
     const s = withEnds('fixed', { fixity: 0.5 });
     expect(s.column.ends.bottom).toEqual({ type: 'fixed' });
-    // source: CONTRACT.md §2: X = R/(R+3) ⇒ R = 3X/(1−X) = 3 for X = 0.5
+    // source: docs/scenario-format.md: X = R/(R+3) ⇒ R = 3X/(1−X) = 3 for X = 0.5
     expect(s.column.ends.top).toEqual({ type: 'ratio', from: 'fixity', input: { kind: 'fixed', value: 0.5 }, R: 3 });
     const braced = withEnds({ alignment_g: 2 }, 'pinned');
     expect(braced.column.ends.bottom).toMatchObject({ type: 'ratio', from: 'alignment_g', R: 1 }); // R = 2/G

@@ -103,14 +103,14 @@ describe('the expression whitelist', () => {
     ['L > 1 m', /comparison|operator/],
     ['L ? 1 m : 2 m', /conditional/],
     ['1:3', /range/],
-    ['1 m; 2 m', /several statements|cannot read/],
+    ['1 m; 2 m', /several statements|cannot be read/],
     ['true', /constant true/],
     ['NaN', /not a finite number/],
     ['Infinity m', /not a finite number/],
     ['1e400 m', /not a finite number/],
     ['1e200 m * 1e200 m / 1 m', /not finite/],
     [`${'('.repeat(60)}1${')'.repeat(60)} m`, /nested too deeply/],
-    ['@', /cannot read/],
+    ['@', /cannot be read as a number with a unit/],
   ];
   test.each(rejected)('%s is refused', (text, why) => {
     let error: unknown;

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { betaElasticities, normalFormElasticities, type ParamOverrides } from '../../src/sensitivity/elasticities.js';
 
 // g = R − S, R ~ N(200, 20), S ~ N(100, 25): β = (μR − μS)/√(σR² + σS²) exactly
-// (source: Cornell 1969; reliability.md §1a gives β = 3.12348, α = (−0.624695, 0.780869))
+// (source: Cornell 1969; docs/verification.md §R1a gives β = 3.12348, α = (−0.624695, 0.780869))
 const base = { R: { mean: 200, sd: 20 }, S: { mean: 100, sd: 25 } };
 
 function betaOf(overrides: ParamOverrides): number {
@@ -20,7 +20,7 @@ const exact = {
 };
 
 describe('β elasticities on g = R − S', () => {
-  it('reproduces the published β (source: reliability.md §1a, Cornell 1969)', () => {
+  it('reproduces the published β (source: docs/verification.md §R1a, Cornell 1969)', () => {
     expect(beta).toBeCloseTo(3.12348, 5);
   });
 
@@ -43,7 +43,7 @@ describe('β elasticities on g = R − S', () => {
   });
 
   it('the FORM closed form −α/σ, −β α²/σ agrees (Hohenbichler & Rackwitz 1986, from memory)', () => {
-    const alpha = [-0.624695, 0.780869]; // source: reliability.md §1a
+    const alpha = [-0.624695, 0.780869]; // source: docs/verification.md §R1a
     const out = normalFormElasticities(['R', 'S'], [base.R, base.S], beta, alpha);
     expect(out.entries[0].dBetaDMean).toBeCloseTo(exact.R.dMean, 6);
     expect(out.entries[1].dBetaDMean).toBeCloseTo(exact.S.dMean, 6);

@@ -29,12 +29,12 @@ describe('Sobol indices (Saltelli 2010 first order, Jansen 1999 total)', () => {
   const ishigami = (x: Float64Array): number => Math.sin(x[0]) + 7 * Math.sin(x[1]) ** 2 + 0.1 * x[2] ** 4 * Math.sin(x[0]);
   const ishigamiInputs = uniforms(3, -Math.PI, Math.PI);
 
-  it('Ishigami a = 7, b = 0.1 (source: Ishigami & Homma 1990; Saltelli et al. 2008, from memory; reliability.md §3a)', () => {
+  it('Ishigami a = 7, b = 0.1 (source: Ishigami & Homma 1990; Saltelli et al. 2008, from memory; docs/verification.md §R3a)', () => {
     const result = sobolIndices(['x1', 'x2', 'x3'], ishigamiInputs, ishigami, { n: 20_000, seed: 11 });
     expect(result.calls).toBe(20_000 * 5);
-    // source: Ishigami & Homma 1990; Saltelli et al. 2008 (from memory), values of reliability.md §3a
+    // source: Ishigami & Homma 1990; Saltelli et al. 2008 (from memory), values of docs/verification.md §R3a
     check(result, [0.31390519, 0.44241114, 0], [0.55758886, 0.44241114, 0.24368366], 0.1);
-    // source: reliability.md §3a, V = 13.8446 (from memory); 5 % is several standard errors at N = 20 000
+    // source: docs/verification.md §R3a, V = 13.8446 (from memory); 5 % is several standard errors at N = 20 000
     expect(Math.abs(result.variance / 13.8446 - 1)).toBeLessThan(0.05);
   });
 
@@ -46,7 +46,7 @@ describe('Sobol indices (Saltelli 2010 first order, Jansen 1999 total)', () => {
     expect(c.first[0].value).not.toBe(a.first[0].value);
   });
 
-  it("Sobol' g-function, a = (0, 1, 4.5, 9, 99, 99, 99, 99) (source: Saltelli & Sobol' 1995, from memory; reliability.md §3b)", () => {
+  it("Sobol' g-function, a = (0, 1, 4.5, 9, 99, 99, 99, 99) (source: Saltelli & Sobol' 1995, from memory; docs/verification.md §R3b)", () => {
     const a = [0, 1, 4.5, 9, 99, 99, 99, 99];
     const g = (x: Float64Array): number => {
       let p = 1;
@@ -57,11 +57,11 @@ describe('Sobol indices (Saltelli 2010 first order, Jansen 1999 total)', () => {
     const result = sobolIndices(names, uniforms(8, 0, 1), g, { n: 20_000, seed: 3 });
     const s5 = 7.16192e-5;
     const t5 = 1.04949e-4;
-    // source: Saltelli & Sobol' 1995 (from memory), values of reliability.md §3b
+    // source: Saltelli & Sobol' 1995 (from memory), values of docs/verification.md §R3b
     check(result, [0.716192, 0.179048, 0.0236758, 0.00716192, s5, s5, s5, s5], [0.787144, 0.242198, 0.0343169, 0.0104604, t5, t5, t5, t5], 0.1);
   });
 
-  it('additive log-column model: S_i = S_Ti = α² (reliability.md §3c, own construction: exact)', () => {
+  it('additive log-column model: S_i = S_Ti = α² (docs/verification.md §R3c, own construction: exact)', () => {
     const dists = [
       makeDistribution({ dist: 'lognormal', mean: 210e9, cov: 0.03 }),
       makeDistribution({ dist: 'lognormal', mean: 2.003e-5, cov: 0.04 }),
@@ -70,7 +70,7 @@ describe('Sobol indices (Saltelli 2010 first order, Jansen 1999 total)', () => {
     ];
     const lnMargin = (x: Float64Array): number => Math.log((Math.PI ** 2 * x[0] * x[1]) / (x[2] * 5) ** 2 / x[3]);
     const result = sobolIndices(['E', 'I', 'K', 'P'], dists, lnMargin, { n: 20_000, seed: 7 });
-    // source: reliability.md §3c (own construction, exact: S_i = S_Ti = α²)
+    // source: docs/verification.md §R3c (own construction, exact: S_i = S_Ti = α²)
     const exact = [0.00688177, 0.01223, 0.680856, 0.300033];
     // the first-order estimator is the noisy one here (K: 95 % interval ≈ ±0.055 at N = 20 000)
     check(result, exact, exact, 0.15);

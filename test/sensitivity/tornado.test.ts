@@ -3,7 +3,7 @@ import { makeDistribution } from '../../src/probability/makeDistribution.js';
 import { normalQuantile } from '../../src/probability/normal.js';
 import { tornado } from '../../src/sensitivity/tornado.js';
 
-// g = R − S normals of reliability.md §1a (source: Cornell 1969, second-moment theory)
+// g = R − S normals of docs/verification.md §R1a (source: Cornell 1969, second-moment theory)
 const R = makeDistribution({ dist: 'normal', mean: 200, sd: 20 });
 const S = makeDistribution({ dist: 'normal', mean: 100, sd: 25 });
 const z95 = normalQuantile(0.95);
@@ -25,7 +25,7 @@ describe('tornado', () => {
     expect(r.swing).toBeCloseTo(Math.abs(r.high - r.low), 15);
   });
 
-  it('orders the log-column oracle K > P > I > E (reliability.md §3c, own construction)', () => {
+  it('orders the log-column oracle K > P > I > E (docs/verification.md §R3c, own construction)', () => {
     const names = ['E', 'I', 'K', 'P'];
     const dists = [
       makeDistribution({ dist: 'lognormal', mean: 210e9, cov: 0.03 }),
@@ -34,7 +34,7 @@ describe('tornado', () => {
       makeDistribution({ dist: 'lognormal', mean: 700e3, cov: 0.2 }),
     ];
     const lnMargin = (x: Float64Array): number => Math.log((Math.PI ** 2 * x[0] * x[1]) / (x[2] * 5) ** 2 / x[3]);
-    // source: reliability.md §3c ordering check (own construction)
+    // source: docs/verification.md §R3c ordering check (own construction)
     expect(tornado(names, dists, lnMargin).map((e) => e.variable)).toEqual(['K', 'P', 'I', 'E']);
   });
 

@@ -1,4 +1,6 @@
 import { describe, expect, it } from 'vitest';
+import { tmpdir } from 'node:os';
+import { join, resolve } from 'node:path';
 import { InputError } from '../../src/scenario/inputError.js';
 import { buildCaseTable, iterateCases } from '../../src/studies/sweepDesign.js';
 import type { CaseTable } from '../../src/studies/sweepTypes.js';
@@ -75,8 +77,10 @@ vary:
   - {path: loads.dead.mean, values: [400 kN, 420 kN]}
   - "model_factor=0.9:1.1:2"
 `;
-    const def = parseSweepFile(text, '/tmp/sweeps/s.yaml');
-    expect(def.scenario).toBe('/tmp/m4.yaml');
+    // the scenario is found beside the sweep file, whatever folder that is
+    const folder = join(tmpdir(), 'sweeps');
+    const def = parseSweepFile(text, join(folder, 's.yaml'));
+    expect(def.scenario).toBe(resolve(folder, '../m4.yaml'));
     expect(def.methods).toEqual(['form']);
     const table = buildCaseTable(def);
     expect(table.count).toBe(12);

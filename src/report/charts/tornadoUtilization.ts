@@ -1,4 +1,4 @@
-/** Tornado of the utilization (CONTRACT §4 `tornado`): which variable moves the check most. */
+/** Tornado of the utilization (docs/json-output.md `tornado`): which variable moves the check most. */
 import type { ReportInput } from '../reportInput.js';
 import { formatNumber } from '../displayUnits.js';
 import type { ChartSpec } from './chartSpec.js';

@@ -1,5 +1,5 @@
-/** The scenario file of CONTRACT.md §2, verbatim (comments included). */
-export const CONTRACT_EXAMPLE = `stanchion: 1                      # format version
+/** The scenario file of docs/scenario-format.md, verbatim (comments included). */
+export const FORMAT_EXAMPLE = `stanchion: 1                      # format version
 title: Cold-store mezzanine, column M4
 column:
   length: 4.2 m

@@ -13,6 +13,8 @@ import { formatAssessment } from './assessSummary.js';
 import { parseEnd, parseFraction, parseMethods, parseNonNegativeInteger, parseSampleCount, parseWorkerCount } from './optionParsers.js';
 import { CAUTION } from './textTable.js';
 import { toolVersion } from './version.js';
+import { shownPath } from './shownPath.js';
+import { join } from 'node:path';
 import { progressPrinter } from './progressPrinter.js';
 import { InterruptedError, withInterrupt } from './interrupt.js';
 
@@ -56,16 +58,14 @@ export async function runAssess(file: string, opts: AssessCliOptions, argv: stri
   }
   const meta = { version: toolVersion(), date: new Date().toISOString(), command: ['stanchion', ...argv].join(' ') };
   const json = assessmentJson(a, meta);
+  // the answer first; the report is written last, so its path is the last line on the screen
+  process.stdout.write(opts.json ? JSON.stringify(json, null, 2) + '\n' : formatAssessment(a, system));
   if (opts.out) {
+    process.stderr.write('stanchion: writing the report …\n');
     const input = assessmentReportInput(a, meta);
     const written = await writeOutputs(opts.out, input, json, { force: opts.force, inputFiles: [file], units: system });
-    process.stderr.write(`stanchion: report written to ${written.dir}/report.html (${written.files.length} files)\n`);
+    process.stderr.write(`stanchion: report written to ${shownPath(join(written.dir, 'report.html'))} (${written.files.length} files)\n`);
   }
-  if (opts.json) {
-    process.stdout.write(JSON.stringify(json, null, 2) + '\n');
-    return;
-  }
-  process.stdout.write(formatAssessment(a, system));
 }
 
 export function registerAssess(program: Command, unitsOption: () => Option): void {

@@ -1,7 +1,8 @@
 /** The human summary of `stanchion assess` for the terminal. */
 import type { Assessment } from '../studies/columnAssessment.js';
 import { formatBeta, formatProbability, formatQuantity, type UnitSystem } from '../report/displayUnits.js';
-import { quantityKindOf } from '../limitState/quantityKind.js';
+import { describePath, quantityKindOf } from '../limitState/quantityKind.js';
+import { zeroFailureBound } from '../reliability/zeroFailureBound.js';
 import { CAUTION, textTable } from './textTable.js';
 import { designPointConnections } from '../studies/designPointConnections.js';
 import { connectionBasis, connectionLines } from './connectionText.js';
@@ -27,7 +28,7 @@ function characteristicLines(a: Assessment, system: UnitSystem): string[] {
   for (const r of c.rows) {
     const basis = r.fractile === null ? (r.side === 'favourable' ? '' : ' (mean)') : ` (${Math.round(r.fractile * 100)} %)`;
     rows.push([
-      r.variable,
+      describePath(r.variable),
       r.side,
       `${fmt(r.characteristic, r.variable)}${basis}`,
       fmt(r.design, r.variable),
@@ -100,12 +101,32 @@ function combinationLines(a: Assessment): string[] {
   ];
 }
 
+/** β and pf of the governing estimate; Monte Carlo with no failure reads as its one-sided bound. */
+function governingText(a: Assessment): { beta: string; pf: string; meets: boolean; bound: boolean } {
+  const g = a.governing;
+  if (g.method === 'mc' && a.mc && a.mc.failures === 0 && a.mc.samples > 0 && !g.basis) {
+    const b = zeroFailureBound(a.mc.samples);
+    return { beta: `> ${formatBeta(b.beta)}`, pf: `< ${formatProbability(b.pf)}`, meets: b.beta >= a.scenario.targetBeta, bound: true };
+  }
+  const bound = g.basis?.includes('upper bound') ?? false;
+  return { beta: `${bound ? '> ' : '= '}${formatBeta(g.beta)}`, pf: `${bound ? '< ' : '= '}${formatProbability(g.pf)}`, meets: g.beta >= a.scenario.targetBeta, bound };
+}
+
+/** The one line that says whether the column meets its target. */
+export function assessResultLine(a: Assessment): string {
+  const s = a.scenario;
+  const g = governingText(a);
+  const verdict = g.meets ? 'MEETS the target' : g.bound ? 'NOT SHOWN to meet the target (only a bound; draw more samples)' : `FALLS SHORT of the target by Δβ = ${formatBeta(s.targetBeta - a.governing.beta)}`;
+  return `result: β ${g.beta} (${a.governing.basis ?? LABEL[a.governing.method]}) against β = ${formatBeta(s.targetBeta)} over ${years(s.referencePeriodYears)}${s.targetSource ? ` (${s.targetSource})` : ''}: ${verdict}`;
+}
+
 export function formatAssessment(a: Assessment, system: UnitSystem): string {
   const s = a.scenario;
   const lines: string[] = [];
   lines.push(`stanchion assess: ${s.title}`);
+  lines.push(`  ${assessResultLine(a)}`);
   lines.push(`  ${s.column.frame} column, strength model ${s.strength}; seed ${a.seed}; ${a.model.names.length} random variables`);
-  lines.push(`  at the means: capacity ${formatQuantity(a.check.capacity, 'force', system)}, demand ${formatQuantity(a.check.demand, 'force', system)}, utilization ${a.check.utilization.toFixed(3)}, K = ${a.check.effective_length_factor.toFixed(3)}`);
+  lines.push(`  at the means: capacity ${formatQuantity(a.check.capacity, 'force', system)}, demand ${formatQuantity(a.check.demand, 'force', system)}, mean-value ratio demand / (θ × capacity) ${a.check.utilization.toFixed(3)}, K = ${a.check.effective_length_factor.toFixed(3)}`);
   lines.push(targetLine(a));
   lines.push(`  ${modelFactorLine(a)}`);
   lines.push('');
@@ -125,7 +146,10 @@ export function formatAssessment(a: Assessment, system: UnitSystem): string {
     if (a.sorm) rows.push([`SORM (${a.sorm.used})`, formatBeta(a.sorm.beta), formatProbability(a.sorm.pf), '', String(a.sorm.calls)]);
   }
   if (a.is) rows.push(['importance sampling', formatBeta(a.is.beta), formatProbability(a.is.pf), pct(a.is.cov), String(a.is.calls)]);
-  if (a.mc) {
+  if (a.mc && a.mc.failures === 0 && a.mc.samples > 0) {
+    const b = zeroFailureBound(a.mc.samples);
+    rows.push(['Monte Carlo', `> ${formatBeta(b.beta)}`, `< ${formatProbability(b.pf)}`, 'no failure: one-sided 95 % bound', `${a.mc.samples} (0 failed)`]);
+  } else if (a.mc) {
     rows.push([
       'Monte Carlo',
       formatBeta(a.mc.beta),
@@ -141,20 +165,14 @@ export function formatAssessment(a: Assessment, system: UnitSystem): string {
   if (a.subset) rows.push(['subset simulation', formatBeta(a.subset.beta), formatProbability(a.subset.pf), pct(a.subset.cov), String(a.subset.calls)]);
   lines.push(textTable(rows));
   lines.push('');
-  lines.push(`  agreement: ${a.verdict.reason}`);
-  const g = a.governing;
-  const meets = g.beta >= s.targetBeta;
-  lines.push(
-    `  verdict: β = ${formatBeta(g.beta)} (${g.basis ?? LABEL[g.method]}) against the target ${formatBeta(s.targetBeta)} over ${years(s.referencePeriodYears)}${s.targetSource ? ` (${s.targetSource})` : ''}: ` +
-      (meets ? 'MEETS the target.' : 'does NOT meet the target.'),
-  );
+  lines.push(`  ${rows.length > 2 ? 'agreement' : 'estimate'}: ${a.verdict.reason}`);
   lines.push('');
   lines.push('  design point (FORM) and importance α²:');
   const dp: string[][] = [['variable', 'mean', 'design point', 'α²']];
   const order = f.names.map((_, i) => i).sort((i, j) => f.importance[j] - f.importance[i]);
   for (const i of order) {
     const kind = quantityKindOf(f.names[i]);
-    dp.push([f.names[i], formatQuantity(a.model.dists[i].mean, kind, system), formatQuantity(f.designPointX[i], kind, system), f.importance[i].toFixed(3)]);
+    dp.push([describePath(f.names[i]), formatQuantity(a.model.dists[i].mean, kind, system), formatQuantity(f.designPointX[i], kind, system), f.importance[i].toFixed(3)]);
   }
   lines.push(textTable(dp, '    '));
   lines.push(...characteristicLines(a, system));
@@ -168,10 +186,10 @@ export function formatAssessment(a: Assessment, system: UnitSystem): string {
   }
   if (a.sensitivity) {
     lines.push('');
-    lines.push('  what drives it (utilization at the 5 % / 95 % quantile of one variable, the rest at their means):');
+    lines.push('  what drives it (mean-value ratio at the 5 % / 95 % quantile of one variable, the rest at their means):');
     lines.push(
       textTable(
-        a.sensitivity.utilization.rows.slice(0, 6).map((t) => [t.variable, `${t.low.toFixed(3)} … ${t.high.toFixed(3)}`]),
+        a.sensitivity.utilization.rows.slice(0, 6).map((t) => [describePath(t.variable), `${t.low.toFixed(3)} … ${t.high.toFixed(3)}`]),
         '    ',
       ),
     );
@@ -186,5 +204,7 @@ export function formatAssessment(a: Assessment, system: UnitSystem): string {
   }
   lines.push('');
   lines.push(CAUTION);
+  lines.push('');
+  lines.push(assessResultLine(a));
   return lines.join('\n') + '\n';
 }

@@ -72,7 +72,7 @@ export function formatCheck(s: Scenario, c: CheckResult, system: UnitSystem): st
   rows.push(['curvature factor c', c.curvature_factor.toFixed(3)]);
   rows.push(['capacity', q(c.capacity, 'force')]);
   rows.push(['demand (sum of loads)', q(c.demand, 'force')]);
-  rows.push(['utilization', `${c.utilization.toFixed(3)}  = demand / (model factor ${c.model_factor.toPrecision(3)} × capacity)`]);
+  rows.push(['mean-value ratio', `${c.utilization.toFixed(3)}  = demand / (model factor ${c.model_factor.toPrecision(3)} × capacity), every value at its mean`]);
   lines.push(textTable(rows));
   lines.push('');
   lines.push('  connection moments under the mean loads (second order; the values to check each joint\'s moment resistance M_j,Rd against):');
@@ -91,6 +91,9 @@ export function formatCheck(s: Scenario, c: CheckResult, system: UnitSystem): st
   }
   lines.push('');
   lines.push(CAUTION);
+  lines.push('');
+  // every value at its mean, no partial factor: this is not a design check, and the line says so
+  lines.push(`result: mean-value ratio ${c.utilization.toFixed(3)} (demand / resistance at the means; not a design check: use assess for the reliability against a target), K = ${c.effective_length_factor.toFixed(3)}`);
   return lines.join('\n') + '\n';
 }
 

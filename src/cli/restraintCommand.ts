@@ -1,7 +1,7 @@
 import { loadScenario } from '../scenario/loadScenario.js';
-import { columnRestraint, restraintJson, type EndChoice, type RestraintMethod } from '../studies/columnRestraint.js';
+import { columnRestraint, restraintJson, type ColumnRestraintResult, type EndChoice, type RestraintMethod } from '../studies/columnRestraint.js';
 import type { DesignAlphaChoice } from '../studies/restraintRequirement.js';
-import { formatQuantity, type UnitSystem } from '../report/displayUnits.js';
+import { formatBeta, formatQuantity, type UnitSystem } from '../report/displayUnits.js';
 import { readScenarioText } from './readScenarioText.js';
 import { assessColumn, DEFAULT_SEED, governingAssessor } from '../studies/columnAssessment.js';
 import { assessmentJson } from '../studies/assessmentJson.js';
@@ -9,6 +9,8 @@ import { assessmentReportInput } from '../studies/assessmentReport.js';
 import { writeOutputs } from '../report/writeOutputs.js';
 import { checkOutFolder } from '../report/outputFolder.js';
 import { toolVersion } from './version.js';
+import { shownPath } from './shownPath.js';
+import { join } from 'node:path';
 import { CAUTION, textTable } from './textTable.js';
 
 export interface RestraintOptions {
@@ -28,16 +30,20 @@ export async function runRestraint(file: string, opts: RestraintOptions): Promis
   const system = opts.units ?? scenario.displayUnits;
   const seed = scenario.analysis.seed ?? DEFAULT_SEED;
   const r = await columnRestraint(scenario, { end: opts.end, units: system, method: opts.method, designAlpha: opts.designAlpha, governing: governingAssessor(seed) });
-  if (opts.out) {
+  const writeReport = async (): Promise<void> => {
+    if (!opts.out) return;
+    process.stderr.write('stanchion: writing the report …\n');
     // the report around the study: the column, FORM/SORM at the assessed stiffness, sensitivity, the curve
     const a = await assessColumn(scenario, { methods: ['form', 'sorm'], end: opts.end, restraint: r });
     const meta = { version: toolVersion(), date: new Date().toISOString(), command: ['stanchion', ...process.argv.slice(2)].join(' ') };
     const json = assessmentJson(a, meta);
-    const written = await writeOutputs(opts.out, assessmentReportInput(a, meta), json, { force: opts.force, inputFiles: [file], units: system });
-    process.stderr.write(`stanchion: report written to ${written.dir}/report.html (${written.files.length} files)\n`);
-  }
+    const input = { ...assessmentReportInput(a, meta), subject: 'restraint' as const };
+    const written = await writeOutputs(opts.out, input, json, { force: opts.force, inputFiles: [file], units: system });
+    process.stderr.write(`stanchion: report written to ${shownPath(join(written.dir, 'report.html'))} (${written.files.length} files)\n`);
+  };
   if (opts.json) {
     process.stdout.write(JSON.stringify({ restraint: restraintJson(r) }, null, 2) + '\n');
+    await writeReport();
     return;
   }
   const ends = r.study.ends;
@@ -73,6 +79,18 @@ export async function runRestraint(file: string, opts: RestraintOptions): Promis
     ...r.notes.map((n) => `  note: ${n}`),
     '',
     CAUTION,
+    '',
+    restraintResultLine(r, system),
   ];
   process.stdout.write(out.join('\n') + '\n');
+  await writeReport();
+}
+
+/** The last line: the stiffness each studied end needs for the target, or why none will do. */
+function restraintResultLine(r: ColumnRestraintResult, system: UnitSystem): string {
+  const parts = r.study.ends.map((e) => {
+    const k = r.study.required[e];
+    return k === null || k === undefined || !Number.isFinite(k) ? `${e}: not reachable, even with a rigid ${e} connection` : `${e} at least ${formatQuantity(k, 'rotationalStiffness', system)}`;
+  });
+  return `result: for the target β = ${formatBeta(r.study.target)} the mean rotational stiffness must be ${parts.join('; ')}`;
 }

@@ -29,7 +29,11 @@ import { parseSweepFile } from '../studies/sweepFile.js';
 import { sweepFingerprint } from '../studies/sweepFingerprint.js';
 import { journalPath, readJournalHeader, type JournalHeader, type StoredDefinition } from '../studies/sweepJournal.js';
 import { sweepJsonEntry, writeSweepOutputs } from '../studies/sweepOutput.js';
-import { writeSweepReport } from '../studies/sweepReport.js';
+import { loadScenario } from '../scenario/loadScenario.js';
+import { sweepResults, writeSweepReport } from '../studies/sweepReport.js';
+import { shownPath } from './shownPath.js';
+import { formatBeta, formatQuantity, type UnitSystem as DisplaySystem } from '../report/displayUnits.js';
+import { describePath } from '../limitState/quantityKind.js';
 import { checkOutFolder } from '../report/outputFolder.js';
 import { toolVersion } from './version.js';
 import { InterruptedError, isInterruptedError } from '../runtime/interruptFlag.js';
@@ -409,7 +413,9 @@ export async function runSweepCommand(file: string, opts: SweepOptions): Promise
   // the readable report of the whole sweep, regenerated from the journal at every complete run
   let report: string | null = null;
   const complete = writesOutputs && table.missingCount === 0 && table.finished > 0;
-  if (complete && table.finished <= REPORT_CASES_LIMIT) {
+  const writeReport = async (): Promise<void> => {
+    if (!(complete && table.finished <= REPORT_CASES_LIMIT)) return;
+    process.stderr.write('stanchion: writing the report …\n');
     const written = await writeSweepReport({
       scenarioText: plan.scenarioText,
       scenarioFile: plan.scenarioFile,
@@ -421,11 +427,13 @@ export async function runSweepCommand(file: string, opts: SweepOptions): Promise
       meta: { version: toolVersion(), date: new Date().toISOString(), command: ['stanchion', ...process.argv.slice(2)].join(' ') },
     });
     report = join(written.dir, 'report.html');
-  } else if (complete) {
+  };
+  if (complete && table.finished > REPORT_CASES_LIMIT) {
     process.stderr.write(`stanchion: no report for more than ${REPORT_CASES_LIMIT} cases (it would list every case); the results are in ${csv}\n`);
   }
   if (run.errors > 0) process.stderr.write(`stanchion: ${run.errors} case(s) failed; their messages are in the error column\n`);
   if (opts.json) {
+    await writeReport();
     const doc = {
       sweep: {
         cases: plan.table.count,
@@ -453,7 +461,23 @@ export async function runSweepCommand(file: string, opts: SweepOptions): Promise
     return;
   }
   process.stdout.write(humanSummary(plan, run, table, { csv, json, stateDir, out }, shard, seconds, workers));
-  if (report) process.stderr.write(`stanchion: sweep report written to ${report}\n`);
+  if (shard.count === 1) process.stdout.write(`\n${sweepResultLine(plan, table, opts.units)}\n`);
+  await writeReport();
+  if (report) process.stderr.write(`stanchion: sweep report written to ${shownPath(report)}\n`);
+}
+
+/** The last line of a sweep: how many cases meet the target, and where β crosses it. */
+function sweepResultLine(plan: SweepPlan, table: SweepTable, units: DisplaySystem | undefined): string {
+  const s = loadScenario(plan.scenarioText, plan.scenarioFile);
+  const r = sweepResults(table, plan.methods, s.column.length, s.targetBeta);
+  const target = `the target β = ${formatBeta(s.targetBeta)}${s.targetSource ? ` (${s.targetSource})` : ''}`;
+  if (!r) return `result: ${table.finished} cases finished; more than two varied values, so no count against ${target} (see the CSV)`;
+  const v = r.varied[0];
+  const crossing =
+    r.varied.length === 1 && r.crossings.length > 0
+      ? `; β crosses it at ${describePath(v.path.replace(/\.(mean|sd|cov|min|max)$/, ''))}${/\.(mean|sd|cov|min|max)$/.exec(v.path)?.[0] ?? ''} = ${r.crossings.map((x) => formatQuantity(x, v.kind, units ?? s.displayUnits, 4)).join(', ')}`
+      : '';
+  return `result: ${r.meeting.count} of ${r.meeting.total} cases meet ${target}${crossing}`;
 }
 
 /** Journal files named by the arguments: a state folder (every journal in it) or a journal file. */

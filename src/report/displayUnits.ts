@@ -117,6 +117,30 @@ export function formatNumber(x: number, sig = 3): string {
   return `${sign}${plainDigits(mantissa, sig)}×10${superscript(exp3)}`;
 }
 
+/** A probability always in scientific form ('7.1×10⁻²'), for a column that must not mix forms. */
+export function formatProbabilityScientific(p: number, sig = 3): string {
+  if (Number.isNaN(p)) return '—';
+  if (p <= 0 || !Number.isFinite(p)) return formatNumber(p);
+  let e = Math.floor(Math.log10(p));
+  let mantissa = Number((p / 10 ** e).toPrecision(sig));
+  if (mantissa >= 10) {
+    mantissa /= 10;
+    e += 1;
+  }
+  return `${plainDigits(mantissa, sig)}×10${superscript(e)}`;
+}
+
+/** Probabilities of one table column in one form: all plain when every one is ≥ 0.01, else all scientific. */
+export function formatProbabilityColumn(ps: readonly number[]): string[] {
+  const plain = ps.every((p) => !(p > 0 && p < 0.01));
+  return ps.map((p) => (plain ? formatProbability(p) : formatProbabilityScientific(p)));
+}
+
+/** Numbers of one table column with the same count of decimals ('0.071', '0.001'), real minus signs. */
+export function formatFixedColumn(xs: readonly number[], decimals: number): string[] {
+  return xs.map((x) => (Number.isFinite(x) ? x.toFixed(decimals).replace(/^-(?=.*[1-9])/, '−').replace(/^-/, '') : formatNumber(x)));
+}
+
 /** A probability: 3 significant figures, scientific below 0.01 ('6.21×10⁻⁴'). */
 export function formatProbability(p: number): string {
   if (Number.isNaN(p)) return '—';

@@ -42,6 +42,8 @@ function block(b: Block, assets: HtmlAssets): string {
       return table(b);
     case 'code':
       return `<pre><code>${esc(b.text)}</code></pre>`;
+    case 'result':
+      return `<div class="result-box ${b.tone}"><p class="headline">${esc(b.headline)}</p><dl>${b.items.map((i) => `<dt>${esc(i.label)}</dt><dd>${esc(i.text)}</dd>`).join('')}</dl></div>`;
     case 'sketch':
       return `<figure class="sketch">${inlineSvg(assets.sketchSvg, 'sketch-')}<figcaption>Column sketch (not to scale).</figcaption></figure>`;
     case 'chart': {

@@ -26,6 +26,13 @@ pre { background: #f3f4f6; padding: .6rem .8rem; overflow-x: auto; white-space: 
 .callout { border-left: 4px solid var(--info); background: #f1f5f9; padding: .6rem .9rem; margin: .8rem 0 1rem; }
 .callout.ok { border-color: var(--ok); background: #eef7f1; }
 .callout.warn { border-color: var(--warn); background: #fbefee; }
+.result-box { border: 2px solid var(--info); border-radius: 4px; padding: .7rem 1rem; margin: .4rem 0 1rem; }
+.result-box.ok { border-color: var(--ok); background: #eef7f1; }
+.result-box.warn { border-color: var(--warn); background: #fbefee; }
+.result-box .headline { font-size: 1.25rem; font-weight: 700; margin: 0 0 .5rem; }
+.result-box dl { display: grid; grid-template-columns: max-content 1fr; gap: .25rem 1rem; margin: 0; }
+.result-box dt { font-weight: 600; }
+.result-box dd { margin: 0; }
 figure { margin: 1rem 0 1.4rem; }
 figure svg { display: block; max-width: 100%; height: auto; }
 figure svg text { font-family: "DejaVu Sans", "Bitstream Vera Sans", Verdana, Arial, sans-serif; }
@@ -39,7 +46,7 @@ footer { margin-top: 2rem; color: var(--muted); font-size: .8rem; border-top: 1p
   main { max-width: none; margin: 0; padding: 0; }
   nav.toc { display: none; }
   h2 { break-after: avoid; page-break-after: avoid; }
-  figure, table, .callout, pre { break-inside: avoid; page-break-inside: avoid; }
+  figure, table, .callout, .result-box, pre { break-inside: avoid; page-break-inside: avoid; }
   thead { display: table-header-group; }
   figure svg { max-height: 120mm; width: auto; max-width: 100%; }
   a { color: inherit; text-decoration: none; }

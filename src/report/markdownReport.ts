@@ -26,6 +26,8 @@ function block(b: Block): string {
       const fence = codeFence(b.text);
       return `${fence}\n${b.text}\n${fence}`;
     }
+    case 'result':
+      return [`> **${markdownInline(b.headline)}**`, '>', ...b.items.map((i) => `> - **${markdownInline(i.label)}:** ${markdownInline(i.text)}`)].join('\n');
     case 'sketch':
       return '![Column sketch](charts/column-sketch.png)';
     case 'chart':

@@ -11,7 +11,9 @@ export type Block =
   | { kind: 'table'; caption?: string; head: string[]; rows: string[][]; numeric?: boolean[] }
   | { kind: 'chart'; name: string; title: string } // charts/<name>.svg
   | { kind: 'sketch' } // the column sketch
-  | { kind: 'code'; text: string };
+  | { kind: 'code'; text: string }
+  /** The result box that opens every report: a headline and labelled lines. */
+  | { kind: 'result'; tone: 'ok' | 'warn'; headline: string; items: { label: string; text: string }[] };
 
 export interface Section {
   id: string; // anchor
@@ -25,11 +27,12 @@ export interface ReportDocument {
   sections: Section[];
 }
 
-/** Section headings, in order; the sweep section appears only when a sweep ran. */
+/** Section headings; the order depends on the report's subject (sectionOrder). */
 export const SECTION_TITLES = {
+  result: 'Result',
   job: 'The job',
   column: 'The column',
-  inputs: 'Inputs',
+  inputs: 'Appendix: scenario inputs',
   model: 'Model and assumptions',
   methods: 'Reliability by method',
   target: 'Reliability against the target',
@@ -37,8 +40,24 @@ export const SECTION_TITLES = {
   restraint: 'Restraint justification',
   partialFactors: 'Characteristic values and implied partial factors',
   sweep: 'Parameter sweep',
+  sweepCases: 'Appendix: sweep cases',
   cautions: 'Cautions',
-  reproducibility: 'Reproducibility',
+  reproducibility: 'Appendix: reproducibility',
 } as const;
 
 export type SectionId = keyof typeof SECTION_TITLES;
+
+/**
+ * Reading order: the result, the report's own subject, the supporting details, then the
+ * scenario appendix. Sections without content (no sweep, a short case list) are left out later.
+ */
+export function sectionOrder(subject: 'assessment' | 'restraint' | 'sweep'): SectionId[] {
+  const details: SectionId[] = ['methods', 'sensitivity', 'partialFactors', 'job', 'column', 'model', 'cautions'];
+  const appendix: SectionId[] = subject === 'sweep' ? ['inputs', 'sweepCases', 'reproducibility'] : ['inputs', 'reproducibility'];
+  const subjectFirst: Record<typeof subject, SectionId[]> = {
+    assessment: ['target', 'restraint'],
+    restraint: ['restraint', 'target'],
+    sweep: ['sweep', 'target', 'restraint'],
+  };
+  return ['result', ...subjectFirst[subject], ...details, ...appendix];
+}

@@ -72,6 +72,7 @@ export interface InputRow {
   distribution: DistributionName | 'fixed';
   parameters: InputParameters;
   asWritten?: string; // what the user wrote, e.g. 'L/1500' or '2.5 MN m/rad'
+  source?: string; // where the statistics come from, as written (test report, survey, code clause)
 }
 
 export interface CorrelationEntry {
@@ -153,6 +154,8 @@ export interface MonteCarloResult {
   samples: number;
   failures: number;
   ci95: [number, number]; // on pf
+  /** With no failure: the one-sided 95 % upper bound on pf (exact binomial) and the β it implies. */
+  zeroFailureBound?: { pf: number; beta: number };
   convergence: { samples: number; pf: number; lo: number; hi: number }[]; // increasing samples
 }
 
@@ -171,8 +174,9 @@ export interface ReliabilityResults {
   mc?: MonteCarloResult;
   subset?: SubsetResult;
   /** The estimate compared with the target (normally SORM or the best sampling estimate). */
-  governing: { method: MethodName; beta: number; pf: number };
-  /** Whether the methods agree within their uncertainty, in one or two sentences. */
+  /** `basis` says why it governs when it is not simply that method's own estimate (e.g. FORM's self-check). */
+  governing: { method: MethodName; beta: number; pf: number; basis?: string; lowerBound?: boolean };
+  /** Whether the methods agree within their uncertainty, in one or two sentences; `consistent` is false only when a difference matters. */
   agreement: { consistent: boolean; text: string };
   target: { beta: number; source: TargetSource; note?: string }; // note e.g. 'RC2, 50-year reference period'
   /** Two or more time-varying loads: FORM β of each load combination (Turkstra) and the series system. */
@@ -317,6 +321,10 @@ export interface SweepResults {
   varied: { path: string; kind: QuantityKind }[]; // 1 or 2 paths
   rows: { values: Record<string, number>; beta: number; pf: number; utilization: number }[];
   method: MethodName; // which method produced β
+  /** How many finished cases meet the target, of how many. */
+  meeting: { count: number; total: number };
+  /** One varied path: the values (SI) where β crosses the target, interpolated linearly between neighbouring cases. */
+  crossings: number[];
 }
 
 /** Second-order moments and rotations of the end connections at one point (magnitudes, SI). */
@@ -351,8 +359,12 @@ export interface ConnectionResults {
   strengthUsesBow: boolean; // false for the code curves: the bow is then only the geometric bow
 }
 
+/** What the report is about: it opens with that subject's result and section. */
+export type ReportSubject = 'assessment' | 'restraint' | 'sweep';
+
 export interface ReportInput {
   meta: ReportMeta;
+  subject?: ReportSubject; // default 'assessment'
   inputs: InputRow[];
   correlation: CorrelationEntry[];
   column: ColumnDescription;

@@ -3,8 +3,10 @@
  * formatted and compared here, never computed.
  */
 import type { ConnectionValues, EndDescription, InputRow, JointClassRow, MethodName, ReportInput, StrengthModelName } from './reportInput.js';
-import { displayUnit, formatBeta, formatNumber, formatProbability, formatQuantity, type UnitSystem } from './displayUnits.js';
-import { SECTION_TITLES, type Block, type ReportDocument, type Section, type SectionId } from './reportDocument.js';
+import { displayUnit, formatBeta, formatFixedColumn, formatNumber, formatProbability, formatProbabilityColumn, formatQuantity, type UnitSystem } from './displayUnits.js';
+import { SECTION_TITLES, sectionOrder, type Block, type ReportDocument, type Section, type SectionId } from './reportDocument.js';
+import { variableNamer } from './variableNames.js';
+import { sweptName } from './charts/sweep.js';
 import type { ChartSpec } from './charts/chartSpec.js';
 import { STANDING_CAUTIONS } from './standingCautions.js';
 
@@ -184,13 +186,15 @@ function inputsSection(input: ReportInput, system: UnitSystem): Section {
     r.parameters.cov === undefined ? '' : formatNumber(r.parameters.cov, 3),
     parameterCell(r, 'min', system),
     parameterCell(r, 'max', system),
+    r.source ?? '',
   ]);
   const blocks: Block[] = [
     withoutEmptyColumns({
       kind: 'table',
-      head: ['variable', 'description', 'distribution', 'mean or value', 'sd', 'CoV', 'min', 'max'],
+      caption: 'Every value of the scenario under its path in the scenario file; sd and CoV are both given for each random variable, whichever the file stated.',
+      head: ['variable', 'description', 'distribution', 'mean or value', 'sd', 'CoV', 'min', 'max', 'source of the statistics'],
       rows,
-      numeric: [false, false, false, true, true, true, true, true],
+      numeric: [false, false, false, true, true, true, true, true, false],
     }),
   ];
   blocks.push({
@@ -198,7 +202,7 @@ function inputsSection(input: ReportInput, system: UnitSystem): Section {
     text:
       input.correlation.length === 0
         ? 'The random variables are independent.'
-        : `Correlation (Pearson, physical variables; Nataf transformation): ${input.correlation.map((c) => `${c.a} with ${c.b}: ρ = ${formatNumber(c.rho, 2)}`).join('; ')}. All other pairs are independent.`,
+        : `Correlation (Pearson, physical variables; Nataf transformation): ${input.correlation.map((c) => `${variableNamer(input)(c.a)} with ${variableNamer(input)(c.b)}: ρ = ${formatNumber(c.rho, 2)}`).join('; ')}. All other pairs are independent.`,
   });
   return section('inputs', blocks);
 }
@@ -229,7 +233,7 @@ function modelSection(input: ReportInput, system: UnitSystem, charts: ChartSpec[
       ['fixity factor (bottom / top)', `${formatNumber(k.fixityFactor.bottom, 3)} / ${formatNumber(k.fixityFactor.top, 3)}`],
       ['capacity', formatQuantity(k.capacity, 'force', system, 4)],
       ['demand (sum of mean loads)', formatQuantity(k.demand, 'force', system, 4)],
-      ['utilization = demand / (mean θ × capacity)', formatNumber(k.utilization, 3)],
+      ['mean-value ratio = demand / (mean θ × capacity), not a design check', formatNumber(k.utilization, 3)],
       ...(modes ? [['critical loads of the modes shown', modes]] : []),
     ],
     numeric: [false, true],
@@ -240,11 +244,19 @@ function modelSection(input: ReportInput, system: UnitSystem, charts: ChartSpec[
 function methodsSection(input: ReportInput, charts: ChartSpec[]): Section {
   const r = input.reliability;
   const rows: string[][] = [];
+  const pfs: number[] = [];
   if (r.form) rows.push(['FORM', formatBeta(r.form.beta), formatProbability(r.form.pf), 'none (approximation)', formatNumber(r.form.calls, 6), r.form.converged ? `converged in ${r.form.iterations} iterations` : Number.isFinite(r.form.beta) ? `NOT converged after ${r.form.iterations} iterations` : `no design point (searched ${r.form.iterations} iterations)`]);
   if (r.sorm) rows.push([r.sorm.formula ? `SORM (${r.sorm.formula})` : METHOD_LABELS.sorm, formatBeta(r.sorm.beta), formatProbability(r.sorm.pf), 'none (approximation)', formatNumber(r.sorm.calls, 6), 'curvature correction at the FORM design point']);
   if (r.is) rows.push([METHOD_LABELS.is, formatBeta(r.is.beta), formatProbability(r.is.pf), `CoV ${(100 * r.is.cov).toFixed(1)} %`, formatNumber(r.is.calls, 6), 'centred on the design point']);
-  if (r.mc) rows.push([METHOD_LABELS.mc, formatBeta(r.mc.beta), formatProbability(r.mc.pf), `CoV ${(100 * r.mc.cov).toFixed(1)} %; 95 % CI ${formatProbability(r.mc.ci95[0])} to ${formatProbability(r.mc.ci95[1])}`, formatNumber(r.mc.samples, 6), `${formatNumber(r.mc.failures, 6)} failures`]);
+  const zb = r.mc?.zeroFailureBound;
+  if (r.mc && zb) rows.push([METHOD_LABELS.mc, `> ${formatBeta(zb.beta)}`, `< ${formatProbability(zb.pf)}`, 'no failure: one-sided 95 % bound (exact binomial; about 3/n)', formatNumber(r.mc.samples, 6), '0 failures']);
+  else if (r.mc) rows.push([METHOD_LABELS.mc, formatBeta(r.mc.beta), formatProbability(r.mc.pf), `CoV ${(100 * r.mc.cov).toFixed(1)} %; 95 % CI ${formatProbability(r.mc.ci95[0])} to ${formatProbability(r.mc.ci95[1])}`, formatNumber(r.mc.samples, 6), `${formatNumber(r.mc.failures, 6)} failures`]);
   if (r.subset) rows.push([METHOD_LABELS.subset, formatBeta(r.subset.beta), formatProbability(r.subset.pf), `CoV ${(100 * r.subset.cov).toFixed(1)} %`, formatNumber(r.subset.calls, 6), r.subset.levels !== undefined ? `${r.subset.levels} levels` : '']);
+  // one form per pf column: re-format the plain numbers when any is scientific
+  for (const m of ['form', 'sorm', 'is', 'mc', 'subset'] as const) if (r[m] && !(m === 'mc' && zb)) pfs.push(r[m]!.pf);
+  const column = formatProbabilityColumn(pfs);
+  let k = 0;
+  for (const row of rows) if (!row[2].startsWith('<')) row[2] = column[k++] ?? row[2];
   const combos: Block[] = r.combinations
     ? [
         {
@@ -268,7 +280,7 @@ function methodsSection(input: ReportInput, charts: ChartSpec[]): Section {
       rows,
       numeric: [false, true, true, false, true, false],
     },
-    { kind: 'callout', tone: r.agreement.consistent ? 'ok' : 'warn', text: `Agreement: ${r.agreement.text}` },
+    { kind: 'callout', tone: r.agreement.consistent ? 'ok' : 'warn', text: `${methodsRun(input).length > 1 ? 'Agreement' : 'Estimate'}: ${r.agreement.text}` },
     ...chartBlock(charts, 'samples-histogram'),
     ...chartBlock(charts, 'mc-convergence'),
   ]);
@@ -279,7 +291,7 @@ function targetSection(input: ReportInput): Section {
   const g = r.governing;
   const meets = g.beta >= r.target.beta;
   const text =
-    `β = ${formatBeta(g.beta)} (${METHOD_LABELS[g.method]}, pf = ${formatProbability(g.pf)}) against the target β = ${formatBeta(r.target.beta)} ` +
+    `β ${g.lowerBound ? '>' : '='} ${formatBeta(g.beta)} (${g.basis ?? METHOD_LABELS[g.method]}, pf ${g.lowerBound ? '<' : '='} ${formatProbability(g.pf)}) against the target β = ${formatBeta(r.target.beta)} ` +
     `from ${r.target.source}${r.target.note ? ` (${r.target.note})` : ''}: the column ${meets ? 'MEETS' : 'FALLS SHORT OF'} the target` +
     `${meets ? '' : ` by Δβ = ${formatBeta(r.target.beta - g.beta)}`}.`;
   return section('target', [
@@ -292,31 +304,29 @@ function targetSection(input: ReportInput): Section {
   ]);
 }
 
+function leadingDriver(input: ReportInput): { variable: string; share: number; side: string } | null {
+  const top = [...input.sensitivity.importance].sort((a, b) => b.alphaSquared - a.alphaSquared)[0];
+  if (!top) return null;
+  return { variable: variableNamer(input)(top.variable), share: top.alphaSquared, side: top.alpha < 0 ? 'unfavourable when low' : 'unfavourable when high' };
+}
+
 function sensitivitySection(input: ReportInput, charts: ChartSpec[]): Section {
   const s = input.sensitivity;
-  const top = [...s.importance].sort((a, b) => b.alphaSquared - a.alphaSquared)[0];
+  const name = variableNamer(input);
+  const top = leadingDriver(input);
   const blocks: Block[] = [];
-  if (top) blocks.push({ kind: 'paragraph', text: `The variable that matters most is ${top.variable}, with ${(100 * top.alphaSquared).toFixed(0)} % of the importance (α²). Better statistics for the leading variables change the answer most.` });
+  if (top) blocks.push({ kind: 'paragraph', text: `The variable that matters most is the ${top.variable} (${top.side}), with ${(100 * top.share).toFixed(0)} % of the importance (α²). Better statistics for the leading variables change the answer most.` });
   blocks.push(...chartBlock(charts, 'tornado-utilization'), ...chartBlock(charts, 'tornado-capacity'), ...chartBlock(charts, 'conditional-beta'), ...chartBlock(charts, 'importance'));
   if (s.elasticities.length > 0) {
     blocks.push({
       kind: 'table',
       caption: 'Elasticities of β (FORM): relative change of β per relative change of the mean or standard deviation',
       head: ['variable', 'mean elasticity', 'sd elasticity'],
-      rows: s.elasticities.map((e) => [e.variable, formatNumber(e.mean, 3), formatNumber(e.sd, 3)]),
+      rows: ((m, d) => s.elasticities.map((e, i) => [name(e.variable), m[i], d[i]]))(formatFixedColumn(s.elasticities.map((e) => e.mean), 3), formatFixedColumn(s.elasticities.map((e) => e.sd), 3)),
       numeric: [false, true, true],
     });
   }
-  if (s.sobol) {
-    const ci = (c: [number, number]) => `${formatNumber(c[0], 2)} to ${formatNumber(c[1], 2)}`;
-    blocks.push({
-      kind: 'table',
-      caption: `Sobol indices of g (${formatNumber(s.sobol.samples, 6)} samples; 95 % confidence intervals)`,
-      head: ['variable', 'first order', '95 % CI', 'total', '95 % CI'],
-      rows: s.sobol.rows.map((r) => [r.variable, formatNumber(r.first, 2), ci(r.firstCi95), formatNumber(r.total, 2), ci(r.totalCi95)]),
-      numeric: [false, true, true, true, true],
-    });
-  }
+  if (s.sobol) blocks.push(...sobolBlocks(input, s.sobol));
   return section('sensitivity', blocks);
 }
 
@@ -356,10 +366,103 @@ function restraintSection(input: ReportInput, system: UnitSystem, charts: ChartS
   ]);
 }
 
+/** A Sobol index shown inside [0, 1], where it must lie; a clipped estimate is marked with *. */
+function sobolCell(v: number): { text: string; clipped: boolean } {
+  const c = Math.min(1, Math.max(0, v));
+  return { text: `${c.toFixed(2)}${c !== v ? '*' : ''}`, clipped: c !== v };
+}
+
+function sobolBlocks(input: ReportInput, sobol: NonNullable<ReportInput['sensitivity']['sobol']>): Block[] {
+  const name = variableNamer(input);
+  let clipped = false;
+  let inverted = false;
+  const cell = (v: number) => {
+    const c = sobolCell(v);
+    clipped ||= c.clipped;
+    return c.text;
+  };
+  const ci = (c: [number, number]) => `${cell(c[0])} to ${cell(c[1])}`;
+  const rows = sobol.rows.map((r) => {
+    if (r.first > r.total) inverted = true;
+    return [name(r.variable), cell(r.first), ci(r.firstCi95), cell(r.total), ci(r.totalCi95)];
+  });
+  const widest = Math.max(0, ...sobol.rows.map((r) => r.totalCi95[1] - r.totalCi95[0]));
+  const notes = [
+    'Sobol indices split the variance of g over the whole range of the inputs; the importance factors α² weigh each variable at the design point, in the tail where failure happens. They answer different questions and may rank the variables differently: a variable that dominates the scatter of g can matter little at failure, and the reverse.',
+    `With ${formatNumber(sobol.samples, 6)} samples the 95 % intervals are up to ${widest.toFixed(2)} wide: indices closer together than that are not told apart.`,
+  ];
+  if (clipped) notes.push('* An index cannot lie outside [0, 1]; the estimate fell outside by sampling error and is shown clipped.');
+  if (inverted) notes.push('A first-order index above its total index is sampling error too: the exact first-order index never exceeds the total.');
+  return [
+    { kind: 'table', caption: `Sobol indices of g (${formatNumber(sobol.samples, 6)} samples; 95 % confidence intervals)`, head: ['variable', 'first order', '95 % CI', 'total', '95 % CI'], rows, numeric: [false, true, true, true, true] },
+    { kind: 'paragraph', text: notes.join(' ') },
+  ];
+}
+
+/** The β put against the target, as text: a bound reads '> 4.67'. */
+function governingBeta(input: ReportInput): string {
+  const g = input.reliability.governing;
+  return `${g.lowerBound ? '> ' : ''}${formatBeta(g.beta)}`;
+}
+
+function restraintLine(input: ReportInput, system: UnitSystem): string {
+  const st = input.restraint;
+  if (!st) return 'no end is a rotational spring, so no restraint requirement applies';
+  const parts = st.ends.map((e) => {
+    const req = st.required[e];
+    return req === null || req === undefined ? `${e}: not reachable, even rigid ends fall short of the target` : `${e}: at least ${formatQuantity(req, 'rotationalStiffness', system)} mean stiffness`;
+  });
+  const k = st.equivalentK === null ? '' : `; a deterministic check may then use K ≤ ${formatNumber(st.equivalentK, 3)}`;
+  return `${parts.join('; ')}${k}`;
+}
+
+function resultSection(input: ReportInput, system: UnitSystem): Section {
+  const r = input.reliability;
+  const g = r.governing;
+  const t = r.target;
+  const meets = g.beta >= t.beta;
+  const shortBy = formatBeta(t.beta - g.beta);
+  const headline = meets
+    ? `MEETS the target: β ${governingBeta(input)} ≥ ${formatBeta(t.beta)}`
+    : g.lowerBound
+      ? `NOT SHOWN to meet the target: only β ${governingBeta(input)} is known, below ${formatBeta(t.beta)}`
+      : `FALLS SHORT of the target by Δβ = ${shortBy}: β ${governingBeta(input)} < ${formatBeta(t.beta)}`;
+  const items: { label: string; text: string }[] = [
+    { label: 'Reliability index', text: `β ${governingBeta(input)} (pf ${g.lowerBound ? '< ' : '= '}${formatProbability(g.pf)}) by ${METHOD_LABELS[g.method]}` },
+    { label: 'Target', text: `β = ${formatBeta(t.beta)}, ${t.source}${t.note ? ` (${t.note})` : ''}` },
+    { label: 'Governing method', text: `${g.basis ?? METHOD_LABELS[g.method]}: ${r.agreement.text}` },
+    { label: 'Restraint required', text: restraintLine(input, system) },
+  ];
+  const top = leadingDriver(input);
+  if (top) items.push({ label: 'Leading driver', text: `${top.variable}, ${(100 * top.share).toFixed(0)} % of the importance α² (${top.side})` });
+  const caution = { label: 'Caution', text: 'this supports, and does not replace, the judgement of a licensed engineer; local codes govern' };
+  const sw = input.sweep;
+  if (input.subject === 'sweep' && sw) {
+    // a sweep answers "in which cases": the count leads, the scenario as written follows
+    const all = sw.meeting.count === sw.meeting.total;
+    return section('result', [
+      {
+        kind: 'result',
+        tone: all ? 'ok' : 'warn',
+        headline: `${sw.meeting.count} of ${sw.meeting.total} cases meet the target β = ${formatBeta(t.beta)}`,
+        items: [
+          { label: 'Sweep', text: `β by ${METHOD_LABELS[sw.method]}.${crossingText(input, system)}` },
+          { label: 'Base scenario', text: `${headline}; the lines below are for the scenario as written` },
+          ...items,
+          caution,
+        ],
+      },
+    ]);
+  }
+  items.push(caution);
+  return section('result', [{ kind: 'result', tone: meets ? 'ok' : 'warn', headline, items }]);
+}
+
 function partialFactorsSection(input: ReportInput, system: UnitSystem): Section {
   const code = (c?: { symbol: string; value: number }) => (c ? `${c.symbol} = ${formatNumber(c.value, 3)}` : '');
+  const name = variableNamer(input);
   const rows = input.partialFactors.map((p) => [
-    p.variable,
+    name(p.variable),
     p.side ?? p.role,
     p.note === undefined ? p.basis : p.note.startsWith(p.basis) ? p.note : `${p.basis} (${p.note})`,
     formatQuantity(p.referenceValue, p.kind, system, 4),
@@ -409,21 +512,44 @@ function strengthModelBlocks(input: ReportInput): Block[] {
   ];
 }
 
+/** The longest case list printed as an appendix; longer ones stay in sweep.csv. */
+const MAX_PRINTED_CASES = 60;
+
+function crossingText(input: ReportInput, system: UnitSystem): string {
+  const sw = input.sweep!;
+  if (sw.varied.length !== 1) return '';
+  const v = sw.varied[0];
+  if (sw.crossings.length === 0) return ` β does not cross the target within the range swept.`;
+  const at = sw.crossings.map((x) => formatQuantity(x, v.kind, system, 4));
+  return ` β crosses the target at ${sweptName(input, v.path)} = ${joinWords(at)} (interpolated linearly between neighbouring cases).`;
+}
+
 function sweepSection(input: ReportInput, system: UnitSystem, charts: ChartSpec[]): Section | null {
   const sw = input.sweep;
   if (!sw) return null;
-  const head = [...sw.varied.map((v) => `${v.path} [${displayUnit(v.kind, system).label || '–'}]`), 'β', 'pf', 'utilization'];
-  const rows = sw.rows.map((r) => [
+  const names = sw.varied.map((v) => sweptName(input, v.path));
+  const t = input.reliability.target;
+  const listed = sw.rows.length <= MAX_PRINTED_CASES ? 'Every case is listed in the appendix and in sweep.csv.' : `The ${sw.rows.length} cases are in sweep.csv (too many to print).`;
+  return section('sweep', [
+    { kind: 'callout', tone: sw.meeting.count === sw.meeting.total ? 'ok' : 'warn', text: `${sw.meeting.count} of ${sw.meeting.total} cases meet the target β = ${formatBeta(t.beta)} (${t.source}).${crossingText(input, system)}` },
+    { kind: 'paragraph', text: `β by ${METHOD_LABELS[sw.method]} as ${joinWords(names)} ${sw.varied.length > 1 ? 'vary' : 'varies'}, every other input as in the scenario. ${listed}` },
+    ...chartBlock(charts, 'sweep'),
+  ]);
+}
+
+function sweepCasesSection(input: ReportInput, system: UnitSystem): Section | null {
+  const sw = input.sweep;
+  if (!sw || sw.rows.length > MAX_PRINTED_CASES) return null;
+  const head = [...sw.varied.map((v) => `${sweptName(input, v.path)} [${displayUnit(v.kind, system).label || '–'}]`), 'β', 'pf', 'mean-value ratio'];
+  const pf = formatProbabilityColumn(sw.rows.map((r) => r.pf));
+  const u = formatFixedColumn(sw.rows.map((r) => r.utilization), 3);
+  const rows = sw.rows.map((r, i) => [
     ...sw.varied.map((v) => formatNumber(r.values[v.path] / displayUnit(v.kind, system).siPerUnit, 4)),
     formatBeta(r.beta),
-    formatProbability(r.pf),
-    formatNumber(r.utilization, 3),
+    pf[i],
+    u[i],
   ]);
-  return section('sweep', [
-    { kind: 'paragraph', text: `β by ${METHOD_LABELS[sw.method]} as ${joinWords(sw.varied.map((v) => v.path))} ${sw.varied.length > 1 ? 'vary' : 'varies'}, every other input as in the scenario.` },
-    ...chartBlock(charts, 'sweep'),
-    { kind: 'table', head, rows, numeric: head.map(() => true) },
-  ]);
+  return section('sweepCases', [{ kind: 'table', caption: `Every case of the sweep (${METHOD_LABELS[sw.method]}); the same numbers, in SI, are in sweep.csv.`, head, rows, numeric: head.map(() => true) }]);
 }
 
 function cautionsSection(input: ReportInput): Section {
@@ -452,20 +578,25 @@ function reproducibilitySection(input: ReportInput): Section {
 }
 
 export function buildReportDocument(input: ReportInput, system: UnitSystem, charts: ChartSpec[]): ReportDocument {
-  const sections = [
-    jobSection(input, system),
-    columnSection(input, system),
-    inputsSection(input, system),
-    modelSection(input, system, charts),
-    methodsSection(input, charts),
-    targetSection(input),
-    sensitivitySection(input, charts),
-    restraintSection(input, system, charts),
-    partialFactorsSection(input, system),
-    sweepSection(input, system, charts),
-    cautionsSection(input),
-    reproducibilitySection(input),
-  ].filter((s): s is Section => s !== null);
+  const build: Record<SectionId, () => Section | null> = {
+    result: () => resultSection(input, system),
+    job: () => jobSection(input, system),
+    column: () => columnSection(input, system),
+    inputs: () => inputsSection(input, system),
+    model: () => modelSection(input, system, charts),
+    methods: () => methodsSection(input, charts),
+    target: () => targetSection(input),
+    sensitivity: () => sensitivitySection(input, charts),
+    restraint: () => restraintSection(input, system, charts),
+    partialFactors: () => partialFactorsSection(input, system),
+    sweep: () => sweepSection(input, system, charts),
+    sweepCases: () => sweepCasesSection(input, system),
+    cautions: () => cautionsSection(input),
+    reproducibility: () => reproducibilitySection(input),
+  };
+  const sections = sectionOrder(input.subject ?? 'assessment')
+    .map((id) => build[id]())
+    .filter((s): s is Section => s !== null);
   return {
     title: input.meta.scenarioTitle,
     subtitle: `Column reliability assessment · stanchion ${input.meta.toolVersion} · ${input.meta.date}`,

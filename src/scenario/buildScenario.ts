@@ -85,7 +85,8 @@ export interface Provenance {
 
 export function buildScenario(shape: ScenarioShape, lines: ReadonlyMap<string, number>, provenance: Provenance): Scenario {
   const units: Record<string, DisplayUnit> = {};
-  const ctx: ReadContext = { lines, units };
+  const sources: Record<string, string> = {};
+  const ctx: ReadContext = { lines, units, sources };
   const c = shape.column;
   const frame = c.frame;
 
@@ -175,6 +176,7 @@ export function buildScenario(shape: ScenarioShape, lines: ReadonlyMap<string, n
     },
     displayUnits: shape.display_units ?? 'si',
     units,
+    sources,
   };
   const correlation = readCorrelation(shape.correlation as [string, string, number][] | undefined, listScalars(partial), ctx);
   return { ...partial, correlation };

@@ -33,6 +33,8 @@ export interface ReadContext {
   readonly lines: ReadonlyMap<string, number>;
   /** Collects the display unit of every field read. */
   readonly units: Record<string, DisplayUnit>;
+  /** Collects the `source:` note of every random variable that has one. */
+  readonly sources?: Record<string, string>;
 }
 
 type Param = 'mean' | 'sd' | 'cov' | 'min' | 'max';
@@ -189,6 +191,8 @@ function readRandom(raw: Exclude<RawScalar, string | number>, rule: FieldRule, p
   }
   checkRandomDomain(spec, rule, path, ctx);
   ctx.units[formatPath(path)] = display ?? PURE_NUMBER_UNIT;
+  const source = (raw as { source?: unknown }).source;
+  if (typeof source === 'string' && source.trim() !== '' && ctx.sources) ctx.sources[formatPath(path)] = source.trim();
   return { kind: 'random', spec };
 }
 

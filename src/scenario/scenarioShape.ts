@@ -117,11 +117,15 @@ function strict<T extends z.core.$ZodLooseShape>(shape: T, what: string) {
 }
 
 const covSchema = pureNumberSchema('a coefficient of variation (sd / mean), e.g. 0.1');
+const sourceSchema = z
+  .string({ error: (iss) => `expected a text saying where these statistics come from, got ${describeInput(iss.input)}` })
+  .optional()
+  .meta({ description: 'where the statistics come from (free text, printed in the Inputs table), e.g. mill certificates 2019, site survey, EN 1990 Annex C' });
 
 /** `{dist: NAME, ...}` with the parameters docs/scenario-format.md gives each distribution. */
 export function randomVariableSchema<X extends z.core.$ZodLooseShape = Record<never, never>>(value: () => ValueSchema, extra: X = {} as X) {
   const meanSdCov = <const D extends DistName>(dist: D) =>
-    strict({ dist: z.literal(dist), mean: value(), sd: value().optional(), cov: covSchema.optional(), ...extra }, `a ${dist} variable (mean and one of sd, cov)`);
+    strict({ dist: z.literal(dist), mean: value(), sd: value().optional(), cov: covSchema.optional(), source: sourceSchema, ...extra }, `a ${dist} variable (mean and one of sd, cov)`);
   return z
     .discriminatedUnion(
       'dist',
@@ -129,13 +133,13 @@ export function randomVariableSchema<X extends z.core.$ZodLooseShape = Record<ne
         meanSdCov('normal'),
         meanSdCov('lognormal'),
         meanSdCov('gumbel'),
-        strict({ dist: z.literal('uniform'), min: value(), max: value(), ...extra }, 'a uniform variable (min, max)'),
+        strict({ dist: z.literal('uniform'), min: value(), max: value(), source: sourceSchema, ...extra }, 'a uniform variable (min, max)'),
         strict(
-          { dist: z.literal('truncnormal'), mean: value(), sd: value(), min: value().optional(), max: value().optional(), ...extra },
+          { dist: z.literal('truncnormal'), mean: value(), sd: value(), min: value().optional(), max: value().optional(), source: sourceSchema, ...extra },
           'a truncnormal variable (mean and sd of the parent normal; min and/or max)',
         ),
         meanSdCov('weibull'),
-        strict({ dist: z.literal('beta'), min: value(), max: value(), mean: value(), sd: value(), ...extra }, 'a beta variable (min, max, mean, sd)'),
+        strict({ dist: z.literal('beta'), min: value(), max: value(), mean: value(), sd: value(), source: sourceSchema, ...extra }, 'a beta variable (min, max, mean, sd)'),
       ],
       {
         error: (iss) => {

@@ -146,6 +146,8 @@ export interface Scenario {
   readonly displayUnits: 'si' | 'us';
   /** The unit the user wrote for each field path (`column.material.E` → MPa), for echoing inputs. */
   readonly units: Readonly<Record<string, DisplayUnit>>;
+  /** The `source:` note of each random variable that has one, by path, as written. */
+  readonly sources?: Readonly<Record<string, string>>;
 }
 
 export interface RandomVariable {

@@ -146,7 +146,7 @@ export function reliabilityJson(a: Assessment): Record<string, unknown> {
       note: m.note,
     }));
   }
-  r.verdict = { agree: a.verdict.agree, trust: a.verdict.trust, reason: a.verdict.reason };
+  r.verdict = { agree: a.verdict.agree, material: a.verdict.material, trust: a.verdict.trust, reason: a.verdict.reason };
   r.governing = a.governing;
   const c = a.combinations;
   if (c) {

@@ -21,6 +21,8 @@ import type { EndSpringMoments } from '../mechanics/endSpringMoments.js';
 import type { ConnectionValues } from '../report/reportInput.js';
 import { designPointConnections } from './designPointConnections.js';
 import { strengthUsesBow } from '../mechanics/strengthModelKind.js';
+import { makeDistribution } from '../probability/makeDistribution.js';
+import { zeroFailureBound } from '../reliability/zeroFailureBound.js';
 
 function connectionValues(m: EndSpringMoments): ConnectionValues {
   return {
@@ -57,7 +59,12 @@ function inputRows(s: Scenario): InputRow[] {
       return { path, description: describePath(path), kind, distribution: 'fixed', parameters: { value: scalar.value } };
     }
     const { dist, ...params } = scalar.spec;
-    return { path, description: describePath(path), kind, distribution: dist, parameters: params };
+    // both spreads, whichever was given: sd from the distribution itself, CoV = sd / |mean|
+    const d = makeDistribution(scalar.spec);
+    const parameters = { ...params, mean: params.mean ?? d.mean, sd: params.sd ?? d.sd };
+    if (parameters.cov === undefined && d.mean !== 0) parameters.cov = d.sd / Math.abs(d.mean);
+    const source = s.sources?.[path];
+    return { path, description: describePath(path), kind, distribution: dist, parameters, ...(source ? { source } : {}) };
   });
 }
 
@@ -103,6 +110,16 @@ function partialFactors(a: Assessment): PartialFactorRow[] {
   });
 }
 
+/** The governing estimate; Monte Carlo with no failure stands as its one-sided bound (β above it). */
+function governingForReport(a: Assessment): ReportInput['reliability']['governing'] {
+  const g = a.governing;
+  if (g.method === 'mc' && a.mc && a.mc.failures === 0 && a.mc.samples > 0 && !g.basis) {
+    const b = zeroFailureBound(a.mc.samples);
+    return { method: 'mc', beta: b.beta, pf: b.pf, lowerBound: true, basis: `Monte Carlo with no failure in ${a.mc.samples} samples (one-sided 95 % bound)` };
+  }
+  return { ...g, ...(g.basis?.includes('upper bound') ? { lowerBound: true } : {}) };
+}
+
 export function assessmentReportInput(a: Assessment, meta: RunMeta): ReportInput {
   const s = a.scenario;
   const model = a.model;
@@ -116,8 +133,8 @@ export function assessmentReportInput(a: Assessment, meta: RunMeta): ReportInput
   const c = a.check;
   const f = a.form;
   const rel: ReportInput['reliability'] = {
-    governing: a.governing,
-    agreement: { consistent: a.verdict.agree, text: a.verdict.reason },
+    governing: governingForReport(a),
+    agreement: { consistent: a.verdict.agree || !a.verdict.material, text: a.verdict.reason },
     target: {
       beta: s.targetBeta,
       source: targetSource(s),
@@ -156,6 +173,7 @@ export function assessmentReportInput(a: Assessment, meta: RunMeta): ReportInput
       failures: a.mc.failures,
       ci95: a.mc.ci95,
       convergence: a.mc.trace,
+      ...(a.mc.failures === 0 && a.mc.samples > 0 ? { zeroFailureBound: ((b) => ({ pf: b.pf, beta: b.beta }))(zeroFailureBound(a.mc.samples)) } : {}),
     };
   }
   if (a.combinations && rel.form) Object.assign(rel.form, { beta: a.combinations.formSystem.beta, pf: a.combinations.formSystem.pf });

@@ -232,7 +232,7 @@ export function checkedGoverning(
   const method: Method = check.method === 'Monte Carlo' ? 'mc' : 'is';
   return {
     governing: { method, ...estimate, basis: `${label}'s self-check by ${check.method}${bound ? ', upper bound' : ''}` },
-    verdict: { ...v, agree: false, trust: method, reason: `${v.reason} ${line}` },
+    verdict: { ...v, agree: false, material: true, trust: method, reason: `${v.reason} ${line}` },
     check,
     warning: line,
   };
@@ -338,7 +338,7 @@ export async function assessColumn(given: Scenario, opts: AssessOptions = {}): P
     is: out.is,
     mc: out.mc,
     subset: out.subset,
-  });
+  }, { target: s.targetBeta });
   const checked = checkedGoverning(simProblem, sysForm, v, governingEstimate({ form: sysForm, ...out, sorm: sysSorm, methods }, v), seed);
   const governing = checked.governing;
   if (checked.warning) warnings.unshift(checked.warning);

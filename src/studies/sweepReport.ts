@@ -15,6 +15,7 @@ import { assessmentJson, jsonSafe, type RunMeta } from './assessmentJson.js';
 import { assessmentReportInput } from './assessmentReport.js';
 import type { SweepTable } from './sweepTable.js';
 import type { SweepValue } from './sweepTypes.js';
+import { targetCrossings } from './targetCrossing.js';
 
 const DISTRIBUTION_LEAF = /\.(mean|sd|cov|min|max)$/;
 
@@ -40,7 +41,7 @@ function numberOr(v: unknown, fallback: number): number {
   return typeof v === 'number' ? v : fallback;
 }
 
-export function sweepResults(table: SweepTable, methods: readonly Method[], columnLength: number): SweepResults | undefined {
+export function sweepResults(table: SweepTable, methods: readonly Method[], columnLength: number, targetBeta: number): SweepResults | undefined {
   if (table.varied.length < 1 || table.varied.length > 2) return undefined;
   const method = (['form', 'sorm', 'is', 'subset', 'mc'] as const).find((m) => methods.includes(m)) ?? 'form';
   const varied = table.varied.map((path) => ({ path, kind: kindOfSweptPath(path) }));
@@ -57,7 +58,9 @@ export function sweepResults(table: SweepTable, methods: readonly Method[], colu
       };
     })
     .filter((r) => Object.values(r.values).every(Number.isFinite) && Number.isFinite(r.beta));
-  return { varied, rows, method };
+  const meeting = { count: rows.filter((r) => r.beta >= targetBeta).length, total: rows.length };
+  const crossings = varied.length === 1 ? targetCrossings(rows.map((r) => r.values[varied[0].path]), rows.map((r) => r.beta), targetBeta) : [];
+  return { varied, rows, method, meeting, crossings };
 }
 
 export async function writeSweepReport(opts: {
@@ -75,10 +78,11 @@ export async function writeSweepReport(opts: {
   const a = await assessColumn(s, { methods: ['form', 'sorm'], units: opts.units ?? s.displayUnits });
   const json = assessmentJson(a, opts.meta) as Record<string, unknown>;
   const input: ReportInput = assessmentReportInput(a, opts.meta);
-  const sweep = sweepResults(opts.table, opts.methods, s.column.length);
+  input.subject = 'sweep';
+  const sweep = sweepResults(opts.table, opts.methods, s.column.length, s.targetBeta);
   if (sweep) input.sweep = sweep;
   else input.cautions.push('The sweep varied more than two quantities: its results are in sweep.csv, not charted.');
-  input.cautions.unshift('The sections before the sweep describe the base scenario (FORM and SORM); the sweep section lists every case.');
+  input.cautions.unshift('The sections after the sweep describe the base scenario (FORM and SORM); every case is in sweep.csv.');
   json.sweep = jsonSafe({ varied: opts.table.varied, rows: opts.table.finished, method: sweep?.method ?? null });
   // force: the sweep regenerates its own report at every complete run, and writeOutputs replaces only a marked folder
   return writeOutputs(opts.dir, input, json, { force: true, inputFiles: opts.inputFiles, units: opts.units ?? s.displayUnits });

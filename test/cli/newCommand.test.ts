@@ -23,7 +23,7 @@ describe('stanchion new', () => {
     const cli = JSON.stringify(CLI);
     const pipeline = spawnSync('bash', ['-o', 'pipefail', '-c', `${node} ${cli} new | ${node} ${cli} check -`], { cwd: ROOT, encoding: 'utf8' });
     expect(pipeline.status, pipeline.stderr).toBe(0);
-    expect(pipeline.stdout).toMatch(/utilization/);
+    expect(pipeline.stdout).toMatch(/mean-value ratio/);
   });
 
   it('writes FILE, which `check --json` reads', () => {

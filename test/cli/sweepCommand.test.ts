@@ -153,6 +153,24 @@ describe('stanchion sweep', () => {
     expect(files('reference')).toEqual(reference);
   });
 
+  it('ends with how many cases meet the target and where β crosses it; the report path comes last', () => {
+    const r = runCli(['sweep', scenario, '--vary', 'column.length=3 m:9 m:4', '--out', join(dir, 'line')]);
+    expect(r.status, r.stderr).toBe(0);
+    const csv = readFileSync(join(dir, 'line', 'sweep.csv'), 'utf8').trim().split('\n');
+    const beta = csv[0].split(',').indexOf('beta_form');
+    const betas = csv.slice(1).map((l) => Number(l.split(',')[beta]));
+    const meeting = betas.filter((b) => b >= 3.8).length;
+    const last = r.stdout.trimEnd().split('\n').pop() ?? '';
+    expect(last).toMatch(new RegExp(`^result: ${meeting} of 4 cases meet the target β = 3\\.80`));
+    // β falls with the length and the range is chosen so that it crosses 3.8 inside it
+    expect(meeting).toBeGreaterThan(0);
+    expect(meeting).toBeLessThan(4);
+    expect(last).toMatch(/; β crosses it at column length = \d\.\d+ m$/);
+    const err = r.stderr.trimEnd().split('\n');
+    expect(err[err.length - 1]).toMatch(/^stanchion: sweep report written to .*line\/report\/report\.html$/);
+    expect(err[err.length - 2]).toBe('stanchion: writing the report …');
+  });
+
   it('reads a sweep file whose scenario path is relative to it', () => {
     const file = join(dir, 'study.yaml');
     writeFileSync(file, ['scenario: column.yaml', 'seed: 3', 'vary:', '  - "loads.dead.mean=300 kN:400 kN:3"', ''].join('\n'));

@@ -20,7 +20,8 @@ describe('verdict', () => {
     expect(v.agree).toBe(true);
     expect(v.trust).toBe('is');
     expect(v.reference).toBe('is');
-    expect(v.reason).toMatch(/^All estimates agree/);
+    expect(v.reason).toMatch(/^All 4 estimates agree within their uncertainty \(largest Δβ = 0\.\d\d\)/);
+    expect(v.material).toBe(false);
     expect(v.comparisons.map((c) => c.method)).toEqual(['form', 'sorm', 'mc', 'is']);
   });
 
@@ -33,7 +34,8 @@ describe('verdict', () => {
     expect(v.agree).toBe(false);
     expect(v.trust).toBe('is');
     expect(v.comparisons.find((c) => c.method === 'sorm')?.consistent).toBe(true);
-    expect(v.reason).toMatch(/FORM differs from IS .* but SORM agrees: curvature matters/);
+    expect(v.reason).toMatch(/FORM \(β = \d\.\d\d\) differs from IS .* by Δβ = \d\.\d\d but SORM \(β = \d\.\d\d\) agrees: curvature matters/);
+    expect(v.material).toBe(true);
   });
 
   it('§R1d n = 100: FORM and SORM both fail, subset simulation is trusted', () => {
@@ -57,7 +59,7 @@ describe('verdict', () => {
     const v = verdict({ form: f, sorm: sorm(p, f), mc });
     expect(v.trust).toBe('sorm');
     expect(v.agree).toBe(true);
-    expect(v.reason).toMatch(/MC has 0 failures in 20000 samples: its pf is only an upper bound .*SORM lies below it/);
+    expect(v.reason).toMatch(/MC has 0 failures in 20000 samples: it only bounds pf .*β ≥ 3\.\d\d.*SORM \(β = 5\.\d\d\) lies below it/);
   });
 
   it('FORM and SORM alone: a large difference means curvature matters', () => {
@@ -67,7 +69,7 @@ describe('verdict', () => {
     const v = verdict({ form: f, sorm: sorm(p, f) });
     expect(v.agree).toBe(false);
     expect(v.trust).toBe('sorm');
-    expect(v.reason).toMatch(/FORM and SORM differ by \d+ %: curvature matters, trust SORM/);
+    expect(v.reason).toMatch(/FORM β = 3\.00, SORM β = 3\.\d\d differ by Δβ = 0\.\d\d: curvature matters, trust SORM/);
   });
 
   it('IS centred on one of two design points disagrees with MC: trust MC', async () => {
@@ -83,5 +85,26 @@ describe('verdict', () => {
     expect(v.agree).toBe(false);
     expect(v.trust).toBe('mc');
     expect(v.reason).toMatch(/IS may have missed a failure region/);
+  });
+
+  it('a significant but small difference is immaterial; across the target it matters', () => {
+    // common practice: a linear limit state in normals, FORM exact; IS with a tiny CoV and a pf 20 % off (beyond the 10 % floor)
+    const f = { beta: 3, pf: 1.3499e-3, converged: true, system: { pf: 1.3499e-3, designPoints: [{}] } } as unknown as Parameters<typeof verdict>[0]['form'];
+    const is = { pf: 1.3499e-3 * 1.2, cov: 0.005, failures: 40_000, samples: 1e6 } as unknown as Parameters<typeof verdict>[0]['is'];
+    const v = verdict({ form: f, is });
+    expect(v.agree).toBe(false); // 20 % apart at a 0.5 % CoV: beyond 3 σ and the floor
+    expect(v.material).toBe(false); // Δβ ≈ 0.06
+    expect(v.reason).toMatch(/by Δβ = 0\.0[56].*too little to change the verdict/);
+    const across = verdict({ form: f, is }, { target: 2.99 }); // IS β ≈ 2.95 lies below the target, FORM above
+    expect(across.material).toBe(true);
+    expect(across.reason).toMatch(/FORM \(β = 3\.00\) differs from IS/);
+  });
+
+  it('one method alone never reads as agreement', async () => {
+    const p = resistanceMinusLoad({ r: { dist: 'normal', mean: 200, sd: 20 }, s: { dist: 'normal', mean: 100, sd: 25 } });
+    const mc = await monteCarlo(p, { samples: 100_000, seed: 1 });
+    const v = verdict({ mc });
+    expect(v.reason).toMatch(/^Only MC/);
+    expect(v.reason).not.toMatch(/agree/);
   });
 });

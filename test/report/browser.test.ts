@@ -8,7 +8,8 @@ import { dirname, join, resolve } from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { chromium, type Browser, type Page } from 'playwright-core';
 import { writeOutputs } from '../../src/report/writeOutputs.js';
-import { SECTION_TITLES } from '../../src/report/reportDocument.js';
+import { SECTION_TITLES, sectionOrder } from '../../src/report/reportDocument.js';
+import { overlappingLabels, type TextBox } from '../support/svgTextBoxes.js';
 import { buildCharts } from '../../src/report/charts/allCharts.js';
 import { demoReportInput, demoResultJson } from './fixture.js';
 
@@ -21,10 +22,19 @@ const HERE = dirname(fileURLToPath(import.meta.url));
 const SCREENSHOT = resolve(HERE, '../../reports/screenshots/report-fixture.png');
 // evaluated in the page (the project's TypeScript has no DOM types)
 const TOC_DISPLAY = "getComputedStyle(document.querySelector('nav.toc')).display";
+// the boxes the browser drew for every visible text of every chart
+const CHART_TEXT_BOXES = `[...document.querySelectorAll('figure.chart')].map((f) => ({
+  name: f.dataset.chart,
+  boxes: [...f.querySelectorAll('svg text')]
+    .filter((t) => t.textContent.trim() !== '' && t.getAttribute('opacity') !== '0')
+    .map((t) => { const r = t.getBoundingClientRect(); return { text: t.textContent, x0: r.left, y0: r.top, x1: r.right, y1: r.bottom }; }),
+}))`;
+const FIRST_SECTION = "(() => { const s = document.querySelector('main section'); return { id: s.id, heading: s.querySelector('h2').textContent, box: s.querySelector('.result-box .headline')?.textContent ?? null }; })()";
 const ARGS = ['--headless', '--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run', '--disable-quic'];
 
 describe.skipIf(SKIP)('report.html in Chromium', () => {
-  const input = demoReportInput();
+  // a sweep report: it holds every section and every chart the fixture has data for
+  const input = { ...demoReportInput(), subject: 'sweep' as const };
   const problems: string[] = [];
   let root = '';
   let browser: Browser | undefined;
@@ -61,7 +71,7 @@ describe.skipIf(SKIP)('report.html in Chromium', () => {
 
   it('shows every section and every chart with its title', async () => {
     const headings = await page.locator('h2').allTextContents();
-    expect(headings).toEqual(Object.values(SECTION_TITLES));
+    expect(headings).toEqual(sectionOrder('sweep').map((id) => SECTION_TITLES[id]));
     const charts = buildCharts(input, 'si');
     expect(await page.locator('figure.chart svg').count()).toBe(charts.length);
     for (const c of charts) {
@@ -71,6 +81,23 @@ describe.skipIf(SKIP)('report.html in Chromium', () => {
       expect(box && box.width > 200 && box.height > 100).toBe(true);
     }
     expect(await page.locator('figure.sketch svg').count()).toBe(1);
+  });
+
+  it('opens with the result box as its first section', async () => {
+    const first = await page.evaluate<{ id: string; heading: string; box: string | null }>(FIRST_SECTION);
+    expect(first.id).toBe('result');
+    expect(first.heading).toBe(SECTION_TITLES.result);
+    expect(first.box).toMatch(/^\d+ of \d+ cases meet the target/); // a sweep report leads with its count
+  });
+
+  it('draws no two text labels of any chart on top of each other', async () => {
+    const charts = await page.evaluate<{ name: string; boxes: TextBox[] }[]>(CHART_TEXT_BOXES);
+    expect(charts.length).toBe(buildCharts(input, 'si').length);
+    for (const c of charts) {
+      expect(c.boxes.length).toBeGreaterThan(3);
+      const clashes = overlappingLabels(c.boxes, 1.5).map(([a, b]) => `${c.name}: "${a.text}" / "${b.text}"`);
+      expect(clashes).toEqual([]);
+    }
   });
 
   it('prints: the print stylesheet applies and A4 and Letter PDFs are produced', async () => {

@@ -57,22 +57,32 @@ describe('chart set', () => {
 });
 
 describe('tornado charts', () => {
-  it('draw two bars per variable and the baseline', () => {
-    for (const [name, n] of [
-      ['tornado-utilization', input.sensitivity.utilization.rows.length],
-      ['tornado-capacity', input.sensitivity.capacity.rows.length],
-      ['conditional-beta', input.sensitivity.conditionalBeta.rows.length],
+  const description = (path: string) => input.inputs.find((r) => r.path === path)!.description;
+  const moving = (t: { baseline: number; rows: { variable: string; low: number; high: number }[] }) => t.rows.filter((r) => r.low !== t.baseline || r.high !== t.baseline);
+
+  it('draw two bars per variable that moves, under its description, and the baseline', () => {
+    for (const [name, t] of [
+      ['tornado-utilization', input.sensitivity.utilization],
+      ['tornado-capacity', input.sensitivity.capacity],
+      ['conditional-beta', input.sensitivity.conditionalBeta],
     ] as const) {
-      expect(countMarks(svgs[name], 'tornadoBars')).toBe(2 * n);
+      expect(countMarks(svgs[name], 'tornadoBars')).toBe(2 * moving(t).length);
       expect(countMarks(svgs[name], 'baseline')).toBe(1);
-      for (const r of input.sensitivity.utilization.rows) expect(svgTexts(svgs[name])).toContain(r.variable);
+      const texts = svgTexts(svgs[name]);
+      for (const r of moving(t)) expect(texts).toContain(description(r.variable));
+      expect(texts.join(' ')).not.toMatch(/column\.(ends|material|imperfection)\./);
     }
+  });
+
+  it('name the variables a tornado leaves out because they move nothing', () => {
+    // the fixture's loads and model factor leave the capacity where it is
+    expect(svgTexts(svgs['tornado-capacity']).join(' ')).toContain('Not shown (no effect on the capacity): Dead load, Imposed load, 50-year maximum, Model uncertainty on the capacity.');
   });
 
   it('put the largest swing on top', () => {
     const texts = svgTexts(svgs['tornado-utilization']);
-    const first = texts.indexOf(input.sensitivity.utilization.rows[0].variable);
-    const last = texts.indexOf(input.sensitivity.utilization.rows[input.sensitivity.utilization.rows.length - 1].variable);
+    const first = texts.indexOf(description(input.sensitivity.utilization.rows[0].variable));
+    const last = texts.indexOf(description(input.sensitivity.utilization.rows[input.sensitivity.utilization.rows.length - 1].variable));
     expect(first).toBeGreaterThanOrEqual(0);
     expect(first).toBeLessThan(last);
   });

@@ -5,6 +5,7 @@
  * plausible. Nothing here is a check value.
  */
 import type { ModeShapeData, ReportInput, SweepResults } from '../../src/report/reportInput.js';
+import { targetCrossings } from '../../src/studies/targetCrossing.js';
 
 const L = 6.0;
 const EI = 200e9 * 25.1e-6;
@@ -108,6 +109,8 @@ export function demoSweep1D(): SweepResults {
     varied: [{ path: 'column.length', kind: 'length' }],
     method: 'form',
     rows: lengths.map((l, i) => ({ values: { 'column.length': l }, beta: betas[i], pf: PF_OF_BETA[i], utilization: 0.45 + 0.03 * i })),
+    meeting: { count: betas.filter((b) => b >= 3.8).length, total: betas.length },
+    crossings: targetCrossings(lengths, betas, 3.8),
   };
 }
 
@@ -129,6 +132,8 @@ export function demoSweep2D(): SweepResults {
     ],
     method: 'form',
     rows,
+    meeting: { count: rows.filter((r) => r.beta >= 3.8).length, total: rows.length },
+    crossings: [],
   };
 }
 

@@ -1,7 +1,7 @@
 // The words of the report follow the numbers they are given. common practice: check the verdicts both ways.
 import { describe, expect, it } from 'vitest';
 import { buildReportDocument } from '../../src/report/reportSections.js';
-import { SECTION_TITLES, type Block, type ReportDocument } from '../../src/report/reportDocument.js';
+import { SECTION_TITLES, sectionOrder, type Block, type ReportDocument } from '../../src/report/reportDocument.js';
 import { renderMarkdown } from '../../src/report/markdownReport.js';
 import { buildCharts } from '../../src/report/charts/allCharts.js';
 import { STANDING_CAUTIONS } from '../../src/report/standingCautions.js';
@@ -17,16 +17,72 @@ function sectionText(d: ReportDocument, id: keyof typeof SECTION_TITLES): string
   const s = d.sections.find((x) => x.id === id);
   if (!s) return '';
   const text = (b: Block): string =>
-    b.kind === 'table' ? [b.caption ?? '', ...b.head, ...b.rows.flat()].join(' ') : b.kind === 'list' ? b.items.join(' ') : 'text' in b ? b.text : b.kind;
+    b.kind === 'table' ? [b.caption ?? '', ...b.head, ...b.rows.flat()].join(' ') : b.kind === 'result' ? [b.headline, ...b.items.map((i) => `${i.label}: ${i.text}`)].join('\n') : b.kind === 'list' ? b.items.join(' ') : 'text' in b ? b.text : b.kind;
   return s.blocks.map(text).join('\n');
 }
 
 describe('report document', () => {
-  it('has the sections in order, the sweep only when a sweep ran', () => {
-    const full = doc(demoReportInput());
-    expect(full.sections.map((s) => s.title)).toEqual(Object.values(SECTION_TITLES));
-    const noSweep = doc({ ...demoReportInput(), sweep: undefined });
-    expect(noSweep.sections.map((s) => s.id)).not.toContain('sweep');
+  it('opens with the result, then its own subject, details, and the scenario appendix last', () => {
+    const assess = doc(demoReportInput()).sections.map((s) => s.id);
+    expect(assess).toEqual(sectionOrder('assessment'));
+    expect(assess.slice(0, 3)).toEqual(['result', 'target', 'restraint']);
+    expect(assess.slice(-2)).toEqual(['inputs', 'reproducibility']);
+    const restraint = doc({ ...demoReportInput(), subject: 'restraint' }).sections.map((s) => s.id);
+    expect(restraint.slice(0, 2)).toEqual(['result', 'restraint']);
+    const sweep = doc({ ...demoReportInput(), subject: 'sweep' }).sections.map((s) => s.id);
+    expect(sweep.slice(0, 2)).toEqual(['result', 'sweep']);
+    expect(sweep.slice(-3)).toEqual(['inputs', 'sweepCases', 'reproducibility']);
+    expect(Object.keys(SECTION_TITLES).sort()).toEqual([...new Set([...sectionOrder('assessment'), ...sectionOrder('sweep')])].sort());
+  });
+
+  it('puts the verdict, the target source, the method, the restraint and the driver in the result box', () => {
+    const box = doc(demoReportInput()).sections[0].blocks[0];
+    expect(box.kind).toBe('result');
+    if (box.kind !== 'result') return;
+    expect(box.tone).toBe('warn');
+    expect(box.headline).toContain('FALLS SHORT of the target by Δβ = 0.61'); // 3.80 − 3.194 from the fixture
+    const text = box.items.map((i) => `${i.label}: ${i.text}`).join('\n');
+    expect(text).toContain('EN 1990 Annex C');
+    expect(text).toMatch(/Governing method: /);
+    expect(text).toMatch(/Restraint required: bottom: at least \d/);
+    expect(text).toContain('Leading driver: Rotational stiffness of the base plate'); // the fixture's description, not the path
+    expect(text).not.toContain('column.ends.bottom.rotation');
+    expect(text).toContain('licensed engineer');
+    const meets = demoReportInput();
+    meets.reliability.governing = { method: 'form', beta: 4.1, pf: 2.07e-5 };
+    const okBox = doc(meets).sections[0].blocks[0];
+    expect(okBox.kind === 'result' && okBox.tone === 'ok' && okBox.headline.startsWith('MEETS')).toBe(true);
+  });
+
+  it('states Monte Carlo without failure as a one-sided bound, never β ∞', () => {
+    const input = demoReportInput();
+    // source: exact binomial bound 1 − 0.05^(1/n) (Clopper & Pearson 1934); n = 2×10⁶ gives 1.5×10⁻⁶, β 4.67
+    input.reliability.mc = { ...input.reliability.mc!, failures: 0, pf: 0, beta: Infinity, samples: 2e6, zeroFailureBound: { pf: 1.4979e-6, beta: 4.6725 } };
+    const t = sectionText(doc(input), 'methods');
+    expect(t).toContain('> 4.67');
+    expect(t).toContain('< 1.5×10⁻⁶');
+    expect(t).not.toContain('∞');
+  });
+
+  it('uses the variable descriptions outside the Inputs table, and keeps the path there', () => {
+    const d = doc(demoReportInput());
+    for (const id of ['sensitivity', 'partialFactors', 'result'] as const) expect(sectionText(d, id)).not.toMatch(/column\.(ends|material|imperfection)\./);
+    const inputs = sectionText(d, 'inputs');
+    expect(inputs).toContain('column.ends.bottom.rotation');
+    expect(inputs).toContain('Rotational stiffness of the base plate');
+  });
+
+  it('writes each pf column in one form and clips Sobol indices into [0, 1], marked', () => {
+    const input = demoReportInput();
+    input.sensitivity.sobol = { samples: 4096, rows: [{ variable: 'loads.dead', first: -0.03, firstCi95: [-0.08, 0.02], total: 0.02, totalCi95: [0, 0.05] }] };
+    const s = sectionText(doc(input), 'sensitivity');
+    expect(s).toContain('0.00*');
+    expect(s).toContain('shown clipped');
+    expect(s).toContain('α²');
+    const pfColumn = doc(input).sections.find((x) => x.id === 'methods')!.blocks.find((b) => b.kind === 'table' && b.head[2] === 'pf');
+    const cells = pfColumn && pfColumn.kind === 'table' ? pfColumn.rows.map((r) => r[2]) : [];
+    expect(cells.length).toBeGreaterThan(1);
+    expect(cells.every((c) => c.includes('×10'))).toBe(true);
   });
 
   it('says the column falls short when β < target, and by how much', () => {

@@ -4,14 +4,18 @@ import { PALETTE } from '../chartStyle.js';
 import { chartBase } from './chartBase.js';
 import type { ChartSpec } from './chartSpec.js';
 
-export const RESISTANCE_SIDE = 'resistance side (design value below the mean)';
-export const LOAD_SIDE = 'load side (design value above the mean)';
+import { variableNamer } from '../variableNames.js';
+
+// the sign of α: FORM moves a variable down (α < 0) when low values are the harmful ones
+export const RESISTANCE_SIDE = 'unfavourable when low (design value below the mean)';
+export const LOAD_SIDE = 'unfavourable when high (design value above the mean)';
 
 export function importanceChart(input: ReportInput): ChartSpec {
+  const name = variableNamer(input);
   const rows = [...input.sensitivity.importance]
     .sort((a, b) => b.alphaSquared - a.alphaSquared)
     .map((r) => ({
-      variable: r.variable,
+      variable: name(r.variable),
       alpha2: r.alphaSquared,
       side: r.alpha < 0 ? RESISTANCE_SIDE : LOAD_SIDE,
       label: `${(100 * r.alphaSquared).toFixed(1)} %`,
@@ -22,7 +26,7 @@ export function importanceChart(input: ReportInput): ChartSpec {
     name: 'importance',
     title,
     spec: {
-      ...chartBase(title, 'Share of each variable in the reliability index; they sum to 100 %.'),
+      ...chartBase(title, ['Share of each variable in the reliability index; they sum to 100 %.', 'Colour: the side FORM moved the variable to at the design point.']),
       width: 420,
       height: { step: 26 },
       data: { values: rows },

@@ -14,17 +14,20 @@ export function samplesHistogramChart(_input: ReportInput, samples: SamplesSumma
   const unit = displayUnit('force', system);
   const r = samples.resistance.map((v) => toDisplay(v, unit));
   const s = samples.demand.map((v) => toDisplay(v, unit));
-  // a common range that trims the extreme 0.1 % tails, so one outlier does not squash the plot
+  // the failing tails (low resistance, high demand) are shown whole; only the harmless ends are trimmed at 0.1 %
   const dp = toDisplay(samples.designPoint.demand, unit);
-  const lo = Math.min(sampleQuantile(r, 0.001), sampleQuantile(s, 0.001), dp);
-  const hi = Math.max(sampleQuantile(r, 0.999), sampleQuantile(s, 0.999), dp);
+  const lo = Math.min(Math.min(...r), sampleQuantile(s, 0.001), dp);
+  const hi = Math.max(sampleQuantile(r, 0.999), Math.max(...s), dp);
   const bars = [
     ...histogramBins(r, lo, hi, BIN_COUNT).map((b) => ({ ...b, series: RESISTANCE_LABEL })),
     ...histogramBins(s, lo, hi, BIN_COUNT).map((b) => ({ ...b, series: DEMAND_LABEL })),
   ].filter((b) => b.density > 0);
+  // log density: a tail bin holding one sample in thousands still shows; bars start below the smallest
+  const floor = bars.length > 0 ? Math.min(...bars.map((b) => b.density)) / 2 : 1;
   const title = 'Resistance and demand';
   const subtitle = [
     `${formatNumber(samples.resistance.length, 4)} resistance and ${formatNumber(samples.demand.length, 4)} demand samples shown (of ${formatNumber(samples.totalSamples, 4)} drawn).`,
+    'Density on a log scale, so the tails where demand exceeds resistance show.',
     `Green line: FORM design point, where resistance = demand = ${formatNumber(dp)} ${unit.label}.`,
   ];
   return {
@@ -42,8 +45,8 @@ export function samplesHistogramChart(_input: ReportInput, samples: SamplesSumma
           encoding: {
             x: { field: 'x0', type: 'quantitative', title: axisTitle('axial force', unit.label), scale: { domain: [lo, hi], nice: false } },
             x2: { field: 'x1' },
-            y: { field: 'density', type: 'quantitative', title: 'probability density', axis: { labels: false, ticks: false } },
-            y2: { datum: 0 },
+            y: { field: 'density', type: 'quantitative', title: 'probability density (log)', scale: { type: 'log', domainMin: floor }, axis: { labels: false, ticks: false } },
+            y2: { datum: floor },
             color: {
               field: 'series',
               type: 'nominal',

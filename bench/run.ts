@@ -8,6 +8,7 @@ import { dirname, join } from 'node:path';
 import { runMechanicsBench } from './mechanicsBench.js';
 import { runReliabilityBench } from './reliabilityBench.js';
 import { runSweepBench } from './sweepBench.js';
+import { runKernelBench } from './kernelBench.js';
 import { columnRecipe } from '../src/limitState/columnRecipe.js';
 import { loadScenario } from '../src/scenario/loadScenario.js';
 
@@ -28,6 +29,9 @@ async function main(): Promise<void> {
   }
   console.log('\n## mechanics (critical-load solves per second)');
   for (const line of await runMechanicsBench()) console.log(line);
+  console.log('\n## Monte Carlo kernel (per CPU second; numpy reference: bench/numpy_column_mc.py)');
+  const demo = join(root, 'scenarios', 'braced-base-plate.yaml');
+  for (const line of await runKernelBench({ root, recipe: recipeFor('braced-base-plate.yaml'), scenario: demo })) console.log(line);
   console.log('\n## reliability (column limit state: scenarios/braced-base-plate.yaml; rare event: scenarios/timber-store-post.yaml)');
   const lines = await runReliabilityBench({
     columnRecipe: recipeFor('braced-base-plate.yaml'),

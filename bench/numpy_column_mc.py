@@ -68,13 +68,13 @@ def char_fn(phi, ra, rb):
 def solve_phi(ra, rb):
     lo = np.full(ra.shape, math.pi)
     hi = np.full(ra.shape, 2 * math.pi - 1e-9)
-    for _ in range(14):
+    for _ in range(8):
         mid = 0.5 * (lo + hi)
         pos = char_fn(mid, ra, rb) > 0
         lo = np.where(pos, mid, lo)
         hi = np.where(pos, hi, mid)
     phi = 0.5 * (lo + hi)
-    for _ in range(3):
+    for _ in range(4):
         h = 1e-7 * phi
         f = char_fn(phi, ra, rb)
         df = (char_fn(phi + h, ra, rb) - f) / h
@@ -88,17 +88,21 @@ def curvature_factor(phi, ra, rb):
     r2 = np.stack([s, c - 1, np.ones_like(phi)])
     coef = np.cross(r1, r2, axis=0)
     a, b, cc = coef[0], coef[1], coef[2]
-    xi = np.linspace(0.0, 1.0, 33)[:, None]
-    w = a * np.sin(phi * xi) + b * (np.cos(phi * xi) - 1) + cc * xi
-    x = xi[np.argmax(np.abs(w), axis=0), 0]
-    for _ in range(3):  # Newton on w'(xi) = 0 from the best grid point
-        t = phi * x
-        w1 = phi * (a * np.cos(t) - b * np.sin(t)) + cc
-        w2 = -phi * phi * (a * np.sin(t) + b * np.cos(t))
-        x = np.clip(x - np.where(w2 != 0, w1 / w2, 0), 0, 1)
-    t = phi * x
-    wmax = np.maximum(np.abs(a * np.sin(t) + b * (np.cos(t) - 1) + cc * x), np.max(np.abs(w), axis=0))
-    return np.sqrt(a * a + b * b) / wmax
+    rho = np.sqrt(a * a + b * b)
+    # interior extremes of w: w' = phi rho cos(t + delta) + C = 0, t = phi xi in [0, phi]
+    delta = np.arctan2(b, a)
+    q = np.clip(-cc / (phi * rho), -1.0, 1.0)
+    base = np.arccos(q)
+    wmax = np.zeros_like(phi)  # w(0) = w(1) = 0
+    for sign in (-1.0, 1.0):
+        for k in (-1.0, 0.0, 1.0, 2.0):
+            t = sign * base - delta + 2 * math.pi * k
+            inside = (t >= 0) & (t <= phi)
+            x = np.where(inside, t / phi, 0.0)
+            w = a * np.sin(phi * x) + b * (np.cos(phi * x) - 1) + cc * x
+            wmax = np.maximum(wmax, np.where(inside, np.abs(w), 0.0))
+    # braced: phi >= pi, so a crest of |w''| = phi^2 rho lies inside the column
+    return rho / wmax
 
 
 def capacity(e, fy, bow, phi, c):

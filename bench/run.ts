@@ -11,6 +11,8 @@ import { runMechanicsBench } from './mechanicsBench.js';
 import { runReliabilityBench } from './reliabilityBench.js';
 import { runSweepBench } from './sweepBench.js';
 import { runValidBench } from './validBench.js';
+import { runKernelBench } from './kernelBench.js';
+import { runSweepCostBench } from './sweepCostBench.js';
 import { columnRecipe } from '../src/limitState/columnRecipe.js';
 import { loadScenario } from '../src/scenario/loadScenario.js';
 
@@ -38,6 +40,11 @@ async function main(): Promise<void> {
   }
   console.log('\n## mechanics (critical-load solves per second)');
   for (const line of await runMechanicsBench()) console.log(line);
+  console.log('\n## Monte Carlo kernel (per CPU second; numpy reference: bench/numpy_column_mc.py)');
+  const demo = join(root, 'scenarios', 'braced-base-plate.yaml');
+  for (const line of await runKernelBench({ root, recipe: recipeFor('braced-base-plate.yaml'), scenario: demo })) console.log(line);
+  console.log('\n## sweep cost per case');
+  for (const line of await runSweepCostBench(demo)) console.log(line);
   console.log('\n## reliability (column limit state: scenarios/braced-base-plate.yaml; rare event: scenarios/timber-store-post.yaml)');
   const lines = await runReliabilityBench({
     columnRecipe: recipeFor('braced-base-plate.yaml'),

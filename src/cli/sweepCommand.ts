@@ -12,7 +12,7 @@
 import { createHash } from 'node:crypto';
 import { closeSync, existsSync, openSync, readdirSync, readFileSync, readSync, rmSync, statSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
-import { basename, join, relative } from 'node:path';
+import { basename, join, relative, resolve } from 'node:path';
 import { Command, InvalidArgumentError, Option } from 'commander';
 import YAML from 'yaml';
 import { InputError } from '../scenario/inputError.js';
@@ -40,6 +40,8 @@ import { InterruptedError, isInterruptedError } from '../runtime/interruptFlag.j
 import type { SweepTable } from '../studies/sweepTable.js';
 import type { CaseTable, Shard, SweepDefinition, SweepRecord } from '../studies/sweepTypes.js';
 import { parseVaryOption } from '../studies/varyOption.js';
+import { slurmArrayScript } from '../studies/arrayScript.js';
+import { isAutoShard, shardFromScheduler } from '../studies/schedulerShard.js';
 import { parseMethods, parseNonNegativeInteger, parseSampleCount, parseWorkerCount, parseCaseCount, parseShard } from './optionParsers.js';
 import { readScenarioText, readTextFileBounded } from './readScenarioText.js';
 import { checkFolderTarget } from './outputFolder.js';
@@ -53,7 +55,10 @@ export interface SweepOptions {
   seed?: number;
   samples?: number;
   workers: number;
-  shard?: Shard;
+  /** I/N, or the scheduler spellings `auto` / `auto/N` (studies/schedulerShard.ts). */
+  shard?: Shard | string;
+  /** Print a Slurm job-array script of this many shards instead of running. */
+  emitArrayScript?: number;
   state?: string;
   out?: string;
   force?: boolean;
@@ -359,9 +364,36 @@ export function cappedWorkers(asked: number, cores: number = availableParallelis
   return cores;
 }
 
-export async function runSweepCommand(file: string, opts: SweepOptions): Promise<void> {
+/** The sweep's own arguments for a shard job: what the user gave, minus where and how it runs. */
+function shardArguments(file: string, opts: SweepOptions): string[] {
+  const args = [resolve(file)];
+  for (const v of opts.vary ?? []) args.push('--vary', v);
+  if (opts.design !== undefined) args.push('--design', opts.design);
+  if (opts.cases !== undefined) args.push('--cases', String(opts.cases));
+  if (opts.methods !== undefined) args.push('--methods', opts.methods.join(','));
+  if (opts.seed !== undefined) args.push('--seed', String(opts.seed));
+  if (opts.samples !== undefined) args.push('--samples', String(opts.samples));
+  if (opts.units !== undefined) args.push('--units', opts.units);
+  return args;
+}
+
+/** --emit-array-script N: everything is checked as for a run, then only the script is printed. */
+function emitArrayScript(file: string, opts: SweepOptions, shards: number): void {
+  if (file === '-') throw new InputError('--emit-array-script', 'needs a scenario or sweep FILE that the cluster jobs can read, not stdin');
+  if (opts.shard !== undefined) throw new InputError('--emit-array-script', 'writes the shard option of each job itself; leave out --shard');
   const plan = planSweep(file, opts);
-  const shard = opts.shard ?? { index: 0, count: 1 };
+  if (shards > plan.table.count) {
+    throw new InputError('--emit-array-script', `asks for ${shards} shards but the sweep has ${plan.table.count} case${plan.table.count === 1 ? '' : 's'}; give at most ${plan.table.count}`);
+  }
+  const out = resolve(opts.out ?? defaultOut(file));
+  const state = resolve(opts.state ?? join(out, '.state'));
+  process.stdout.write(slurmArrayScript({ shards, sweepArgs: shardArguments(file, opts), state, out, version: toolVersion(), caution: CAUTION }));
+}
+
+export async function runSweepCommand(file: string, opts: SweepOptions): Promise<void> {
+  if (opts.emitArrayScript !== undefined) return emitArrayScript(file, opts, opts.emitArrayScript);
+  const shard = typeof opts.shard === 'string' ? shardFromScheduler(opts.shard) : (opts.shard ?? { index: 0, count: 1 });
+  const plan = planSweep(file, opts);
   const out = opts.out ?? defaultOut(file);
   const stateDir = opts.state ?? join(out, '.state');
   const writesOutputs = shard.count === 1;
@@ -578,7 +610,11 @@ export function registerSweep(program: Command, unitsOption: () => Option): void
     .addOption(new Option('--seed <n>', 'sweep seed; each case derives its own (default: the file\'s, else 1)').argParser(parseNonNegativeInteger))
     .addOption(new Option('--samples <n>', 'Monte Carlo samples per case (default: the scenario\'s mc_samples, else 100000)').argParser(parseSampleCount))
     .addOption(new Option('--workers <n>', 'worker threads (at most the cores available; more are capped)').argParser(parseWorkerCount).default(1))
-    .addOption(new Option('--shard <I/N>', 'run only the cases with index % N == I; join shards with `stanchion merge`').argParser(parseShard))
+    .addOption(
+      new Option('--shard <I/N>', 'run only the cases with index % N == I; join shards with `stanchion merge`. auto: I and N from a job array (Slurm, Grid Engine); auto/N: I from PBS, Torque or LSF')
+        .argParser((v: string) => (isAutoShard(v) ? v.trim() : parseShard(v))),
+    )
+    .addOption(new Option('--emit-array-script <N>', 'print a Slurm job-array script that runs the sweep as N shards, then the merge; runs nothing').argParser(parseCaseCount))
     .option('--state <dir>', 'journal folder for resuming (default OUT/.state)')
     .option('--out <dir>', 'output folder (default sweep-out/<FILE name>)')
     .option('--force', 'discard the journal or results of a different sweep found in the same folders')
@@ -598,6 +634,7 @@ export function registerSweep(program: Command, unitsOption: () => Option): void
         '  stanchion sweep scenarios/braced-base-plate.yaml --vary "column.length=4 m:7 m:7" --vary "loads.dead.mean=300 kN:400 kN:5"',
         '  stanchion sweep scenarios/sweep-base-stiffness.yaml --workers 2',
         '  stanchion sweep scenarios/sweep-base-stiffness.yaml --shard 0/2 --state st   (and 1/2 elsewhere, then: stanchion merge st --out res)',
+        '  stanchion sweep scenarios/sweep-base-stiffness.yaml --emit-array-script 16 > sweep-array.sh && bash sweep-array.sh   (Slurm)',
         '',
         'Each option by example:',
         '  --vary "loads.dead.mean=300 kN:500 kN:5"   repeat for a second axis; log:FROM:TO:STEPS, FROM:TO, A,B,C',
@@ -606,7 +643,8 @@ export function registerSweep(program: Command, unitsOption: () => Option): void
         '  --seed 7                                   sweep seed',
         '  --samples 1e5                              Monte Carlo samples per case',
         '  --workers 2                                worker threads',
-        '  --shard 0/2                                first of two shards',
+        '  --shard 0/2                                first of two shards; --shard auto inside a job array',
+        '  --emit-array-script 16                     print a Slurm job-array script for 16 shards and the merge',
         '  --state st  --out res  --force             journal folder, output folder, replace another sweep',
         '  --json  --units us                         JSON on stdout; kip, ft, ksi for people',
         '',

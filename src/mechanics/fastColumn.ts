@@ -6,7 +6,7 @@ import { EN_IMPERFECTION, enCapacity } from './en1993.js';
 import { equivalentBowCapacity } from './equivalentBow.js';
 import { firstYieldCapacity } from './firstYield.js';
 import { strengthModelKind } from './strengthModelKind.js';
-import { buildFixityTable, interpolateFixityTable, type FixityTable } from './fixityTable.js';
+import { buildFixityTable, interpolateFixityPair, interpolateFixityTable, pairFixityTables, type FixityTable, type FixityTablePair } from './fixityTable.js';
 import { modeCoefficientsInto } from './modeCoefficients.js';
 import { ratioFromFixity } from './restraint.js';
 import type { Frame, StrengthModel } from './types.js';
@@ -30,6 +30,8 @@ export const SWAY_EXACT_CORNER = 1e-3;
 const tables: { braced?: FixityTable; sway?: FixityTable } = {};
 /** Braced c over the fixity factors, built on first use (see bracedCurvatureTable). */
 let bracedC: FixityTable | undefined;
+/** Braced φ and c interleaved (one pass reads both). */
+let bracedPair: FixityTablePair | undefined;
 const weights = new Float64Array(WEIGHT_LENGTH);
 const coeffs = new Float64Array(3);
 const extrema = new Float64Array(EXTREMA_LENGTH);
@@ -121,7 +123,18 @@ export function makeFastCapacity(frame: Frame, model: StrengthModel): FastCapaci
 export function makeFastCapacityFromRatio(frame: Frame, model: StrengthModel): FastCapacity {
   fastTable(frame);
   if (model === 'first-yield') {
-    if (frame === 'braced') bracedCurvatureTable();
+    if (frame === 'braced') {
+      // φ and c from one pass over both tables (same values as fastPhi / fastCurvatureFactor).
+      const tables = bracedPair ?? (bracedPair = pairFixityTables(fastTable('braced'), bracedCurvatureTable()));
+      const pair = new Float64Array(2);
+      return (E, fy, A, I, S, L, bow, RA, RB) => {
+        if (!(RA >= 0) || !(RB >= 0)) throw new RangeError('restraint ratios must be >= 0');
+        interpolateFixityPair(tables, fixityOf(RA), fixityOf(RB), pair);
+        const phi = pair[0];
+        const Pcr = (phi * phi * E * I) / (L * L);
+        return firstYieldCapacity(A, S, fy, Pcr, bow, pair[1]);
+      };
+    }
     return (E, fy, A, I, S, L, bow, RA, RB) => {
       const phi = fastPhi(frame, RA, RB);
       if (phi === 0) return 0;

@@ -12,6 +12,18 @@ import { findRootBracketed } from './rootBracketed.js';
 
 export const NATAF_QUADRATURE_NODES = 64;
 
+/**
+ * ρ0 by marginal pair: a sweep builds the same transform for case after case, and the 64 × 64
+ * quadrature inside a root search is the costly part of it. Keyed by both marginals' names and
+ * parameters (all a Distribution's law depends on), ρ and the rule size; bounded.
+ */
+const rho0Cache = new Map<string, number>();
+const RHO0_CACHE_LIMIT = 4096;
+
+function marginalKey(d: Distribution): string {
+  return `${d.name}${JSON.stringify(d.params)}`;
+}
+
 /** Standardized marginal values at the nodes, using the rule's own mean and sd so that
  *  ρ0 = 1 with identical marginals gives exactly ρ = 1. */
 function standardizedAt(d: Distribution, nodes: Float64Array, weights: Float64Array): (u: number) => number {
@@ -59,6 +71,16 @@ export function equivalentCorrelation(d1: Distribution, d2: Distribution, rho: n
   }
   if (rho === 0) return 0;
   if (d1.name === 'normal' && d2.name === 'normal') return rho; // linear maps keep ρ
+  const key = `${marginalKey(d1)}|${marginalKey(d2)}|${rho}|${n}`;
+  const known = rho0Cache.get(key);
+  if (known !== undefined) return known;
+  const rho0 = solveEquivalentCorrelation(d1, d2, rho, n);
+  if (rho0Cache.size >= RHO0_CACHE_LIMIT) rho0Cache.clear();
+  rho0Cache.set(key, rho0);
+  return rho0;
+}
+
+function solveEquivalentCorrelation(d1: Distribution, d2: Distribution, rho: number, n: number): number {
   const map = correlationMap(d1, d2, n);
   const lowest = map(-1);
   const highest = map(1);

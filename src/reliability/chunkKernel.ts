@@ -1,19 +1,21 @@
 /**
  * The sampling work of one chunk, shared verbatim by the in-process path and the worker
- * threads so that both give bit-identical sums. Chunk i draws from stream streamBase + i only.
+ * threads so that both give bit-identical sums. Chunk i draws from stream streamBase + i only,
+ * with the block generator (probability/blockRng.ts, ziggurat normals), in blocks of
+ * BLOCK_SIZE samples; the Ctrl-C flag is looked at once per block.
  *
- * 'mc': u ~ N(0, I), counts g <= 0.
+ * 'mc': x drawn column-wise by blockSampler.ts (same law as x = T(u), u ~ N(0, I)), counts g <= 0.
  * 'is': u = c + z, z ~ N(0, I) (standard normal shifted to the centre c, usually the FORM
  *       design point); weight φ(u)/φ(u − c) = exp(−z·c − c·c/2); sums the weighted indicator
  *       and its square.
  */
-import { normalStream } from '../probability/rng.js';
+import { BlockRng } from '../probability/blockRng.js';
+import { fillNormal } from '../probability/ziggurat.js';
+import { BLOCK_SIZE, makeBlockSampler } from './blockSampler.js';
 import type { ReliabilityProblem } from './types.js';
 import { describeThrown, isFiniteNumber } from './limitStateError.js';
 import { interruptRequested } from '../runtime/interruptFlag.js';
 
-/** Samples between looks at the Ctrl-C flag (a chunk of a many-variable problem takes seconds). */
-const INTERRUPT_CHECK_MASK = 255;
 
 export interface SamplingSpec {
   kind: 'mc' | 'is';
@@ -54,24 +56,29 @@ export type ChunkKernel = (job: ChunkJob) => ChunkOutcome;
 
 export function makeChunkKernel(problem: ReliabilityProblem, spec: SamplingSpec): ChunkKernel {
   const n = problem.transform.n;
-  const u = new Float64Array(n);
   const x = new Float64Array(n);
   const g = problem.g;
-  const transform = problem.transform;
   if (spec.kind === 'mc') {
+    const { columns, fill } = makeBlockSampler(problem.transform);
     return (job) => {
-      const normal = normalStream(spec.seed, spec.streamBase + job.index);
+      const rng = new BlockRng(spec.seed, spec.streamBase + job.index);
       let failures = 0;
       let s = 0;
       let v = 0;
       try {
-        for (; s < job.count; s++) {
-          if ((s & INTERRUPT_CHECK_MASK) === INTERRUPT_CHECK_MASK && interruptRequested()) return stopped(job, s);
-          for (let i = 0; i < n; i++) u[i] = normal();
-          transform.toPhysical(u, x);
-          v = g(x);
-          if (!isFiniteNumber(v)) return faulted(job, x, v, undefined, s);
-          if (v <= 0) failures++;
+        for (let start = 0; start < job.count; start += BLOCK_SIZE) {
+          if (interruptRequested()) return stopped(job, start);
+          const count = Math.min(BLOCK_SIZE, job.count - start);
+          fill(rng, count);
+          for (let b = 0; b < count; b++) {
+            s = start + b;
+            for (let i = 0; i < n; i++) x[i] = columns[i][b];
+            v = g(x);
+            if (!(v > 0 && v < Infinity)) {
+              if (!isFiniteNumber(v)) return faulted(job, x, v, undefined, s);
+              failures++;
+            }
+          }
         }
       } catch (e) {
         return faulted(job, x, null, describeThrown(e), s);
@@ -79,35 +86,43 @@ export function makeChunkKernel(problem: ReliabilityProblem, spec: SamplingSpec)
       return { index: job.index, count: job.count, failures, sumW: failures, sumW2: failures };
     };
   }
+  const transform = problem.transform;
+  const u = new Float64Array(n);
   const c = Float64Array.from(spec.centre ?? []);
   if (c.length !== n) throw new Error(`importance sampling centre has ${c.length} components, problem has ${n}`);
   let cc = 0;
   for (let i = 0; i < n; i++) cc += c[i] * c[i];
   const halfCc = cc / 2;
+  const zCols = Array.from({ length: n }, () => new Float64Array(BLOCK_SIZE));
   return (job) => {
-    const normal = normalStream(spec.seed, spec.streamBase + job.index);
+    const rng = new BlockRng(spec.seed, spec.streamBase + job.index);
     let failures = 0;
     let sumW = 0;
     let sumW2 = 0;
     let s = 0;
     let v = 0;
     try {
-      for (; s < job.count; s++) {
-        if ((s & INTERRUPT_CHECK_MASK) === INTERRUPT_CHECK_MASK && interruptRequested()) return stopped(job, s);
-        let zc = 0;
-        for (let i = 0; i < n; i++) {
-          const z = normal();
-          zc += z * c[i];
-          u[i] = c[i] + z;
-        }
-        transform.toPhysical(u, x);
-        v = g(x);
-        if (!isFiniteNumber(v)) return faulted(job, x, v, undefined, s);
-        if (v <= 0) {
-          const w = Math.exp(-zc - halfCc);
-          failures++;
-          sumW += w;
-          sumW2 += w * w;
+      for (let start = 0; start < job.count; start += BLOCK_SIZE) {
+        if (interruptRequested()) return stopped(job, start);
+        const count = Math.min(BLOCK_SIZE, job.count - start);
+        for (let i = 0; i < n; i++) fillNormal(rng, zCols[i], count);
+        for (let b = 0; b < count; b++) {
+          s = start + b;
+          let zc = 0;
+          for (let i = 0; i < n; i++) {
+            const z = zCols[i][b];
+            zc += z * c[i];
+            u[i] = c[i] + z;
+          }
+          transform.toPhysical(u, x);
+          v = g(x);
+          if (!isFiniteNumber(v)) return faulted(job, x, v, undefined, s);
+          if (v <= 0) {
+            const w = Math.exp(-zc - halfCc);
+            failures++;
+            sumW += w;
+            sumW2 += w * w;
+          }
         }
       }
     } catch (e) {

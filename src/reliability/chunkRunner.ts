@@ -6,7 +6,7 @@
  */
 import { Worker } from 'node:worker_threads';
 import type { ProblemRecipe, ReliabilityProblem } from './types.js';
-import { makeChunkKernel, type ChunkJob, type ChunkOutcome, type SamplingSpec } from './chunkKernel.js';
+import { makeChunkKernel, type ChunkJob, type ChunkKernel, type ChunkOutcome, type SamplingSpec } from './chunkKernel.js';
 import { compiledTwin, requireCompiled } from '../runtime/compiledTwin.js';
 import { LimitStateError } from './limitStateError.js';
 import { interruptedDuring, interruptFlagBuffer, interruptRequested, whenInterrupted } from '../runtime/interruptFlag.js';
@@ -18,6 +18,13 @@ export interface ChunkRunOptions {
   chunkSize: number;
   workers: number;
   recipe?: ProblemRecipe;
+  /**
+   * Decide the worker count here (`workers` is then the most to use): time chunk 0 in this
+   * thread and start workers only when the rest would take longer than WORKER_START_REPAID_MS.
+   */
+  autoWorkers?: boolean;
+  /** With autoWorkers: the work left (ms) from which workers start (default WORKER_START_REPAID_MS). */
+  workerStartRepaidMs?: number;
   /**
    * With a signal, an abort or Ctrl-C (runtime/interruptFlag.ts) ends the run early with
    * stopReason 'aborted' and the chunks merged so far; without one, Ctrl-C throws
@@ -41,6 +48,13 @@ export interface ChunkRunSummary {
 const YIELD_EVERY_MS = 25;
 /** Jobs queued per worker, so a worker never waits for the main thread. */
 const IN_FLIGHT_PER_WORKER = 2;
+/**
+ * Work left after chunk 0 (ms, one thread) from which starting workers pays. A sampling worker
+ * is ready ~0.25–0.4 s after it is started (it loads the modules and rebuilds the problem;
+ * measured on 2 shared cores with the demo column), and this thread keeps sampling meanwhile,
+ * so workers pay once the rest takes about as long again.
+ */
+export const WORKER_START_REPAID_MS = 400;
 
 export function chunkJob(index: number, total: number, chunkSize: number): ChunkJob {
   const firstSample = index * chunkSize;
@@ -55,7 +69,20 @@ export async function runChunks(o: ChunkRunOptions): Promise<ChunkRunSummary> {
   if (workers <= 1 || o.recipe === undefined) {
     return { stopReason: await runInProcess(o, chunks), workers: 1 };
   }
-  return { stopReason: await runOnWorkers(o, chunks, workers, o.recipe), workers };
+  if (!o.autoWorkers) return { stopReason: await runOnWorkers(o, chunks, workers, o.recipe, 0), workers };
+  // Auto: chunk 0 here, timed; the rest here too unless it is long enough to repay workers.
+  const kernel = makeChunkKernel(o.problem, o.spec);
+  const t0 = performance.now();
+  const first = kernel(chunkJob(0, o.total, o.chunkSize));
+  const perChunk = performance.now() - t0;
+  if (first.interrupted || o.signal?.aborted || interruptRequested()) return { stopReason: stopped(o), workers: 1 };
+  if (first.fault) throw toError(o, o.problem.names, first);
+  if (o.onChunk(first)) return { stopReason: 'target-cov', workers: 1 };
+  if ((chunks - 1) * perChunk < (o.workerStartRepaidMs ?? WORKER_START_REPAID_MS) || chunks === 1) {
+    return { stopReason: await runInProcess(o, chunks, 1, kernel), workers: 1 };
+  }
+  const more = Math.min(workers, chunks - 1);
+  return { stopReason: await runOnWorkers(o, chunks, more, o.recipe, 1, kernel), workers: more };
 }
 
 function toError(o: ChunkRunOptions, names: string[], outcome: ChunkOutcome): LimitStateError {
@@ -69,10 +96,9 @@ function stopped(o: ChunkRunOptions): 'aborted' {
   return 'aborted';
 }
 
-async function runInProcess(o: ChunkRunOptions, chunks: number): Promise<StopReason> {
-  const kernel = makeChunkKernel(o.problem, o.spec);
+async function runInProcess(o: ChunkRunOptions, chunks: number, from = 0, kernel = makeChunkKernel(o.problem, o.spec)): Promise<StopReason> {
   let lastYield = performance.now();
-  for (let c = 0; c < chunks; c++) {
+  for (let c = from; c < chunks; c++) {
     if (o.signal?.aborted || interruptRequested()) return stopped(o);
     const outcome = kernel(chunkJob(c, o.total, o.chunkSize));
     if (outcome.interrupted) return stopped(o);
@@ -86,15 +112,20 @@ async function runInProcess(o: ChunkRunOptions, chunks: number): Promise<StopRea
   return undefined;
 }
 
-function runOnWorkers(o: ChunkRunOptions, chunks: number, count: number, recipe: ProblemRecipe): Promise<StopReason> {
+/**
+ * Chunks from `from` on, over `count` workers. With a `local` kernel this thread also samples
+ * chunks until the first worker is ready (start-up is not wasted), then only merges.
+ */
+function runOnWorkers(o: ChunkRunOptions, chunks: number, count: number, recipe: ProblemRecipe, from: number, local?: ChunkKernel): Promise<StopReason> {
   const script = requireCompiled(compiledTwin(import.meta.url, 'samplingWorker.js'));
   const n = o.problem.transform.n;
   return new Promise<StopReason>((resolve, reject) => {
     const pool: Worker[] = [];
     const pending = new Map<number, ChunkOutcome>();
-    let nextToSend = 0;
-    let nextToMerge = 0;
+    let nextToSend = from;
+    let nextToMerge = from;
     let finished = false;
+    let anyReady = false;
 
     const finish = (err: Error | null, reason?: StopReason): void => {
       if (finished) return;
@@ -121,6 +152,32 @@ function runOnWorkers(o: ChunkRunOptions, chunks: number, count: number, recipe:
     const send = (w: Worker): void => {
       if (nextToSend < chunks) w.postMessage(chunkJob(nextToSend++, o.total, o.chunkSize));
     };
+    /** Merge in chunk order; true when the run is over. */
+    const deliver = (outcome: ChunkOutcome): boolean => {
+      if (outcome.interrupted) {
+        onAbort();
+        return true;
+      }
+      pending.set(outcome.index, outcome);
+      while (pending.has(nextToMerge)) {
+        const next = pending.get(nextToMerge)!;
+        pending.delete(nextToMerge);
+        nextToMerge++;
+        if (next.fault) {
+          finish(toError(o, o.problem.names, next));
+          return true;
+        }
+        if (o.onChunk(next)) {
+          finish(null, 'target-cov');
+          return true;
+        }
+      }
+      if (nextToMerge >= chunks) {
+        finish(null, undefined);
+        return true;
+      }
+      return false;
+    };
 
     for (let k = 0; k < count; k++) {
       const w = new Worker(script, { workerData: { recipe, spec: o.spec, n, interruptFlag: interruptFlagBuffer() } });
@@ -129,26 +186,24 @@ function runOnWorkers(o: ChunkRunOptions, chunks: number, count: number, recipe:
         if (finished) return;
         if (msg.loadError !== undefined) return finish(new Error(`worker could not build the problem: ${msg.loadError}`));
         if (msg.ready) {
+          anyReady = true;
           for (let j = 0; j < IN_FLIGHT_PER_WORKER; j++) send(w);
           return;
         }
-        const outcome = msg.outcome!;
-        if (outcome.interrupted) return onAbort();
-        pending.set(outcome.index, outcome);
-        while (pending.has(nextToMerge)) {
-          const next = pending.get(nextToMerge)!;
-          pending.delete(nextToMerge);
-          nextToMerge++;
-          if (next.fault) return finish(toError(o, o.problem.names, next));
-          if (o.onChunk(next)) return finish(null, 'target-cov');
-        }
-        if (nextToMerge >= chunks) return finish(null, undefined);
-        send(w);
+        if (!deliver(msg.outcome!)) send(w);
       });
       w.on('error', (e) => (interruptRequested() ? onAbort() : finish(e instanceof Error ? e : new Error(String(e)))));
       w.on('exit', (code) => {
         if (!finished && code !== 0) finish(new Error(`sampling worker exited with code ${code}`));
       });
     }
+
+    if (local === undefined) return;
+    const fillIn = (): void => {
+      if (finished || anyReady || nextToSend >= chunks) return;
+      if (deliver(local(chunkJob(nextToSend++, o.total, o.chunkSize)))) return;
+      setImmediate(fillIn); // let the workers' messages in between chunks
+    };
+    setImmediate(fillIn);
   });
 }

@@ -14,7 +14,8 @@
  * linearisation error FORM is allowed.
  */
 import { normalQuantileUpper, normalSf } from '../probability/normal.js';
-import { normalStream } from '../probability/rng.js';
+import { BlockRng } from '../probability/blockRng.js';
+import { fillNormal } from '../probability/ziggurat.js';
 import { checkedLimitState } from './checkedLimitState.js';
 import { FORM_CHECK_STREAM_BASE } from './streams.js';
 import type { FormResult, ReliabilityProblem } from './types.js';
@@ -72,7 +73,17 @@ export function checkForm(problem: ReliabilityProblem, f: FormResult, opts: Form
   // Deterministic allocation; the mixture weights are the realised shares, which keeps the estimator unbiased.
   const counts = allocate(total, crude ? [] : f.system.designPoints.map((p) => normalSf(p.beta)));
   const share = counts.map((c) => c / total);
-  const draw = normalStream(seed, FORM_CHECK_STREAM_BASE);
+  // The block sampler's generator (ziggurat normals, filled a block at a time).
+  const rng = new BlockRng(seed, FORM_CHECK_STREAM_BASE);
+  const block = new Float64Array(512);
+  let next = block.length;
+  const draw = (): number => {
+    if (next === block.length) {
+      fillNormal(rng, block, block.length);
+      next = 0;
+    }
+    return block[next++];
+  };
   const u = new Float64Array(n);
   const exponents = new Float64Array(centres.length);
   let sumW = 0;

@@ -4,7 +4,9 @@
  * fixed size, chunk i drawing from stream i; failures are summed as integers, so the result is
  * bit-identical for any number of workers. Memory does not grow with N.
  */
+import { availableParallelism } from 'node:os';
 import { normalQuantile } from '../probability/normal.js';
+import { SAMPLER_VERSION } from '../probability/blockRng.js';
 import type { McResult, McTracePoint, ProblemRecipe, ReliabilityProblem, SimulationProgress } from './types.js';
 import { runChunks } from './chunkRunner.js';
 import { MC_STREAM_BASE } from './streams.js';
@@ -13,13 +15,18 @@ import { wilsonInterval } from './wilson.js';
 export interface MonteCarloOptions {
   samples: number;
   seed: number;
-  /** Worker threads (default 1 = in-process). Needs `recipe` to go parallel. */
+  /**
+   * Worker threads. Needs `recipe` to go parallel. Default: with a recipe, every core once the
+   * run is long enough to repay starting them (chunkRunner.ts `autoWorkers`), else in-process.
+   */
   workers?: number;
   recipe?: ProblemRecipe;
   /** Stop at the first chunk boundary where the CoV is at or below this. */
   targetCov?: number;
   signal?: AbortSignal;
   onProgress?: (p: SimulationProgress) => void;
+  /** With the default worker choice: work left (ms) from which workers start (tests). */
+  workerStartRepaidMs?: number;
   /** Samples per chunk (part of the seed's meaning: change it and the numbers change). */
   chunkSize?: number;
 }
@@ -57,7 +64,9 @@ export async function monteCarlo(problem: ReliabilityProblem, opts: MonteCarloOp
     spec: { kind: 'mc', seed: opts.seed, streamBase: MC_STREAM_BASE },
     total,
     chunkSize: opts.chunkSize ?? MC_CHUNK_SIZE,
-    workers: opts.workers ?? 1,
+    workers: opts.workers ?? (opts.recipe ? availableParallelism() : 1),
+    autoWorkers: opts.workers === undefined,
+    workerStartRepaidMs: opts.workerStartRepaidMs,
     recipe: opts.recipe,
     signal: opts.signal,
     method: 'Monte Carlo',
@@ -87,6 +96,7 @@ export async function monteCarlo(problem: ReliabilityProblem, opts: MonteCarloOp
     stoppedEarly: summary.stopReason !== undefined,
     trace,
     seed: opts.seed,
+    sampler: SAMPLER_VERSION,
     workers: summary.workers,
   };
   if (summary.stopReason !== undefined) result.stopReason = summary.stopReason;

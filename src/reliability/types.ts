@@ -144,6 +144,8 @@ export interface McResult {
   /** pf and its Wilson interval at log-spaced sample counts (chunk boundaries). */
   trace: McTracePoint[];
   seed: number;
+  /** Which sampler drew the numbers (what the seed means): probability/blockRng.ts SAMPLER_VERSION. */
+  sampler: string;
   workers: number;
 }
 

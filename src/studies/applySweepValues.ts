@@ -1,8 +1,9 @@
 /**
- * A sweep case's values written into the scenario FILE, then read by loadScenario: parsing,
- * units, expressions (`L/1500` follows a varied length) and every validation rule stay in
- * one place. YAML is edited as a document (comments and lines kept, so loadScenario's line
- * numbers still point at the user's file); JSON as a plain object.
+ * A sweep case's values set in the base scenario's parsed tree (parsed once per runner), then
+ * read by the same shape and meaning stages as loadScenario: units, expressions (`L/1500`
+ * follows a varied length) and every validation rule stay in one place, and the base file's
+ * lines still point at the user's file. `applySweepValues` writes the same edit as text (YAML
+ * edited as a document, comments kept; JSON as a plain object) for people to read.
  *
  * A path is a contract path (`column.length`, `loads.dead`, `column.ends.bottom.rotation`)
  * or, for a random variable, one of its parameters (`column.ends.bottom.rotation.mean`).
@@ -10,9 +11,11 @@
  * varied), so a spread can be swept whichever way the file wrote it.
  */
 import { parseDocument, type Document } from 'yaml';
-import { detectFormat } from '../scenario/parseText.js';
+import { createHash } from 'node:crypto';
+import { detectFormat, parseText } from '../scenario/parseText.js';
 import { InputError } from '../scenario/inputError.js';
-import { loadScenario } from '../scenario/loadScenario.js';
+import { loadScenario, scenarioFromTree } from '../scenario/loadScenario.js';
+import { setOwn, type RawMap, type RawValue, type RawTree } from '../scenario/rawTree.js';
 import { didYouMean } from '../scenario/nearestName.js';
 import type { Scenario } from '../scenario/types.js';
 import type { SweepValue } from './sweepTypes.js';
@@ -35,15 +38,30 @@ export interface SweepBase {
   /** A plain-object view, for checking paths. */
   plain: unknown;
   yaml: Document | null;
+  /** The parsed tree and line of every key; each case edits a copy. */
+  tree: RawTree;
+  /** sha256 of the base text; a case's scenario is named by it and the case's values. */
+  sha256: string;
 }
 
 /** Validates the base scenario (loadScenario's errors) and keeps it ready for edits. */
 export function parseSweepBase(text: string, fileName: string): SweepBase {
   const scenario = loadScenario(text, fileName);
+  const tree = parseText(text, fileName);
+  const sha256 = scenario.sha256;
   const format = detectFormat(text, fileName);
-  if (format === 'json') return { fileName, scenario, format, plain: JSON.parse(text) as unknown, yaml: null };
+  if (format === 'json') return { fileName, scenario, format, plain: JSON.parse(text) as unknown, yaml: null, tree, sha256 };
   const yaml = parseDocument(text, { uniqueKeys: true });
-  return { fileName, scenario, format, plain: yaml.toJS() as unknown, yaml };
+  return { fileName, scenario, format, plain: yaml.toJS() as unknown, yaml, tree, sha256 };
+}
+
+/** A deep copy of a raw tree value (own keys kept as own keys, whatever their names). */
+function cloneRaw(v: RawValue): RawValue {
+  if (Array.isArray(v)) return v.map(cloneRaw);
+  if (typeof v !== 'object' || v === null) return v;
+  const out: RawMap = {};
+  for (const k of Object.keys(v)) setOwn(out, k, cloneRaw(v[k]));
+  return out;
 }
 
 /** What an edit does besides setting the path: a spread parameter it replaces. */
@@ -89,7 +107,7 @@ function planEdit(plain: unknown, path: string, field: string, varied: ReadonlyS
 function setPlain(root: unknown, segments: string[], value: SweepValue): void {
   let node = root as Plain;
   for (const key of segments.slice(0, -1)) node = node[key] as Plain;
-  node[segments[segments.length - 1]] = value;
+  setOwn(node as RawMap, segments[segments.length - 1], value);
 }
 
 function deletePlain(root: unknown, segments: string[]): void {
@@ -128,11 +146,22 @@ export function applySweepValues(
   return `${JSON.stringify(copy, null, 2)}\n`;
 }
 
-/** The scenario of one case: the base with the values set, read by loadScenario. */
+/**
+ * The scenario of one case: the base tree with the values set, through the shape and meaning
+ * stages of loadScenario (no text written or parsed per case).
+ */
 export function scenarioWithValues(
   base: SweepBase,
   values: Readonly<Record<string, SweepValue>>,
-  fieldOf?: (path: string) => string,
+  fieldOf: (path: string) => string = (p) => p,
 ): Scenario {
-  return loadScenario(applySweepValues(base, values, fieldOf), base.fileName);
+  const varied = new Set(Object.keys(values));
+  const value = cloneRaw(base.tree.value);
+  for (const p of Object.keys(values)) {
+    const e = planEdit(base.plain, p, fieldOf(p), varied);
+    if (e.drop) deletePlain(value, e.drop);
+    setPlain(value, e.segments, values[p]);
+  }
+  const sha256 = createHash('sha256').update(base.sha256).update(JSON.stringify(values)).digest('hex');
+  return scenarioFromTree({ value, lines: base.tree.lines, format: base.tree.format }, base.fileName, sha256);
 }

@@ -2,6 +2,7 @@
  * The contract JSON of `stanchion assess` (docs/json-output.md): contract keys first, extensions after.
  * JSON has no Infinity: a non-finite number is written as null.
  */
+import { SAMPLER_VERSION } from '../probability/blockRng.js';
 import { checkJson } from '../limitState/deterministicCheck.js';
 import type { Assessment } from './columnAssessment.js';
 import { restraintJson } from './columnRestraint.js';
@@ -219,6 +220,7 @@ export function assessmentJson(a: Assessment, meta: RunMeta): unknown {
     meta: {
       version: meta.version,
       seed: a.seed,
+      sampler: SAMPLER_VERSION,
       scenario_sha256: a.scenario.sha256,
       date: meta.date,
       command: meta.command,

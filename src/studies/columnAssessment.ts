@@ -264,7 +264,8 @@ export async function assessColumn(given: Scenario, opts: AssessOptions = {}): P
   }
   const methods = [...(opts.methods ?? s.analysis.methods ?? DEFAULT_METHODS)];
   const seed = opts.seed ?? s.analysis.seed ?? DEFAULT_SEED;
-  const workers = Math.max(1, opts.workers ?? s.analysis.workers ?? 1);
+  /** undefined: every core once the Monte Carlo run is long enough to repay starting them. */
+  const workers = opts.workers ?? s.analysis.workers;
   let problem = problemFromModel(model);
   let recipe = columnRecipe(s);
   if (resolved.bowDropped) {
@@ -306,9 +307,9 @@ export async function assessColumn(given: Scenario, opts: AssessOptions = {}): P
     out.mc = await monteCarlo(simProblem, {
       samples: opts.samples ?? s.analysis.mcSamples ?? DEFAULT_MC_SAMPLES,
       seed,
-      workers,
+      workers: workers === undefined ? undefined : Math.max(1, workers),
       targetCov: opts.targetCov,
-      recipe: workers > 1 ? recipe : undefined,
+      recipe: workers === 1 ? undefined : recipe,
       signal: opts.signal,
       onProgress: opts.onProgress && ((p) => opts.onProgress?.('Monte Carlo', p)),
     });
@@ -363,7 +364,7 @@ export async function assessColumn(given: Scenario, opts: AssessOptions = {}): P
     check,
     methods,
     seed,
-    workers,
+    workers: out.mc?.workers ?? 1,
     form: formResult,
     ...out,
     verdict: checked.verdict,

@@ -31,7 +31,22 @@ export interface RunSweepOptions {
   /** The definition the table was built from, kept in the journal header so that a merge can check every row. */
   definition?: StoredDefinition;
   onCaseDone?: (record: SweepRecord, finished: number, total: number) => void;
+  /**
+   * With a recipe and workers > 1: the first cases run here, timed, and workers start only when
+   * the rest would take longer than this (ms; default SWEEP_WORKER_REPAID_MS; 0 = always).
+   */
+  workerStartRepaidMs?: number;
 }
+
+/**
+ * Work left (ms, one thread) from which sweep workers pay: each must load the scenario stack
+ * and rebuild its runner before its first case (about half a second on 2 shared cores), while
+ * this thread would have gone on with cases; below this, FORM sweeps of short cases run faster
+ * in one thread.
+ */
+export const SWEEP_WORKER_REPAID_MS = 1500;
+/** Cases timed here before deciding (the first pays for compilation, so the fastest counts). */
+const PROBE_CASES = 3;
 
 export interface RunSweepResult {
   journal: string;
@@ -169,7 +184,24 @@ export async function runSweep(opts: RunSweepOptions): Promise<RunSweepResult> {
     } else if (workers === 1) {
       await runInThread(await loadCaseRunner(opts.runCase), todo, finish);
     } else {
-      await runInWorkers(opts.runCase, todo, todoCount, workers, finish);
+      const runner = await loadCaseRunner(opts.runCase);
+      let left = todoCount;
+      let fastest = Infinity;
+      for (let probed = 0; probed < PROBE_CASES && left > 0; probed++) {
+        const next = todo.next();
+        if (next.done) break;
+        throwIfInterrupted('the sweep');
+        const t0 = performance.now();
+        const done = await runOneCase(runner, next.value);
+        fastest = Math.min(fastest, performance.now() - t0);
+        finish(next.value, done);
+        left -= 1;
+      }
+      if (left > 0 && fastest * left >= (opts.workerStartRepaidMs ?? SWEEP_WORKER_REPAID_MS)) {
+        await runInWorkers(opts.runCase, todo, left, workers, finish);
+      } else {
+        await runInThread(runner, todo, finish);
+      }
     }
     return { journal: journal.file, fingerprint, shardCases: mine, ran: todoCount, skipped, errors };
   } finally {

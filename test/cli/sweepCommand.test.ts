@@ -129,6 +129,48 @@ describe('stanchion sweep', () => {
     expect(files('merged')).toEqual(reference);
   });
 
+  it('the emitted Slurm array script: its shard body run as Slurm runs each task, then its merge body, gives the single run byte for byte', async () => {
+    // Slurm sets SLURM_ARRAY_TASK_ID/MIN/MAX/COUNT in each task of `sbatch --array=0-2`
+    // (Slurm documentation, sbatch "OUTPUT ENVIRONMENT VARIABLES")
+    const out = join(dir, 'slurm-out');
+    const emitted = runCli([...sweep('slurm-out'), '--emit-array-script', '3']);
+    expect(emitted.status, emitted.stderr).toBe(0);
+    expect(existsSync(out)).toBe(false); // emitting runs nothing and writes nothing
+    const script = emitted.stdout;
+    expect(script).toMatch(/sbatch --parsable --array=0-2 /);
+    expect(script).toMatch(/--dependency=afterok:\$\{array_job\}/);
+    const body = (tag: string): string => {
+      const m = new RegExp(`<<'${tag}'\\n([\\s\\S]*?)\\n${tag}\\n`).exec(script);
+      if (!m) throw new Error(`no ${tag} body in the script`);
+      return m[1];
+    };
+    const wrapper = join(dir, 'stanchion-wrapper.sh');
+    writeFileSync(wrapper, `#!/bin/sh\nexec ${JSON.stringify(process.execPath)} ${JSON.stringify(CLI)} "$@"\n`, { mode: 0o755 });
+    const bash = (text: string, env: Record<string, string>): Promise<Finished> => {
+      const child = spawn('bash', ['-c', text], { cwd: ROOT, env: { ...process.env, STANCHION: wrapper, ...env }, stdio: ['ignore', 'pipe', 'pipe'] });
+      let stderr = '';
+      child.stderr.on('data', (d: Buffer) => (stderr += d.toString()));
+      return new Promise((resolve) => child.on('close', (code, signal) => resolve({ code, signal, stdout: '', stderr })));
+    };
+    const tasks = await Promise.all(
+      [0, 1, 2].map((id) =>
+        bash(body('STANCHION_SHARD'), { SLURM_ARRAY_TASK_ID: String(id), SLURM_ARRAY_TASK_MIN: '0', SLURM_ARRAY_TASK_MAX: '2', SLURM_ARRAY_TASK_COUNT: '3' }),
+      ),
+    );
+    for (const t of tasks) expect(t.code, t.stderr).toBe(0);
+    const merged = await bash(body('STANCHION_MERGE'), {});
+    expect(merged.code, merged.stderr).toBe(0);
+    expect(files('slurm-out')).toEqual(reference);
+  });
+
+  it('--shard auto outside an array job is refused with exit 2 naming --shard', () => {
+    const r = runCli([...sweep('no-array'), '--shard', 'auto']);
+    expect(r.status).toBe(2);
+    expect(r.stderr).toMatch(/--shard/);
+    expect(r.stderr).toMatch(/SLURM_ARRAY_TASK_ID/);
+    expect(existsSync(join(dir, 'no-array'))).toBe(false);
+  });
+
   it('a bad --vary exits 2 with one line on stderr naming --vary, and writes nothing', () => {
     for (const bad of ['column.lenght=4 m:7 m:3', 'column.length=4 m:7 mm:3', 'loads.dead.mean=300 kN,abc', 'loads.dead.mean=300 MPa:400 MPa:3']) {
       const r = runCli(['sweep', scenario, '--vary', bad, '--out', join(dir, 'bad')]);

@@ -37,6 +37,22 @@ describe('equivalentCorrelation (Nataf rho0)', () => {
     expect(equivalentCorrelation(ln10, ln25, -0.5)).toBeCloseTo(-0.512148, 6);
   });
 
+  it('remembers ρ0 per marginal pair without mixing pairs up', () => {
+    // common practice (closed form for two lognormals): ρ0 = ln(1 + ρ V1 V2) / (ζ1 ζ2)
+    const exact = (v1: number, v2: number, rho: number): number =>
+      Math.log1p(rho * v1 * v2) / Math.sqrt(Math.log1p(v1 * v1) * Math.log1p(v2 * v2));
+    const a = makeDistribution({ dist: 'lognormal', mean: 3, cov: 0.3 });
+    for (const v2 of [0.4, 0.4000001, 0.4, 0.6]) {
+      const b = makeDistribution({ dist: 'lognormal', mean: 2, cov: v2 });
+      for (const rho of [0.7, -0.3, 0.7]) {
+        expect(equivalentCorrelation(a, b, rho)).toBeCloseTo(exact(0.3, v2, rho), 10);
+        expect(equivalentCorrelation(b, a, rho)).toBeCloseTo(equivalentCorrelation(a, b, rho), 12);
+      }
+    }
+    const b = makeDistribution({ dist: 'lognormal', mean: 2, cov: 0.4 });
+    expect(equivalentCorrelation(a, b, 0.7)).not.toBe(equivalentCorrelation(a, makeDistribution({ dist: 'lognormal', mean: 2, cov: 0.4000001 }), 0.7));
+  });
+
   it('matches the exact lognormal formulas to 1e-10', () => {
     // source: Liu & Der Kiureghian 1986 (from memory): LN–LN rho0 = ln(1 + rho V1 V2)/(zeta1 zeta2);
     // N–LN rho0 = rho V/√ln(1 + V²) (docs/verification.md §R1h "exact F")

@@ -1,3 +1,4 @@
+import { availableParallelism } from 'node:os';
 import { describe, expect, it } from 'vitest';
 import { monteCarlo } from '../../src/reliability/monteCarlo.js';
 import { LimitStateError } from '../../src/reliability/limitStateError.js';
@@ -70,6 +71,24 @@ describe('crude Monte Carlo', () => {
     expect(numbers(plain)).toEqual(numbers(one));
     // source: docs/verification.md §R1b exact pf 3.42004e-3
     expectWithin4Sigma(two, 3.42004e-3);
+  });
+
+  it('by default starts workers only for a long run, with the same numbers as one thread', async () => {
+    // common practice: the worker count never changes the numbers (chunk i uses stream i)
+    const recipe = testProblemRecipe('resistanceMinusLoad', B_ARGS);
+    const problem = resistanceMinusLoad(B_ARGS);
+    const opts = { samples: 60_000, seed: 12, chunkSize: 4096 };
+    const one = await monteCarlo(problem, { ...opts, workers: 1 });
+    const short = await monteCarlo(problem, { ...opts, recipe });
+    expect(short.workers).toBe(1); // 15 small chunks: far below the start-up cost
+    expect(numbers(short)).toEqual(numbers(one));
+    // Forced: this thread samples while the workers start, then they take over; merged in order.
+    const long = { samples: 1_200_000, seed: 12, chunkSize: 2048 };
+    const oneLong = await monteCarlo(problem, { ...long, workers: 1 });
+    const forced = await monteCarlo(problem, { ...long, recipe, workerStartRepaidMs: 0 });
+    expect(forced.workers).toBe(Math.min(availableParallelism(), 585));
+    expect(numbers(forced)).toEqual(numbers(oneLong));
+    expect(one.sampler).toBe('block-v2');
   });
 
   it('stops at the same chunk boundary once the target CoV is reached, whatever the workers', async () => {

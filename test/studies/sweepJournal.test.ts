@@ -6,6 +6,7 @@ import { InputError } from '../../src/scenario/inputError.js';
 import type { CaseRunner } from '../../src/studies/caseRunner.js';
 import { mergeSweep } from '../../src/studies/mergeSweep.js';
 import { runSweep } from '../../src/studies/runSweep.js';
+import { SweepJournal } from '../../src/studies/sweepJournal.js';
 import { buildCaseTable, iterateCases } from '../../src/studies/sweepDesign.js';
 import type { CaseTable } from '../../src/studies/sweepTypes.js';
 
@@ -65,6 +66,22 @@ describe('sweep journal and outputs (in-process runner)', () => {
     const full = await runSweep({ table, runCase: runner, stateDir: join(root, 'c') });
     const reference = await runSweep({ table, runCase: runner, stateDir: join(root, 'd') });
     expect(sweepCsv(mergeSweep(full.journal))).toBe(sweepCsv(mergeSweep(reference.journal)));
+  });
+
+  it('puts each case in the file as it finishes (a killed process loses none) and syncs the batch on close', () => {
+    // common practice: write() hands the bytes to the operating system at once; fsync only guards against its crash
+    const stateDir = join(root, 'batched');
+    const header = { stanchion_sweep_journal: 1 as const, fingerprint: 'f', varied: table.varied, cases: table.count, shard: { index: 0, count: 1 } };
+    const journal = SweepJournal.open(stateDir, header);
+    const cases = allCases(table).slice(0, 3);
+    for (const c of cases) journal.record({ case: c.index, seed: c.seed, values: c.values, result: { y: 1 } });
+    const before = readFileSync(journal.file, 'utf8').trim().split('\n');
+    expect(before.length).toBe(1 + cases.length); // header + every case, before any close
+    journal.close();
+    const reopened = SweepJournal.open(stateDir, header);
+    expect(cases.every((c) => reopened.isDone(c.index))).toBe(true);
+    expect(reopened.doneCount).toBe(3);
+    reopened.close();
   });
 
   it('refuses a state folder that holds another sweep', async () => {

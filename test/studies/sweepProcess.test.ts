@@ -92,7 +92,7 @@ describe('sweep as a real process', () => {
     const table = buildCaseTable(parseSweepFile(readFileSync(sweepFile, 'utf8'), sweepFile));
     const recipe = { module: runnerModule, exportName: 'syntheticCaseRunner', args: { sleepMs: 0 } };
     const one = await runSweep({ table, runCase: recipe, workers: 1, stateDir: join(root, 'w1') });
-    const two = await runSweep({ table, runCase: recipe, workers: 2, stateDir: join(root, 'w2') });
+    const two = await runSweep({ table, runCase: recipe, workers: 2, stateDir: join(root, 'w2'), workerStartRepaidMs: 0 });
     expect(two.ran).toBe(CASES);
     expect(sweepCsv(mergeSweep(two.journal))).toBe(sweepCsv(mergeSweep(one.journal)));
     expect(sweepCsv(mergeSweep(one.journal))).toBe(reference[0]);
@@ -108,9 +108,9 @@ describe('sweep as a real process', () => {
     const table = buildCaseTable(parseSweepFile(readFileSync(sweepFile, 'utf8'), sweepFile));
     const stateDir = join(root, 'dies');
     const dying = { module: runnerModule, exportName: 'syntheticCaseRunner', args: { sleepMs: 0, exitCases: [CASES - 1] } };
-    await expect(runSweep({ table, runCase: dying, workers: 2, stateDir })).rejects.toThrow(/stopped before/);
+    await expect(runSweep({ table, runCase: dying, workers: 2, stateDir, workerStartRepaidMs: 0 })).rejects.toThrow(/stopped before/);
     const healthy = { module: runnerModule, exportName: 'syntheticCaseRunner', args: { sleepMs: 0 } };
-    const resumed = await runSweep({ table, runCase: healthy, workers: 2, stateDir });
+    const resumed = await runSweep({ table, runCase: healthy, workers: 2, stateDir, workerStartRepaidMs: 0 });
     expect(resumed.ran).toBeGreaterThanOrEqual(1);
     expect(sweepCsv(mergeSweep(resumed.journal))).toBe(reference[0]);
   });

@@ -88,13 +88,15 @@ export function restraintCurveChart(input: ReportInput, study: RestraintStudy, s
       ],
     });
   }
+  // the requirement's value runs down its line: put "as assessed" on the side away from it
+  const labelLeft = current.length > 0 && required.some((r) => r.k >= current[0].k);
   if (current.length > 0) {
     layers.push({
       name: 'currentPoint',
       data: { values: current },
       layer: [
         { mark: { type: 'point', shape: 'diamond', size: 120, filled: true, color: PALETTE.ink }, encoding: { x: { field: 'k', type: 'quantitative' }, y: { field: 'beta', type: 'quantitative' } } },
-        { mark: { type: 'text', align: 'left', baseline: 'top', dx: 8, dy: 6, color: PALETTE.ink }, encoding: { x: { field: 'k', type: 'quantitative' }, y: { field: 'beta', type: 'quantitative' }, text: { field: 'label' } } },
+        { mark: { type: 'text', align: labelLeft ? 'right' : 'left', baseline: 'top', dx: labelLeft ? -8 : 8, dy: 6, color: PALETTE.ink }, encoding: { x: { field: 'k', type: 'quantitative' }, y: { field: 'beta', type: 'quantitative' }, text: { field: 'label' } } },
       ],
     });
   }

@@ -24,6 +24,7 @@ export interface AssessCliOptions {
   methods?: Method[];
   samples?: number;
   targetCov?: number;
+  thorough?: boolean;
   workers?: number;
   units?: UnitSystem;
   end?: EndChoice;
@@ -41,6 +42,7 @@ export async function runAssess(file: string, opts: AssessCliOptions, argv: stri
       methods: opts.methods,
       samples: opts.samples,
       targetCov: opts.targetCov,
+      thorough: opts.thorough,
       seed: opts.seed,
       workers: opts.workers,
       end: opts.end,
@@ -79,7 +81,8 @@ export function registerAssess(program: Command, unitsOption: () => Option): voi
     .addOption(new Option('--seed <N>', 'seed of every random stream (default: the scenario\'s, else 1)').argParser(parseNonNegativeInteger))
     .addOption(new Option('--methods <LIST>', 'comma-separated: form, sorm, is, mc, subset').argParser(parseMethods))
     .addOption(new Option('--samples <N>', 'Monte Carlo samples (default: the scenario\'s, else 1e6)').argParser(parsePositiveInteger))
-    .addOption(new Option('--target-cov <x>', 'stop Monte Carlo early once its CoV is at most x (e.g. 0.1)').argParser(parseFraction))
+    .addOption(new Option('--target-cov <x>', 'stop Monte Carlo, importance sampling and subset simulation as soon as their CoV is at most x (e.g. 0.1)').argParser(parseFraction))
+    .option('--thorough', 'FORM: search again from the mirror point and from both sides of every axis (default: only when the first search is in doubt)')
     .addOption(new Option('--workers <N>', 'worker threads for Monte Carlo (same numbers whatever N)').argParser(parsePositiveInteger))
     .addOption(new Option('--end <end>', 'ends for the restraint study: bottom, top or both').argParser(parseEnd))
     .addOption(unitsOption())

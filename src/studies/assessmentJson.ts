@@ -132,6 +132,7 @@ export function reliabilityJson(a: Assessment): Record<string, unknown> {
       beta: a.subset.beta,
       levels: a.subset.levels.length,
       converged: a.subset.converged,
+      ...(a.subset.runs !== undefined ? { runs: a.subset.runs } : {}),
     };
   }
   r.model_factor = modelFactorJson(a.modelFactor);

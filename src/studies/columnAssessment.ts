@@ -13,7 +13,7 @@ import { checkEstimate, checkForm, withinCheckBand, type FormCheckResult } from 
 import { importanceSamplingAtDesignPoint } from '../reliability/importanceSampling.js';
 import { monteCarlo } from '../reliability/monteCarlo.js';
 import { sorm } from '../reliability/sorm.js';
-import { subsetSimulation } from '../reliability/subsetSimulation.js';
+import { subsetToTargetCov } from '../reliability/subsetSimulation.js';
 import type { FormResult, IsResult, McResult, ReliabilityProblem, SimulationProgress, SormResult, SubsetResult } from '../reliability/types.js';
 import { verdict, type Verdict } from '../reliability/verdict.js';
 import { conditionalBeta, type ConditionalBetaEntry } from '../sensitivity/conditionalBeta.js';
@@ -47,8 +47,10 @@ const HISTOGRAM_STREAM = 9_000_001;
 export interface AssessOptions {
   methods?: readonly Method[];
   samples?: number;
-  /** stop Monte Carlo once its coefficient of variation is at or below this */
+  /** stop Monte Carlo, importance sampling and subset simulation once their CoV is at or below this */
   targetCov?: number;
+  /** FORM's full restart scan (form.ts `thorough`) */
+  thorough?: boolean;
   seed?: number;
   workers?: number;
   end?: EndChoice;
@@ -251,7 +253,7 @@ export async function assessColumn(given: Scenario, opts: AssessOptions = {}): P
   // The sampling methods see the series system; FORM/SORM results shown are the lowest-β combination's.
   const simProblem = combos ? combinationSystemProblem(models) : problem;
   if (combos) recipe = columnRecipe(s, true);
-  const formResult = lead ? lead.form : form(problem);
+  const formResult = lead ? lead.form : form(problem, { thorough: opts.thorough });
   if (lead) problem = lead.problem;
   for (const c of combos?.combinations ?? [{ leading: '', form: formResult }]) {
     const tag = combos ? `FORM (${c.leading} leading)` : 'FORM';
@@ -268,7 +270,7 @@ export async function assessColumn(given: Scenario, opts: AssessOptions = {}): P
     out.is = await importanceSamplingAtDesignPoint(simProblem, formResult, {
       samples: s.analysis.isSamples ?? DEFAULT_IS_SAMPLES,
       seed,
-      targetCov: IS_TARGET_COV,
+      targetCov: opts.targetCov ?? IS_TARGET_COV,
       signal: opts.signal,
       onProgress: opts.onProgress && ((p) => opts.onProgress?.('importance sampling', p)),
     });
@@ -289,7 +291,7 @@ export async function assessColumn(given: Scenario, opts: AssessOptions = {}): P
     if (out.mc.failures === 0) warnings.push(`Monte Carlo saw no failure in ${out.mc.samples} samples: its pf is only an upper bound`);
   }
   if (methods.includes('subset') && !interrupted) {
-    out.subset = subsetSimulation(simProblem, { seed, samplesPerLevel: s.analysis.subsetSamples ?? 1000 });
+    out.subset = subsetToTargetCov(simProblem, { seed, samplesPerLevel: s.analysis.subsetSamples ?? 1000, targetCov: opts.targetCov });
     warnings.push(...out.subset.warnings.map((w) => `subset: ${w}`));
   }
   // With combinations every method is compared on the series system.

@@ -8,6 +8,7 @@
  * own evaluate is never called.
  */
 import { parseExpression, type MathNode } from './mathjsBundle.js';
+import { parsePlainQuantity } from './plainQuantityParser.js';
 import { DIMENSIONLESS, describeDimensions, sameDimensions, type Dimensions } from './dimensions.js';
 import { COLUMN_LENGTH_SYMBOL, lookupUnit } from './units.js';
 
@@ -41,7 +42,8 @@ export function evaluateQuantity(text: string, options: EvaluateOptions = {}): E
   if (text.trim() === '') throw new ExpressionError('is empty');
   let tree: MathNode;
   try {
-    tree = parseExpression(text);
+    // plain quantities skip mathjs's parser (slow to start); the rest go to it
+    tree = parsePlainQuantity(text) ?? parseExpression(text);
   } catch (e) {
     const detail = e instanceof Error && !(e instanceof RangeError) ? e.message : 'cannot be read';
     throw new ExpressionError(`cannot read '${text}': ${detail}`);

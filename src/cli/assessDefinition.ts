@@ -1,0 +1,32 @@
+/**
+ * The `assess` command as the command line shows it: options and help. The run (assessCommand.ts,
+ * with the studies and the report stack) is loaded only when an assessment runs.
+ */
+import { Option, type Command } from 'commander';
+import type { AssessCliOptions } from './assessCommand.js';
+import { parseEnd, parseFraction, parseMethods, parseNonNegativeInteger, parsePositiveInteger } from './optionParsers.js';
+import { CAUTION } from './textTable.js';
+
+/** `argv`: the arguments after the executable, echoed in the report's `command`. */
+export function registerAssess(program: Command, unitsOption: () => Option, argv: string[]): void {
+  program
+    .command('assess')
+    .description('reliability, sensitivity, restraint study and report for one scenario')
+    .argument('<FILE>', 'scenario (.yaml, .yml, .json, or - for stdin)')
+    .option('--json', 'print one JSON document (SI units) on stdout')
+    .option('--out <DIR>', 'write the report (HTML, Markdown, JSON, CSV, charts) into the new folder DIR, whole or not at all')
+    .option('--force', 'replace DIR when it is a report folder stanchion wrote (it holds .stanchion-output.json); nothing else is ever replaced')
+    .addOption(new Option('--seed <N>', 'seed of every random stream (default: the scenario\'s, else 1)').argParser(parseNonNegativeInteger))
+    .addOption(new Option('--methods <LIST>', 'comma-separated: form, sorm, is, mc, subset').argParser(parseMethods))
+    .addOption(new Option('--samples <N>', 'Monte Carlo samples (default: the scenario\'s, else 1e6)').argParser(parsePositiveInteger))
+    .addOption(new Option('--target-cov <x>', 'stop Monte Carlo, importance sampling and subset simulation as soon as their CoV is at most x (e.g. 0.1)').argParser(parseFraction))
+    .option('--thorough', 'FORM: search again from the mirror point and from both sides of every axis (default: only when the first search is in doubt)')
+    .addOption(new Option('--workers <N>', 'worker threads for Monte Carlo (same numbers whatever N)').argParser(parsePositiveInteger))
+    .addOption(new Option('--end <end>', 'ends for the restraint study: bottom, top or both').argParser(parseEnd))
+    .addOption(unitsOption())
+    .addHelpText(
+      'after',
+      `\nExamples:\n  stanchion assess scenarios/braced-base-plate.yaml\n  stanchion assess scenarios/braced-base-plate.yaml --out reports/braced-base-plate --force\n  stanchion assess scenarios/sway-canopy-post.yaml --methods form,sorm,mc --samples 2e6 --workers 2 --json\n\nExit codes: 0 done, 1 internal failure, 2 bad input or usage, 130 interrupted (Ctrl-C).\n\n${CAUTION}\n`,
+    )
+    .action(async (file: string, opts: AssessCliOptions) => (await import('./assessCommand.js')).runAssess(file, opts, argv));
+}

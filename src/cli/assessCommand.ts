@@ -3,10 +3,10 @@ import { loadScenario } from '../scenario/loadScenario.js';
 import { assessColumn } from '../studies/columnAssessment.js';
 import { assessmentJson } from '../studies/assessmentJson.js';
 import { assessmentReportInput } from '../studies/assessmentReport.js';
-import { writeOutputs } from '../report/writeOutputs.js';
 import { checkOutFolder } from '../report/outputFolder.js';
 import type { UnitSystem } from '../report/displayUnits.js';
 import type { Method } from '../scenario/types.js';
+import type { StudyName } from '../studies/studyNames.js';
 import type { EndChoice } from '../studies/columnRestraint.js';
 import { readScenarioText } from './readScenarioText.js';
 import { formatAssessment } from './assessSummary.js';
@@ -25,6 +25,8 @@ export interface AssessCliOptions {
   samples?: number;
   targetCov?: number;
   thorough?: boolean;
+  /** the studies to run; commander sets `false` for --no-studies */
+  studies?: StudyName[] | false;
   workers?: number;
   units?: UnitSystem;
   end?: EndChoice;
@@ -43,6 +45,7 @@ export async function runAssess(file: string, opts: AssessCliOptions, argv: stri
       samples: opts.samples,
       targetCov: opts.targetCov,
       thorough: opts.thorough,
+      studies: opts.studies === false ? [] : opts.studies,
       seed: opts.seed,
       workers: opts.workers,
       end: opts.end,
@@ -60,6 +63,8 @@ export async function runAssess(file: string, opts: AssessCliOptions, argv: stri
   const json = assessmentJson(a, meta);
   if (opts.out) {
     const input = assessmentReportInput(a, meta);
+    // the report stack (vega, vega-lite, resvg) loads only when a report is written
+    const { writeOutputs } = await import('../report/writeOutputs.js');
     const written = await writeOutputs(opts.out, input, json, { force: opts.force, inputFiles: [file], units: system });
     process.stderr.write(`stanchion: report written to ${written.dir}/report.html (${written.files.length} files)\n`);
   }

@@ -4,7 +4,8 @@
  */
 import { Option, type Command } from 'commander';
 import type { AssessCliOptions } from './assessCommand.js';
-import { parseEnd, parseFraction, parseMethods, parseNonNegativeInteger, parsePositiveInteger } from './optionParsers.js';
+import { parseEnd, parseFraction, parseMethods, parseNonNegativeInteger, parsePositiveInteger, parseStudies } from './optionParsers.js';
+import { STUDY_NAMES } from '../studies/studyNames.js';
 import { CAUTION } from './textTable.js';
 
 /** `argv`: the arguments after the executable, echoed in the report's `command`. */
@@ -18,6 +19,8 @@ export function registerAssess(program: Command, unitsOption: () => Option, argv
     .option('--force', 'replace DIR when it is a report folder stanchion wrote (it holds .stanchion-output.json); nothing else is ever replaced')
     .addOption(new Option('--seed <N>', 'seed of every random stream (default: the scenario\'s, else 1)').argParser(parseNonNegativeInteger))
     .addOption(new Option('--methods <LIST>', 'comma-separated: form, sorm, is, mc, subset').argParser(parseMethods))
+    .addOption(new Option('--studies <LIST>', `comma-separated studies to run beside the methods: ${STUDY_NAMES.join(', ')}, or none (default: all)`).argParser(parseStudies))
+    .option('--no-studies', 'run the reliability methods only (same as --studies none)')
     .addOption(new Option('--samples <N>', 'Monte Carlo samples (default: the scenario\'s, else 1e6)').argParser(parsePositiveInteger))
     .addOption(new Option('--target-cov <x>', 'stop Monte Carlo, importance sampling and subset simulation as soon as their CoV is at most x (e.g. 0.1)').argParser(parseFraction))
     .option('--thorough', 'FORM: search again from the mirror point and from both sides of every axis (default: only when the first search is in doubt)')
@@ -26,7 +29,7 @@ export function registerAssess(program: Command, unitsOption: () => Option, argv
     .addOption(unitsOption())
     .addHelpText(
       'after',
-      `\nExamples:\n  stanchion assess scenarios/braced-base-plate.yaml\n  stanchion assess scenarios/braced-base-plate.yaml --out reports/braced-base-plate --force\n  stanchion assess scenarios/sway-canopy-post.yaml --methods form,sorm,mc --samples 2e6 --workers 2 --json\n\nExit codes: 0 done, 1 internal failure, 2 bad input or usage, 130 interrupted (Ctrl-C).\n\n${CAUTION}\n`,
+      `\nExamples:\n  stanchion assess scenarios/braced-base-plate.yaml\n  stanchion assess scenarios/braced-base-plate.yaml --out reports/braced-base-plate --force\n  stanchion assess scenarios/sway-canopy-post.yaml --methods form,sorm,mc --samples 2e6 --workers 2 --json\n  stanchion assess scenarios/timber-store-post.yaml --methods form,is --no-studies --target-cov 0.1\n\nExit codes: 0 done, 1 internal failure, 2 bad input or usage, 130 interrupted (Ctrl-C).\n\n${CAUTION}\n`,
     )
     .action(async (file: string, opts: AssessCliOptions) => (await import('./assessCommand.js')).runAssess(file, opts, argv));
 }

@@ -5,7 +5,6 @@ import { readScenarioText } from './readScenarioText.js';
 import { assessColumn } from '../studies/columnAssessment.js';
 import { assessmentJson } from '../studies/assessmentJson.js';
 import { assessmentReportInput } from '../studies/assessmentReport.js';
-import { writeOutputs } from '../report/writeOutputs.js';
 import { checkOutFolder } from '../report/outputFolder.js';
 import { toolVersion } from './version.js';
 import { CAUTION, textTable } from './textTable.js';
@@ -29,6 +28,7 @@ export async function runRestraint(file: string, opts: RestraintOptions): Promis
     const a = await assessColumn(scenario, { methods: ['form', 'sorm'], end: opts.end, restraint: r });
     const meta = { version: toolVersion(), date: new Date().toISOString(), command: ['stanchion', ...process.argv.slice(2)].join(' ') };
     const json = assessmentJson(a, meta);
+    const { writeOutputs } = await import('../report/writeOutputs.js'); // the report stack, only when a report is written
     const written = await writeOutputs(opts.out, assessmentReportInput(a, meta), json, { force: opts.force, inputFiles: [file], units: system });
     process.stderr.write(`stanchion: report written to ${written.dir}/report.html (${written.files.length} files)\n`);
   }

@@ -29,7 +29,6 @@ import { parseSweepFile } from '../studies/sweepFile.js';
 import { sweepFingerprint } from '../studies/sweepFingerprint.js';
 import { journalPath, readJournalHeader, type JournalHeader, type StoredDefinition } from '../studies/sweepJournal.js';
 import { sweepJsonEntry, writeSweepOutputs } from '../studies/sweepOutput.js';
-import { writeSweepReport } from '../studies/sweepReport.js';
 import { checkOutFolder } from '../report/outputFolder.js';
 import { toolVersion } from './version.js';
 import { InterruptedError, isInterruptedError } from '../runtime/interruptFlag.js';
@@ -400,6 +399,7 @@ export async function runSweepCommand(file: string, opts: SweepOptions): Promise
   let report: string | null = null;
   const complete = writesOutputs && table.missingCount === 0 && table.finished > 0;
   if (complete && table.finished <= REPORT_CASES_LIMIT) {
+    const { writeSweepReport } = await import('../studies/sweepReport.js'); // the report stack, only when a report is written
     const written = await writeSweepReport({
       scenarioText: plan.scenarioText,
       scenarioFile: plan.scenarioFile,

@@ -1,4 +1,3 @@
-import { Option, type Command } from 'commander';
 import { loadScenario } from '../scenario/loadScenario.js';
 import { assessColumn } from '../studies/columnAssessment.js';
 import { assessmentJson } from '../studies/assessmentJson.js';
@@ -10,8 +9,6 @@ import type { StudyName } from '../studies/studyNames.js';
 import type { EndChoice } from '../studies/columnRestraint.js';
 import { readScenarioText } from './readScenarioText.js';
 import { formatAssessment } from './assessSummary.js';
-import { parseEnd, parseFraction, parseMethods, parseNonNegativeInteger, parsePositiveInteger } from './optionParsers.js';
-import { CAUTION } from './textTable.js';
 import { toolVersion } from './version.js';
 import { progressPrinter } from './progressPrinter.js';
 import { InterruptedError, withInterrupt } from './interrupt.js';

@@ -34,7 +34,7 @@ import { combinationModels, combinationSystemProblem } from '../limitState/combi
 import { loadTimeNotes } from '../loads/loadTimeNotes.js';
 import { combinationStudy, type CombinationStudy } from './combinationStudy.js';
 import { countEvaluations, evaluationsSoFar } from '../limitState/evaluationCount.js';
-import { STUDY_NAMES, STUDY_TEXT, type StudyName } from './studyNames.js';
+import { STUDY_NAMES, type StudyName } from './studyNames.js';
 
 export const DEFAULT_METHODS: readonly Method[] = ['form', 'sorm', 'is', 'mc'];
 export const DEFAULT_SEED = 1;

@@ -78,3 +78,22 @@ describe('stanchion restraint (end to end)', () => {
     expect(Math.abs(JSON.parse(a.stdout).reliability.form.beta - res.target_beta)).toBeLessThan(0.02);
   });
 });
+
+describe('assess --studies and meta.calls (end to end)', () => {
+  it('--no-studies: the methods only, every call listed in meta.calls; a bad study name exits 2 naming --studies', async () => {
+    const r = await runCli(['assess', 'scenarios/braced-base-plate.yaml', '--json', '--methods', 'form,is', '--no-studies', '--target-cov', '0.1']);
+    expect(r.status).toBe(0);
+    const j = JSON.parse(r.stdout);
+    expect(j.meta.studies).toEqual([]);
+    expect(j.sensitivity.tornado).toBeUndefined();
+    expect(j.restraint).toBeUndefined();
+    // common practice: the calls each method reports are the calls listed
+    expect(j.meta.calls.form).toBe(j.reliability.form.calls);
+    expect(j.meta.calls.is).toBe(j.reliability.is.calls);
+    expect(j.reliability.is.cov).toBeLessThanOrEqual(0.1);
+    const bad = await runCli(['assess', 'scenarios/braced-base-plate.yaml', '--studies', 'tornado,magic']);
+    expect(bad.status).toBe(2);
+    expect(bad.stderr).toMatch(/--studies.*unknown study 'magic'/);
+    expect(bad.stderr.trim().split('\n')).toHaveLength(1);
+  });
+});

@@ -13,6 +13,8 @@ import { runSweepBench } from './sweepBench.js';
 import { runValidBench } from './validBench.js';
 import { runKernelBench } from './kernelBench.js';
 import { runSweepCostBench } from './sweepCostBench.js';
+import { runFormCallsBench, runStartupBench } from './startupBench.js';
+import { loadRecipe } from '../src/reliability/loadRecipe.js';
 import { columnRecipe } from '../src/limitState/columnRecipe.js';
 import { loadScenario } from '../src/scenario/loadScenario.js';
 
@@ -38,6 +40,13 @@ async function main(): Promise<void> {
     for (const line of await runValidBench(count, seed)) console.log(line);
     return;
   }
+  console.log('\n## start-up (wall time, against node -e 0 in the same run)');
+  for (const line of runStartupBench(root, join(root, 'scenarios', 'braced-base-plate.yaml'))) console.log(line);
+  console.log('\n## FORM calls');
+  for (const file of ['braced-base-plate.yaml', 'timber-store-post.yaml']) {
+    for (const line of runFormCallsBench(await loadRecipe(recipeFor(file)), `scenarios/${file}`)) console.log(line);
+  }
+  if (process.argv[2] === 'startup') return;
   console.log('\n## mechanics (critical-load solves per second)');
   for (const line of await runMechanicsBench()) console.log(line);
   console.log('\n## Monte Carlo kernel (per CPU second; numpy reference: bench/numpy_column_mc.py)');

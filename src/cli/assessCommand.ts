@@ -1,17 +1,14 @@
-import { Option, type Command } from 'commander';
 import { loadScenario } from '../scenario/loadScenario.js';
 import { assessColumn } from '../studies/columnAssessment.js';
 import { assessmentJson } from '../studies/assessmentJson.js';
 import { assessmentReportInput } from '../studies/assessmentReport.js';
-import { writeOutputs } from '../report/writeOutputs.js';
 import { checkOutFolder } from '../report/outputFolder.js';
 import type { UnitSystem } from '../report/displayUnits.js';
 import type { Method } from '../scenario/types.js';
+import type { StudyName } from '../studies/studyNames.js';
 import type { EndChoice } from '../studies/columnRestraint.js';
 import { readScenarioText } from './readScenarioText.js';
 import { formatAssessment } from './assessSummary.js';
-import { parseEnd, parseFraction, parseMethods, parseNonNegativeInteger, parseSampleCount, parseWorkerCount } from './optionParsers.js';
-import { CAUTION } from './textTable.js';
 import { toolVersion } from './version.js';
 import { shownPath } from './shownPath.js';
 import { join } from 'node:path';
@@ -26,6 +23,9 @@ export interface AssessCliOptions {
   methods?: Method[];
   samples?: number;
   targetCov?: number;
+  thorough?: boolean;
+  /** the studies to run; commander sets `false` for --no-studies */
+  studies?: StudyName[] | false;
   workers?: number;
   units?: UnitSystem;
   end?: EndChoice;
@@ -43,6 +43,8 @@ export async function runAssess(file: string, opts: AssessCliOptions, argv: stri
       methods: opts.methods,
       samples: opts.samples,
       targetCov: opts.targetCov,
+      thorough: opts.thorough,
+      studies: opts.studies === false ? [] : opts.studies,
       seed: opts.seed,
       workers: opts.workers,
       end: opts.end,
@@ -63,29 +65,9 @@ export async function runAssess(file: string, opts: AssessCliOptions, argv: stri
   if (opts.out) {
     process.stderr.write('stanchion: writing the report …\n');
     const input = assessmentReportInput(a, meta);
+    // the report stack (vega, vega-lite, resvg) loads only when a report is written
+    const { writeOutputs } = await import('../report/writeOutputs.js');
     const written = await writeOutputs(opts.out, input, json, { force: opts.force, inputFiles: [file], units: system });
     process.stderr.write(`stanchion: report written to ${shownPath(join(written.dir, 'report.html'))} (${written.files.length} files)\n`);
   }
-}
-
-export function registerAssess(program: Command, unitsOption: () => Option): void {
-  program
-    .command('assess')
-    .description('reliability, sensitivity, restraint study and report for one scenario')
-    .argument('<FILE>', 'scenario (.yaml, .yml, .json, or - for stdin)')
-    .option('--json', 'print one JSON document (SI units) on stdout')
-    .option('--out <DIR>', 'write the report (HTML, Markdown, JSON, CSV, charts) into the new folder DIR, whole or not at all')
-    .option('--force', 'replace DIR when it is a report folder stanchion wrote (it holds .stanchion-output.json); nothing else is ever replaced')
-    .addOption(new Option('--seed <N>', 'seed of every random stream (default: the scenario\'s, else 1)').argParser(parseNonNegativeInteger))
-    .addOption(new Option('--methods <LIST>', 'comma-separated: form, sorm, is, mc, subset').argParser(parseMethods))
-    .addOption(new Option('--samples <N>', 'Monte Carlo samples (default: the scenario\'s, else 1e6)').argParser(parseSampleCount))
-    .addOption(new Option('--target-cov <x>', 'stop Monte Carlo early once its CoV is at most x (e.g. 0.1)').argParser(parseFraction))
-    .addOption(new Option('--workers <N>', 'worker threads for Monte Carlo (same numbers whatever N)').argParser(parseWorkerCount))
-    .addOption(new Option('--end <end>', 'ends for the restraint study: bottom, top or both').argParser(parseEnd))
-    .addOption(unitsOption())
-    .addHelpText(
-      'after',
-      `\nExamples:\n  stanchion assess scenarios/braced-base-plate.yaml\n  stanchion assess scenarios/braced-base-plate.yaml --out reports/braced-base-plate --force\n  stanchion assess scenarios/sway-canopy-post.yaml --methods form,sorm,mc --samples 2e6 --workers 2 --json\n\nEach option by example:\n  --json                      one JSON document on stdout (SI units)\n  --out reports/c3 --force    report folder; --force replaces one stanchion wrote\n  --seed 20261201             same seed, same numbers\n  --methods form,sorm,is      any of form, sorm, is, mc, subset, given once\n  --samples 2e6               Monte Carlo samples\n  --target-cov 0.05           stop Monte Carlo at 5 % CoV of pf\n  --workers 2                 worker threads\n  --end bottom                restraint study of the base only\n  --units us                  kip, ft, ksi for people (JSON stays SI)\n\nExit codes: 0 done, 1 internal failure, 2 bad input or usage, 130 interrupted (Ctrl-C).\n\n${CAUTION}\n`,
-    )
-    .action((file: string, opts: AssessCliOptions) => runAssess(file, opts, process.argv.slice(2)));
 }

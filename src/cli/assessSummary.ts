@@ -1,4 +1,5 @@
 /** The human summary of `stanchion assess` for the terminal. */
+import { STUDY_NAMES } from '../studies/studyNames.js';
 import type { Assessment } from '../studies/columnAssessment.js';
 import { formatBeta, formatProbability, formatQuantity, type UnitSystem } from '../report/displayUnits.js';
 import { describePath, quantityKindOf } from '../limitState/quantityKind.js';
@@ -184,12 +185,13 @@ export function formatAssessment(a: Assessment, system: UnitSystem): string {
     lines.push(...connectionLines(joints, system, undefined, '    '));
     lines.push(connectionBasis(joints, 'the design point', system));
   }
-  if (a.sensitivity) {
+  const drivers = a.sensitivity?.utilization;
+  if (drivers) {
     lines.push('');
     lines.push('  what drives it (mean-value ratio at the 5 % / 95 % quantile of one variable, the rest at their means):');
     lines.push(
       textTable(
-        a.sensitivity.utilization.rows.slice(0, 6).map((t) => [describePath(t.variable), `${t.low.toFixed(3)} … ${t.high.toFixed(3)}`]),
+        drivers.rows.slice(0, 6).map((t) => [describePath(t.variable), `${t.low.toFixed(3)} … ${t.high.toFixed(3)}`]),
         '    ',
       ),
     );
@@ -198,6 +200,8 @@ export function formatAssessment(a: Assessment, system: UnitSystem): string {
     lines.push('');
     lines.push(`  restraint: ${a.restraint.sentence}`);
   }
+  lines.push('');
+  lines.push(...runLines(a));
   if (a.warnings.length) {
     lines.push('');
     for (const w of a.warnings) lines.push(`  warning: ${w}`);
@@ -207,4 +211,14 @@ export function formatAssessment(a: Assessment, system: UnitSystem): string {
   lines.push('');
   lines.push(assessResultLine(a));
   return lines.join('\n') + '\n';
+}
+
+/** Which studies ran (and which did not), and every limit-state call by method and study. */
+function runLines(a: Assessment): string[] {
+  const skipped = STUDY_NAMES.filter((n) => !a.studies.includes(n));
+  const total = Object.values(a.calls).reduce((x, y) => x + y, 0);
+  return [
+    `  studies: ${a.studies.length ? a.studies.join(', ') : 'none'}${skipped.length ? `; not run: ${skipped.join(', ')} (--studies LIST)` : ''}`,
+    `  limit-state calls: ${Object.entries(a.calls).map(([k, n]) => `${k} ${n}`).join(', ')} (total ${total})`,
+  ];
 }

@@ -1,4 +1,5 @@
 import { InvalidArgumentError } from 'commander';
+import { STUDY_NAMES, type StudyName } from '../studies/studyNames.js';
 
 const METHODS = ['form', 'sorm', 'is', 'mc', 'subset'] as const;
 export type MethodName = (typeof METHODS)[number];
@@ -43,6 +44,19 @@ export function parseMethods(value: string): MethodName[] {
     }
   }
   return [...new Set(list)] as MethodName[];
+}
+
+/** `--studies LIST`: names from STUDY_NAMES, or `none`. */
+export function parseStudies(value: string): StudyName[] {
+  const list = value.split(',').map((m) => m.trim().toLowerCase()).filter(Boolean);
+  if (list.length === 1 && list[0] === 'none') return [];
+  if (list.length === 0) throw new InvalidArgumentError(`expected a comma-separated list of ${STUDY_NAMES.join(', ')} (or none).`);
+  for (const m of list) {
+    if (!(STUDY_NAMES as readonly string[]).includes(m)) {
+      throw new InvalidArgumentError(`unknown study '${m}'; expected some of ${STUDY_NAMES.join(', ')} (or none).`);
+    }
+  }
+  return [...new Set(list)] as StudyName[];
 }
 
 export function parseUnits(value: string): 'si' | 'us' {

@@ -6,7 +6,6 @@ import { readScenarioText } from './readScenarioText.js';
 import { assessColumn, DEFAULT_SEED, governingAssessor } from '../studies/columnAssessment.js';
 import { assessmentJson } from '../studies/assessmentJson.js';
 import { assessmentReportInput } from '../studies/assessmentReport.js';
-import { writeOutputs } from '../report/writeOutputs.js';
 import { checkOutFolder } from '../report/outputFolder.js';
 import { toolVersion } from './version.js';
 import { shownPath } from './shownPath.js';
@@ -38,6 +37,7 @@ export async function runRestraint(file: string, opts: RestraintOptions): Promis
     const meta = { version: toolVersion(), date: new Date().toISOString(), command: ['stanchion', ...process.argv.slice(2)].join(' ') };
     const json = assessmentJson(a, meta);
     const input = { ...assessmentReportInput(a, meta), subject: 'restraint' as const };
+    const { writeOutputs } = await import('../report/writeOutputs.js'); // the report stack, only when a report is written
     const written = await writeOutputs(opts.out, input, json, { force: opts.force, inputFiles: [file], units: system });
     process.stderr.write(`stanchion: report written to ${shownPath(join(written.dir, 'report.html'))} (${written.files.length} files)\n`);
   };

@@ -3,6 +3,7 @@
  * sits in the vector x), and the column's capacity, demand and limit state at any x.
  * g(x) = θ·capacity(x) − Σ loads (docs/mechanics.md). Hot path: no allocation per call.
  */
+import { noteEvaluation } from './evaluationCount.js';
 import type { Distribution } from '../probability/distribution.js';
 import { combinationDistributions, defaultCombination } from '../loads/combinationDistributions.js';
 import type { LoadCombination } from '../loads/loadCombinations.js';
@@ -156,6 +157,7 @@ export function buildColumnModel(given: Scenario, combination: LoadCombination =
   };
 
   const capacity = (x: Float64Array): number => {
+    noteEvaluation();
     const e = read(E, x);
     const i = read(I, x);
     const EI = e * i;

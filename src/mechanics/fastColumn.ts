@@ -6,7 +6,8 @@ import { EN_IMPERFECTION, enCapacity } from './en1993.js';
 import { equivalentBowCapacity } from './equivalentBow.js';
 import { firstYieldCapacity } from './firstYield.js';
 import { strengthModelKind } from './strengthModelKind.js';
-import { buildFixityTable, interpolateFixityPair, interpolateFixityTable, pairFixityTables, type FixityTable, type FixityTablePair } from './fixityTable.js';
+import { interpolateFixityPair, interpolateFixityTable, pairFixityTables, type FixityTable, type FixityTablePair } from './fixityTable.js';
+import { shippedOrBuilt, type TableName } from './shippedTables.js';
 import { modeCoefficientsInto } from './modeCoefficients.js';
 import { ratioFromFixity } from './restraint.js';
 import type { Frame, StrengthModel } from './types.js';
@@ -15,7 +16,8 @@ import type { Frame, StrengthModel } from './types.js';
  * Fast first-mode critical load and curvature factor for the reliability hot loop (no lateral spring).
  *
  * φ is tabulated once per frame over the fixity factors f = R/(R+3) ∈ [0, 1]² (129 × 129 nodes,
- * built lazily from the exact solver in ~15 ms) and interpolated by local bicubic Lagrange polynomials:
+ * read from the shipped file data/fixity-tables.bin after a spot check against the exact solver,
+ * or built from it when the file is missing or stale; shippedTables.ts) and interpolated by local bicubic Lagrange polynomials:
  * braced tabulates φ, sway tabulates φ² (linear in f near the mechanism corner, where φ → 0).
  * Measured worst relative error in Pcr ≈ 5e-9 (braced) and ≈ 1e-7 (sway, near the corner). In sway, where
  * f_A + f_B < SWAY_EXACT_CORNER the relative accuracy of a table degrades as Pcr → 0, so the exact
@@ -36,13 +38,14 @@ const weights = new Float64Array(WEIGHT_LENGTH);
 const coeffs = new Float64Array(3);
 const extrema = new Float64Array(EXTREMA_LENGTH);
 
-function buildTable(frame: Frame): FixityTable {
+/** φ (braced) or φ² (sway) at a node of the fixity grid, by the exact solver. */
+function phiNode(frame: Frame): (fA: number, fB: number) => number {
   const w = new Float64Array(WEIGHT_LENGTH);
-  return buildFixityTable(FAST_TABLE_CELLS, (fA, fB) => {
+  return (fA, fB) => {
     weightsInto(w, ratioFromFixity(fA), ratioFromFixity(fB), 0);
     const phi = criticalPhiFromWeights(frame, w, 1);
     return frame === 'braced' ? phi : phi * phi;
-  });
+  };
 }
 
 /**
@@ -51,19 +54,34 @@ function buildTable(frame: Frame): FixityTable {
  * hump. c = ρ / max|w| is therefore smooth in (f_A, f_B) and interpolates to ~1e-9 (the sway mode's
  * c switches between end and crest values, has kinks, and keeps the closed form).
  */
-function bracedCurvatureTable(): FixityTable {
-  if (bracedC) return bracedC;
+function bracedCurvatureNode(): (fA: number, fB: number) => number {
   const w = new Float64Array(WEIGHT_LENGTH);
   const ab = new Float64Array(3);
   const ex = new Float64Array(EXTREMA_LENGTH);
-  bracedC = buildFixityTable(FAST_TABLE_CELLS, (fA, fB) => {
+  return (fA, fB) => {
     weightsInto(w, ratioFromFixity(fA), ratioFromFixity(fB), 0);
     const phi = criticalPhiFromWeights('braced', w, 1);
     modeCoefficientsInto(ab, 'braced', w, phi);
     modeExtremaInto(ex, ab[0], ab[1], ab[2], phi);
     return curvatureFactorFromExtrema(ex);
-  });
+  };
+}
+
+/** The exact value at a node of each shipped table (shippedTables.ts, writeFixityTables.ts). */
+export const TABLE_NODES: Record<TableName, () => (fA: number, fB: number) => number> = {
+  bracedPhi: () => phiNode('braced'),
+  swayPhiSquared: () => phiNode('sway'),
+  bracedCurvature: bracedCurvatureNode,
+};
+
+function bracedCurvatureTable(): FixityTable {
+  if (bracedC) return bracedC;
+  bracedC = shippedOrBuilt('bracedCurvature', FAST_TABLE_CELLS, bracedCurvatureNode());
   return bracedC;
+}
+
+function buildTable(frame: Frame): FixityTable {
+  return shippedOrBuilt(frame === 'braced' ? 'bracedPhi' : 'swayPhiSquared', FAST_TABLE_CELLS, phiNode(frame));
 }
 
 /** The table of a frame, built on first use. */

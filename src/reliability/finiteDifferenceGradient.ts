@@ -1,11 +1,13 @@
 /**
  * ∇g in u-space by finite differences. u is dimensionless (standard normal), so one absolute
  * step serves every component: central differences with h = 1e-5 balance truncation (h² g''')
- * against rounding (ε|g|/h); forward differences use h = 1e-7 and cost half the calls.
+ * against rounding (ε|g|/h); forward differences use h = 3e-7 (rounding ε|g|/h stays near 1e-10 of the gradient of a
+ * column limit state; truncation h·g'' moves α by about 3e-7 and β, stationary there, by its
+ * square) and cost half the calls.
  */
 export type DifferenceScheme = 'central' | 'forward';
 
-export const DEFAULT_STEP: Record<DifferenceScheme, number> = { central: 1e-5, forward: 1e-7 };
+export const DEFAULT_STEP: Record<DifferenceScheme, number> = { central: 1e-5, forward: 3e-7 };
 
 /**
  * Writes ∇G(u) into `out`. `gAtU` = G(u), already known (used by forward differences).
@@ -29,17 +31,20 @@ export function finiteDifferenceGradient(
   for (let i = 0; i < u.length; i++) {
     const ui = u[i];
     work[i] = ui + h;
+    // the step actually taken: ui + h is rounded, and dividing by h would add that rounding
+    const hUp = work[i] - ui;
     const up = G(work);
     if (scheme === 'central') {
       work[i] = ui - h;
+      const hDown = ui - work[i];
       const down = G(work);
-      out[i] = (up - down) / (2 * h);
+      out[i] = (up - down) / (hUp + hDown);
       if (sides) {
-        sides[i] = (up - gAtU) / h;
-        sides[n + i] = (gAtU - down) / h;
+        sides[i] = (up - gAtU) / hUp;
+        sides[n + i] = (gAtU - down) / hDown;
       }
     } else {
-      out[i] = (up - gAtU) / h;
+      out[i] = (up - gAtU) / hUp;
       if (sides) {
         sides[i] = out[i];
         sides[n + i] = Number.NaN;

@@ -11,7 +11,14 @@
  * the distance on the limit state rather than its closest point. Every such direction, at the
  * start and at each converged point, is searched again from starts offset along it, both signs.
  * The converged points whose Φ(−β) is not negligible beside the nearest one's are combined as a
- * linearised series system (seriesSystem.ts). Without doubt, only the mirror image −u* is tried.
+ * linearised series system (seriesSystem.ts).
+ *
+ * Cost. The gradient is taken by forward differences (n calls per step). Blind restarts are made
+ * only when the first search gives reason to doubt it: it did not converge (four restarts), or it
+ * converged at β < NEAR_ORIGIN_BETA, where the mirror image −u* may fail as well (the mirror).
+ * A caller that knows of several failure modes, or `thorough`, asks for the full scan: the mirror
+ * and ±b along every axis. The one-sided differences that detect doubt cost n more calls at the
+ * start and at each converged point (the backward side; the forward side is the gradient's).
  */
 import { normalSf } from '../probability/normal.js';
 import type { DesignPointCandidate, FormResult, FormSystem, ReliabilityProblem } from './types.js';
@@ -29,15 +36,20 @@ export interface FormOptions {
   tolG?: number;
   /** Distance of u from the line of ∇g, relative to max(1, ‖u‖) (default 1e-7). */
   tolU?: number;
-  /** Default 'central'. */
+  /** Default 'forward' (n calls per gradient; 'central' costs 2n). */
   differences?: DifferenceScheme;
   /** Finite-difference step in u (default 1e-5 central, 1e-7 forward). */
   step?: number;
   /**
    * Extra starts that do not depend on doubt: the mirror image −u*, then ±b along each axis.
-   * Default 1 (the mirror) after a converged search, 4 after a failed one; 0 turns them off.
+   * Default: none after a converged search with β >= NEAR_ORIGIN_BETA, 1 (the mirror) below it,
+   * 4 after a failed one; 0 turns them off.
    */
   restarts?: number;
+  /** Quasi-Newton curvature in the search steps (default true; false: plain improved HL-RF). */
+  curvature?: boolean;
+  /** The full restart scan: the mirror and ±b along every axis (2n + 1 extra searches). */
+  thorough?: boolean;
   /** Search again along doubtful directions (default true; see the file comment). */
   probeDoubtful?: boolean;
   /** Starting point in u-space (default the origin). */
@@ -50,6 +62,10 @@ export interface FormOptions {
 export const SYSTEM_PF_SHARE = 0.01;
 /** Blind restarts after a failed search from the origin. */
 const RESCUE_RESTARTS = 4;
+/** Share of ‖u*‖ under which a component of a converged point may hide a kink or a flat gradient. */
+const DOUBT_SHARE = 1e-2;
+/** Below this β the origin is close to the limit state and the mirror image −u* is searched too. */
+export const NEAR_ORIGIN_BETA = 1;
 /** Offset of the doubtful-direction starts, in standard deviations. */
 const PROBE_OFFSET = 1;
 /** At most this many doubtful directions are searched (kinks before flat components). */
@@ -75,7 +91,7 @@ export function form(problem: ReliabilityProblem, opts: FormOptions = {}): FormR
   const origin = new Float64Array(n);
   const g0 = G(origin);
   const originFails = g0 <= 0;
-  const scheme = opts.differences ?? 'central';
+  const scheme = opts.differences ?? 'forward';
   const settings: HlrfSettings = {
     maxIterations: opts.maxIterations ?? 100,
     tolG: opts.tolG ?? 1e-8,
@@ -84,6 +100,7 @@ export function form(problem: ReliabilityProblem, opts: FormOptions = {}): FormR
     step: opts.step ?? DEFAULT_STEP[scheme],
     gScale: Math.abs(g0) > 0 ? Math.abs(g0) : 1,
     betaSign: originFails ? -1 : 1,
+    curvature: opts.curvature ?? true,
   };
   const start = opts.start ?? origin;
   const main = improvedHlrf(G, start, opts.start === undefined ? g0 : undefined, settings);
@@ -92,7 +109,7 @@ export function form(problem: ReliabilityProblem, opts: FormOptions = {}): FormR
   const b = main.converged ? Math.max(1, norm(main.u)) : 1;
 
   // Blind restarts: the mirror image of the design point, then ±b along each axis.
-  const restarts = originFails ? 0 : opts.restarts ?? (main.converged ? 1 : RESCUE_RESTARTS);
+  const restarts = originFails ? 0 : opts.restarts ?? defaultRestarts(main, n, opts.thorough === true);
   const starts: Float64Array[] = [];
   if (restarts > 0 && main.converged && norm(main.u) > 0) starts.push(main.u.map((v) => -v));
   for (let i = 0; starts.length < restarts && i < n; i++) {
@@ -109,10 +126,18 @@ export function form(problem: ReliabilityProblem, opts: FormOptions = {}): FormR
   const doubtful = new Set<number>();
   if (!originFails && opts.probeDoubtful !== false) {
     const probed = new Set<number>();
+    // each point's directions once: the backward side costs n calls with forward differences
+    const known = new Map<Float64Array, number[]>();
     const directionsAt = (r: HlrfOutcome, atStart: boolean): number[] => {
-      const sides = atStart ? r.sidesAtStart : scheme === 'central' ? r.sides : centralSides(G, r.u, r.g, DEFAULT_STEP.central);
-      return rankDoubtful(sides);
+      const sides = atStart ? r.sidesAtStart : r.sides;
+      const cached = known.get(sides);
+      if (cached) return cached;
+      if (scheme === 'forward') backwardSides(G, atStart ? Float64Array.from(start) : r.u, atStart ? g0Start(r) : r.g, settings.step, sides, !atStart);
+      const dirs = rankDoubtful(sides);
+      known.set(sides, dirs);
+      return dirs;
     };
+    const g0Start = (r: HlrfOutcome): number => (opts.start === undefined ? g0 : r.history[0].g);
     const probeAround = (centre: Float64Array, dirs: number[]): void => {
       for (const i of dirs) {
         doubtful.add(i);
@@ -127,7 +152,9 @@ export function form(problem: ReliabilityProblem, opts: FormOptions = {}): FormR
         }
       }
     };
-    probeAround(main.converged ? main.u : Float64Array.from(start), directionsAt(main, true));
+    // around the start, where that doubt was seen: a forward-difference search leaves a kink
+    // towards one side, so its end point need not lie on the doubtful line any more
+    probeAround(Float64Array.from(start), directionsAt(main, true));
     for (const r of found.slice()) if (r.converged) probeAround(r.u, directionsAt(r, false));
   }
 
@@ -228,17 +255,31 @@ function rankDoubtful(sides: Float64Array): number[] {
   return doubtfulComponents(sides).sort((i, j) => kink(i) - kink(j) || i - j);
 }
 
-/** One-sided differences at u by an extra central pass (the forward scheme has no backward point). */
-function centralSides(G: (u: Float64Array) => number, u: Float64Array, g: number, h: number): Float64Array {
+/** Blind restarts by default: see the file comment. */
+function defaultRestarts(main: HlrfOutcome, n: number, thorough: boolean): number {
+  if (thorough) return 1 + 2 * n;
+  if (!main.converged) return RESCUE_RESTARTS;
+  return norm(main.u) < NEAR_ORIGIN_BETA ? 1 : 0;
+}
+
+/**
+ * The backward one-sided differences at u into sides[n + i] (one call each). The forward scheme's
+ * gradient already holds the forward side in sides[i]; together they tell a kink from a slope.
+ * At a converged point (`converged`) u is parallel to ∇g, so a component that vanishes or kinks
+ * has u_i ≈ 0: only components with |u_i| <= DOUBT_SHARE·max(1, ‖u‖) are probed, the others
+ * keep the forward side on both sides.
+ */
+function backwardSides(G: (u: Float64Array) => number, u: Float64Array, g: number, h: number, sides: Float64Array, converged: boolean): void {
   const n = u.length;
-  const sides = new Float64Array(2 * n);
   const work = Float64Array.from(u);
+  const small = DOUBT_SHARE * Math.max(1, norm(u));
   for (let i = 0; i < n; i++) {
-    work[i] = u[i] + h;
-    sides[i] = (G(work) - g) / h;
+    if (converged && Math.abs(u[i]) > small) {
+      sides[n + i] = sides[i];
+      continue;
+    }
     work[i] = u[i] - h;
     sides[n + i] = (g - G(work)) / h;
     work[i] = u[i];
   }
-  return sides;
 }

@@ -33,6 +33,53 @@ export interface SubsetOptions {
 
 /** Streams reserved for the levels of one run. */
 const STREAMS_PER_RUN = 1000;
+/** Independent runs at most when a target CoV is asked for. */
+export const SUBSET_MAX_RUNS = 100;
+
+export interface SubsetTargetOptions extends SubsetOptions {
+  /** Add independent runs (streams of run 0, 1, 2, ...) until the CoV of their mean is at or below this. */
+  targetCov?: number;
+  /** Cap on the runs (default SUBSET_MAX_RUNS). */
+  maxRuns?: number;
+}
+
+/**
+ * Subset simulation to a target CoV. One run's CoV is fixed by N and the number of levels, so
+ * the estimate is refined by independent runs: pf = mean of the runs' pf_k, and
+ * Var = Σ (CoV_k pf_k)² / K² (independent runs). Stops as soon as that CoV reaches the target.
+ * Without a target it is exactly one run. The levels reported are the first run's.
+ */
+export function subsetToTargetCov(problem: ReliabilityProblem, opts: SubsetTargetOptions): SubsetResult {
+  const first = subsetSimulation(problem, { ...opts, run: opts.run ?? 0 });
+  const target = opts.targetCov;
+  if (target === undefined || !(first.cov > target)) return first;
+  const maxRuns = Math.min(opts.maxRuns ?? SUBSET_MAX_RUNS, Math.floor(4294967296 / STREAMS_PER_RUN));
+  const runs = [first];
+  let estimate = { pf: first.pf, cov: first.cov };
+  while (runs.length < maxRuns && !(estimate.cov <= target)) {
+    runs.push(subsetSimulation(problem, { ...opts, run: (opts.run ?? 0) + runs.length }));
+    estimate = meanOfRuns(runs);
+  }
+  const warnings = [...new Set(runs.flatMap((r) => r.warnings))];
+  if (!(estimate.cov <= target)) warnings.push(`the target CoV ${target} was not reached in ${runs.length} independent runs (CoV ${estimate.cov.toPrecision(2)})`);
+  return {
+    ...first,
+    pf: estimate.pf,
+    cov: estimate.cov,
+    beta: betaFromPf(estimate.pf),
+    calls: runs.reduce((a, r) => a + r.calls, 0),
+    converged: runs.every((r) => r.converged),
+    runs: runs.length,
+    warnings,
+  };
+}
+
+function meanOfRuns(runs: SubsetResult[]): { pf: number; cov: number } {
+  const k = runs.length;
+  const pf = runs.reduce((a, r) => a + r.pf, 0) / k;
+  const variance = runs.reduce((a, r) => a + (r.cov * r.pf) ** 2, 0) / (k * k);
+  return { pf, cov: pf > 0 ? Math.sqrt(variance) / pf : Infinity };
+}
 
 export function subsetSimulation(problem: ReliabilityProblem, opts: SubsetOptions): SubsetResult {
   const n = problem.transform.n;

@@ -184,5 +184,7 @@ export interface SubsetResult {
   /** False when the cap on levels was hit before reaching g <= 0. */
   converged: boolean;
   seed: number;
+  /** Independent runs averaged to reach a target CoV (absent: one run). */
+  runs?: number;
   warnings: string[];
 }

@@ -8,6 +8,7 @@
  * own evaluate is never called.
  */
 import { parseExpression, type MathNode } from './mathjsBundle.js';
+import { parsePlainQuantity } from './plainQuantityParser.js';
 import { DIMENSIONLESS, describeDimensions, sameDimensions, type Dimensions } from './dimensions.js';
 import { COLUMN_LENGTH_SYMBOL, lookupUnit } from './units.js';
 import { normaliseUnitSpelling } from './unitSpelling.js';
@@ -43,7 +44,9 @@ export function evaluateQuantity(text: string, options: EvaluateOptions = {}): E
   if (text.trim() === '') throw new ExpressionError('is empty');
   let tree: MathNode;
   try {
-    tree = parseExpression(normaliseUnitSpelling(text));
+    // engineering spellings first (kN·m, kip-in); plain quantities then skip mathjs's parser (slow to start)
+    const spelled = normaliseUnitSpelling(text);
+    tree = parsePlainQuantity(spelled) ?? parseExpression(spelled);
   } catch {
     // the parser's own wording ("Value expected (char 13)") means nothing to an engineer
     throw new ExpressionError('cannot be read as a number with a unit (or, for a length, an expression of L)');

@@ -4,6 +4,7 @@
  * litres): in a scenario it is the column length.
  */
 import { lookupMathjsUnit, type UnitInfo } from './mathjsBundle.js';
+import { COMMON_UNITS } from './commonUnits.js';
 
 // Exact definitions: 1 lbf = 0.45359237 kg × 9.80665 m/s², 1 in = 0.0254 m (NIST SP 811).
 const LBF = 0.45359237 * 9.80665;
@@ -24,5 +25,7 @@ export const COLUMN_LENGTH_SYMBOL = 'L';
 export function lookupUnit(name: string): UnitInfo | undefined {
   if (name === COLUMN_LENGTH_SYMBOL) return undefined;
   if (Object.prototype.hasOwnProperty.call(EXTRA_UNITS, name)) return EXTRA_UNITS[name];
+  // the usual units without starting mathjs (commonUnits.ts; same values)
+  if (Object.prototype.hasOwnProperty.call(COMMON_UNITS, name)) return COMMON_UNITS[name];
   return lookupMathjsUnit(name);
 }

@@ -3,6 +3,7 @@
  * JSON has no Infinity: a non-finite number is written as null.
  */
 import { SAMPLER_VERSION } from '../probability/blockRng.js';
+import type { SobolResult } from '../sensitivity/sobol.js';
 import { checkJson } from '../limitState/deterministicCheck.js';
 import type { Assessment } from './columnAssessment.js';
 import { restraintJson } from './columnRestraint.js';
@@ -133,6 +134,7 @@ export function reliabilityJson(a: Assessment): Record<string, unknown> {
       beta: a.subset.beta,
       levels: a.subset.levels.length,
       converged: a.subset.converged,
+      ...(a.subset.runs !== undefined ? { runs: a.subset.runs } : {}),
     };
   }
   r.model_factor = modelFactorJson(a.modelFactor);
@@ -177,9 +179,9 @@ function sensitivityJson(a: Assessment): Record<string, unknown> {
   const f = a.form;
   const out: Record<string, unknown> = {};
   const s = a.sensitivity;
-  if (s) {
-    out.tornado = s.utilization.rows.map((t) => ({ variable: t.variable, low: t.low, high: t.high }));
-    out.capacity_tornado = s.capacity.rows.map((t) => ({ variable: t.variable, low: t.low, high: t.high }));
+  if (s?.utilization) out.tornado = s.utilization.rows.map((t) => ({ variable: t.variable, low: t.low, high: t.high }));
+  if (s?.capacity) out.capacity_tornado = s.capacity.rows.map((t) => ({ variable: t.variable, low: t.low, high: t.high }));
+  if (s?.conditionalBeta) {
     out.conditional_beta = s.conditionalBeta.rows.map((c) => ({
       variable: c.variable,
       low_value: c.lowValue,
@@ -187,6 +189,8 @@ function sensitivityJson(a: Assessment): Record<string, unknown> {
       beta_low: c.betaLow,
       beta_high: c.betaHigh,
     }));
+  }
+  if (s?.elasticities) {
     out.elasticities = s.elasticities.entries.map((e) => ({
       variable: e.variable,
       d_beta_d_mean: e.dBetaDMean,
@@ -194,7 +198,9 @@ function sensitivityJson(a: Assessment): Record<string, unknown> {
       mean_elasticity: e.meanElasticity,
       sd_elasticity: e.sdElasticity,
     }));
-    const sobol = (r: typeof s.sobolG) =>
+  }
+  if (s?.sobolG && s.sobolCapacity) {
+    const sobol = (r: SobolResult) =>
       r.first.map((fi, i) => ({ variable: fi.name, first: fi.value, first_ci95: [fi.lo, fi.hi], total: r.total[i].value, total_ci95: [r.total[i].lo, r.total[i].hi] }));
     out.sobol = { samples: s.sobolG.n, capacity: sobol(s.sobolCapacity), limit_state: sobol(s.sobolG) };
   }
@@ -225,6 +231,8 @@ export function assessmentJson(a: Assessment, meta: RunMeta): unknown {
       date: meta.date,
       command: meta.command,
       methods: a.methods,
+      studies: a.studies,
+      calls: a.calls,
       interrupted: a.interrupted,
     },
   };

@@ -182,24 +182,25 @@ export function assessmentReportInput(a: Assessment, meta: RunMeta): ReportInput
 
   const sens = a.sensitivity;
   const sensitivity: ReportInput['sensitivity'] = {
-    utilization: { baseline: sens?.utilization.baseline ?? c.utilization, rows: tornadoRows(sens?.utilization.rows ?? []) },
-    capacity: { baseline: sens?.capacity.baseline ?? c.capacity, rows: tornadoRows(sens?.capacity.rows ?? []) },
+    utilization: { baseline: sens?.utilization?.baseline ?? c.utilization, rows: tornadoRows(sens?.utilization?.rows ?? []) },
+    capacity: { baseline: sens?.capacity?.baseline ?? c.capacity, rows: tornadoRows(sens?.capacity?.rows ?? []) },
     conditionalBeta: {
-      baseline: sens?.conditionalBeta.baseline ?? f.beta,
-      rows: (sens?.conditionalBeta.rows ?? []).map((r) => ({ variable: r.variable, low: r.betaLow, high: r.betaHigh })),
+      baseline: sens?.conditionalBeta?.baseline ?? f.beta,
+      rows: (sens?.conditionalBeta?.rows ?? []).map((r) => ({ variable: r.variable, low: r.betaLow, high: r.betaHigh })),
     },
     importance: f.names.map((n, i) => ({ variable: n, alphaSquared: f.importance[i], alpha: f.alpha[i] })),
-    elasticities: (sens?.elasticities.entries ?? []).map((e) => ({ variable: e.variable, mean: e.meanElasticity, sd: e.sdElasticity })),
+    elasticities: (sens?.elasticities?.entries ?? []).map((e) => ({ variable: e.variable, mean: e.meanElasticity, sd: e.sdElasticity })),
   };
-  if (sens) {
+  const sobolG = sens?.sobolG;
+  if (sobolG) {
     sensitivity.sobol = {
-      samples: sens.sobolG.n,
-      rows: sens.sobolG.first.map((fi, i) => ({
+      samples: sobolG.n,
+      rows: sobolG.first.map((fi, i) => ({
         variable: fi.name,
         first: fi.value,
         firstCi95: [fi.lo, fi.hi] as [number, number],
-        total: sens.sobolG.total[i].value,
-        totalCi95: [sens.sobolG.total[i].lo, sens.sobolG.total[i].hi] as [number, number],
+        total: sobolG.total[i].value,
+        totalCi95: [sobolG.total[i].lo, sobolG.total[i].hi] as [number, number],
       })),
     };
   }

@@ -13,7 +13,7 @@ import { checkEstimate, checkForm, withinCheckBand, type FormCheckResult } from 
 import { importanceSamplingAtDesignPoint } from '../reliability/importanceSampling.js';
 import { monteCarlo } from '../reliability/monteCarlo.js';
 import { sorm } from '../reliability/sorm.js';
-import { subsetSimulation } from '../reliability/subsetSimulation.js';
+import { subsetToTargetCov } from '../reliability/subsetSimulation.js';
 import type { FormResult, IsResult, McResult, ReliabilityProblem, SimulationProgress, SormResult, SubsetResult } from '../reliability/types.js';
 import { verdict, type Verdict } from '../reliability/verdict.js';
 import { conditionalBeta, type ConditionalBetaEntry } from '../sensitivity/conditionalBeta.js';
@@ -35,6 +35,8 @@ import { characteristicValues, type CharacteristicSummary } from './characterist
 import { combinationModels, combinationSystemProblem } from '../limitState/combinationSystem.js';
 import { loadTimeNotes } from '../loads/loadTimeNotes.js';
 import { combinationStudy, type CombinationStudy } from './combinationStudy.js';
+import { countEvaluations, evaluationsSoFar } from '../limitState/evaluationCount.js';
+import { STUDY_NAMES, type StudyName } from './studyNames.js';
 
 export const DEFAULT_METHODS: readonly Method[] = ['form', 'sorm', 'is', 'mc'];
 export const DEFAULT_SEED = 1;
@@ -49,8 +51,10 @@ const HISTOGRAM_STREAM = 9_000_001;
 export interface AssessOptions {
   methods?: readonly Method[];
   samples?: number;
-  /** stop Monte Carlo once its coefficient of variation is at or below this */
+  /** stop Monte Carlo, importance sampling and subset simulation once their CoV is at or below this */
   targetCov?: number;
+  /** FORM's full restart scan (form.ts `thorough`) */
+  thorough?: boolean;
   seed?: number;
   workers?: number;
   end?: EndChoice;
@@ -64,15 +68,18 @@ export interface AssessOptions {
   sobolSamples?: number;
   /** skip sensitivity and restraint studies (sweeps, quick looks) */
   reliabilityOnly?: boolean;
+  /** the studies to run beside the methods (default all of STUDY_NAMES; reliabilityOnly: none) */
+  studies?: readonly StudyName[];
 }
 
+/** The sensitivity studies that ran (each can be switched off: studyNames.ts). */
 export interface SensitivityStudy {
-  utilization: { baseline: number; rows: TornadoEntry[] };
-  capacity: { baseline: number; rows: TornadoEntry[] };
-  conditionalBeta: { baseline: number; rows: ConditionalBetaEntry[] };
-  elasticities: ElasticityResult;
-  sobolCapacity: SobolResult;
-  sobolG: SobolResult;
+  utilization?: { baseline: number; rows: TornadoEntry[] };
+  capacity?: { baseline: number; rows: TornadoEntry[] };
+  conditionalBeta?: { baseline: number; rows: ConditionalBetaEntry[] };
+  elasticities?: ElasticityResult;
+  sobolCapacity?: SobolResult;
+  sobolG?: SobolResult;
   notes: string[];
 }
 
@@ -112,6 +119,10 @@ export interface Assessment {
   byStrengthModel?: StrengthModelBeta[];
   /** characteristic values and implied partial factors at the FORM design point */
   characteristic: CharacteristicSummary;
+  /** the studies that ran, in STUDY_NAMES order */
+  studies: StudyName[];
+  /** every limit-state evaluation of the run, by method and study (`meta.calls`) */
+  calls: Record<string, number>;
 }
 
 function momentsOf(model: ColumnModel): Moments[] {
@@ -140,33 +151,48 @@ function studyBeta(s: Scenario): number {
   return r.converged || !Number.isFinite(r.beta) ? r.beta : NaN;
 }
 
-function sensitivityStudy(s: Scenario, model: ColumnModel, baseline: number, seed: number, sobolN: number): SensitivityStudy {
+function sensitivityStudy(s: Scenario, model: ColumnModel, baseline: number, seed: number, run: ReadonlySet<StudyName>, calls: Record<string, number>, sobolN: number): SensitivityStudy {
   const { names, dists } = model;
-  const notes: string[] = [];
-  const utilization = { baseline: model.utilization(model.mean), rows: tornado(names, dists, model.utilization) };
-  const capacity = { baseline: model.capacity(model.mean), rows: tornado(names, dists, model.capacity) };
-  const conditional = {
-    baseline,
-    rows: conditionalBeta(names, dists, (i, value) => studyBeta(withScalar(s, names[i], { kind: 'fixed', value }))),
+  const out: SensitivityStudy = { notes: [] };
+  const counted = <T>(study: StudyName, fn: () => T): T => {
+    const { result, calls: n } = countEvaluations(fn);
+    calls[study] = (calls[study] ?? 0) + n;
+    return result;
   };
-  const moments = momentsOf(model);
-  const elasticities = betaElasticities(names, moments, (overrides) => {
-    let t = s;
-    for (const [path, o] of Object.entries(overrides)) {
-      const i = names.indexOf(path);
-      const spec = withMoments(specOf(s, path), o.mean ?? moments[i].mean, o.sd ?? moments[i].sd);
-      // e.g. a uniform fixity on [0, 1] shifted past 1: that side of the difference does not exist
-      if (!supportInsideDomain(spec, fieldDomain(path))) return NaN;
-      t = withScalar(t, path, { kind: 'random', spec });
-    }
-    return studyBeta(t);
-  });
-  if (model.correlation) {
-    notes.push('Sobol indices treat the variables as independent (the stated correlation is left out of that study only).');
+  if (run.has('tornado')) {
+    counted('tornado', () => {
+      out.utilization = { baseline: model.utilization(model.mean), rows: tornado(names, dists, model.utilization) };
+      out.capacity = { baseline: model.capacity(model.mean), rows: tornado(names, dists, model.capacity) };
+    });
   }
-  const sobolCapacity = sobolIndices(names, dists, model.capacity, { seed, n: sobolN });
-  const sobolG = sobolIndices(names, dists, model.g, { seed: seed + 1, n: sobolN });
-  return { utilization, capacity, conditionalBeta: conditional, elasticities, sobolCapacity, sobolG, notes };
+  if (run.has('conditional-beta')) {
+    out.conditionalBeta = counted('conditional-beta', () => ({
+      baseline,
+      rows: conditionalBeta(names, dists, (i, value) => studyBeta(withScalar(s, names[i], { kind: 'fixed', value }))),
+    }));
+  }
+  if (run.has('elasticities')) {
+    const moments = momentsOf(model);
+    out.elasticities = counted('elasticities', () =>
+      betaElasticities(names, moments, (overrides) => {
+        let t = s;
+        for (const [path, o] of Object.entries(overrides)) {
+          const i = names.indexOf(path);
+          const spec = withMoments(specOf(s, path), o.mean ?? moments[i].mean, o.sd ?? moments[i].sd);
+          t = withScalar(t, path, { kind: 'random', spec });
+        }
+        return scenarioForm(t).beta;
+      }),
+    );
+  }
+  if (run.has('sobol')) {
+    if (model.correlation) {
+      out.notes.push('Sobol indices treat the variables as independent (the stated correlation is left out of that study only).');
+    }
+    out.sobolCapacity = counted('sobol', () => sobolIndices(names, dists, model.capacity, { seed, n: sobolN }));
+    out.sobolG = counted('sobol', () => sobolIndices(names, dists, model.g, { seed: seed + 1, n: sobolN }));
+  }
+  return out;
 }
 
 function samplesSummary(problem: ReliabilityProblem, model: ColumnModel, seed: number, f: FormResult): SamplesSummary {
@@ -263,6 +289,9 @@ export async function assessColumn(given: Scenario, opts: AssessOptions = {}): P
     throw new InputError('column', 'at the mean values the column has no capacity (a mechanism): nothing to assess');
   }
   const methods = [...(opts.methods ?? s.analysis.methods ?? DEFAULT_METHODS)];
+  const asked = new Set<StudyName>(opts.reliabilityOnly ? [] : opts.studies ?? STUDY_NAMES);
+  const calls: Record<string, number> = {};
+  const startCount = evaluationsSoFar();
   const seed = opts.seed ?? s.analysis.seed ?? DEFAULT_SEED;
   /** undefined: every core once the Monte Carlo run is long enough to repay starting them. */
   const workers = opts.workers ?? s.analysis.workers;
@@ -274,12 +303,24 @@ export async function assessColumn(given: Scenario, opts: AssessOptions = {}): P
   let interrupted = false;
 
   const models = combinationModels(s);
-  const combos = models.length > 1 ? combinationStudy(models, { sorm: methods.includes('sorm'), seed }) : undefined;
+  const combosCounted = countEvaluations(() => (models.length > 1 ? combinationStudy(models, { sorm: methods.includes('sorm'), seed }) : undefined));
+  const combos = combosCounted.result;
+  if (combos) calls.combinations = combosCounted.calls;
   const lead = combos?.combinations[combos.governing];
   // The sampling methods see the series system; FORM/SORM results shown are the lowest-β combination's.
   const simProblem = combos ? combinationSystemProblem(models) : problem;
   if (combos) recipe = columnRecipe(s, true);
-  const formResult = lead ? lead.form : form(problem);
+  const formResult = lead ? lead.form : form(problem, { thorough: opts.thorough });
+  if (!lead) calls.form = formResult.calls;
+  if (!methods.includes('form')) {
+    const needs = [...asked].filter((n) => n !== 'tornado' && n !== 'sobol');
+    const why = [
+      'the design point (characteristic values, connection moments)',
+      ...(methods.includes('is') ? ['the centre of importance sampling'] : []),
+      ...(needs.length ? [`the studies ${needs.join(', ')} (--no-studies to skip them)`] : []),
+    ];
+    warnings.push(`FORM was run (${formResult.calls} calls) although not among the methods asked for: it gives ${why.join(', ')}`);
+  }
   if (lead) problem = lead.problem;
   for (const c of combos?.combinations ?? [{ leading: '', form: formResult }]) {
     const tag = combos ? `FORM (${c.leading} leading)` : 'FORM';
@@ -290,18 +331,20 @@ export async function assessColumn(given: Scenario, opts: AssessOptions = {}): P
   const out: Partial<Assessment> = {};
   if (methods.includes('sorm')) {
     out.sorm = lead ? lead.sorm! : sorm(problem, formResult);
+    if (!lead) calls.sorm = out.sorm.calls;
     warnings.push(...out.sorm.warnings.map((w) => `SORM: ${w}`));
   }
   if (methods.includes('is')) {
     out.is = await importanceSamplingAtDesignPoint(simProblem, formResult, {
       samples: s.analysis.isSamples ?? DEFAULT_IS_SAMPLES,
       seed,
-      targetCov: IS_TARGET_COV,
+      targetCov: opts.targetCov ?? IS_TARGET_COV,
       signal: opts.signal,
       onProgress: opts.onProgress && ((p) => opts.onProgress?.('importance sampling', p)),
     });
     warnings.push(...out.is.warnings.map((w) => `IS: ${w}`));
     if (out.is.stopReason === 'aborted') interrupted = true;
+    calls.is = out.is.calls;
   }
   if (methods.includes('mc') && !interrupted) {
     out.mc = await monteCarlo(simProblem, {
@@ -314,11 +357,13 @@ export async function assessColumn(given: Scenario, opts: AssessOptions = {}): P
       onProgress: opts.onProgress && ((p) => opts.onProgress?.('Monte Carlo', p)),
     });
     if (out.mc.stopReason === 'aborted') interrupted = true;
+    calls.mc = out.mc.calls;
     if (out.mc.failures === 0) warnings.push(`Monte Carlo saw no failure in ${out.mc.samples} samples: its pf is only an upper bound`);
   }
   if (methods.includes('subset') && !interrupted) {
-    out.subset = subsetSimulation(simProblem, { seed, samplesPerLevel: s.analysis.subsetSamples ?? 1000 });
+    out.subset = subsetToTargetCov(simProblem, { seed, samplesPerLevel: s.analysis.subsetSamples ?? 1000, targetCov: opts.targetCov });
     warnings.push(...out.subset.warnings.map((w) => `subset: ${w}`));
+    calls.subset = out.subset.calls;
   }
   // With combinations every method is compared on the series system.
   const sysForm: FormResult = combos
@@ -340,7 +385,14 @@ export async function assessColumn(given: Scenario, opts: AssessOptions = {}): P
     mc: out.mc,
     subset: out.subset,
   }, { target: s.targetBeta });
-  const checked = checkedGoverning(simProblem, sysForm, v, governingEstimate({ form: sysForm, ...out, sorm: sysSorm, methods }, v), seed);
+  const plainGoverning = governingEstimate({ form: sysForm, ...out, sorm: sysSorm, methods }, v);
+  const checked: ReturnType<typeof checkedGoverning> = asked.has('form-check')
+    ? checkedGoverning(simProblem, sysForm, v, plainGoverning, seed)
+    : { governing: plainGoverning, verdict: v };
+  if (checked.check) calls['form-check'] = checked.check.calls;
+  if (!asked.has('form-check') && (plainGoverning.method === 'form' || plainGoverning.method === 'sorm')) {
+    warnings.push(`FORM's self-check was switched off: the verdict rests on ${plainGoverning.method.toUpperCase()} alone, unchecked by sampling`);
+  }
   const governing = checked.governing;
   if (checked.warning) warnings.unshift(checked.warning);
 
@@ -348,19 +400,39 @@ export async function assessColumn(given: Scenario, opts: AssessOptions = {}): P
   let restraint: ColumnRestraintResult | undefined;
   if (!opts.reliabilityOnly && !interrupted) {
     const baseline = combos ? combos.combinations.find((c) => c.leading === model.combination.leading)!.form.beta : formResult.beta;
-    sensitivity = sensitivityStudy(s, model, baseline, seed, opts.sobolSamples ?? SOBOL_N);
-    if (combos) sensitivity.notes.push(`The sensitivity and restraint studies use the combination with ${model.combination.leading} leading (the largest mean demand), not the series system.`);
-    if (studiedEnds(s, opts.end).length > 0) {
+    if (['tornado', 'conditional-beta', 'elasticities', 'sobol'].some((n) => asked.has(n as StudyName))) {
+      sensitivity = sensitivityStudy(s, model, baseline, seed, asked, calls, opts.sobolSamples ?? SOBOL_N);
+      if (combos) sensitivity.notes.push(`The sensitivity and restraint studies use the combination with ${model.combination.leading} leading (the largest mean demand), not the series system.`);
+    }
+    if (asked.has('restraint') && studiedEnds(s, opts.end).length > 0) {
+      const before = evaluationsSoFar();
       restraint = opts.restraint ?? (await columnRestraint(s, { end: opts.end, units: opts.units, governing: governingAssessor(seed) }));
+      calls.restraint = evaluationsSoFar() - before;
     }
   }
-  const byStrengthModel = opts.reliabilityOnly || interrupted ? undefined : betaByStrengthModel(given, formResult);
+  let byStrengthModel: StrengthModelBeta[] | undefined;
+  if (asked.has('strength-models') && !interrupted) {
+    const r = countEvaluations(() => betaByStrengthModel(given, formResult));
+    byStrengthModel = r.result;
+    calls['strength-models'] = r.calls;
+  }
+  const samplesCounted = countEvaluations(() => samplesSummary(problem, lead ? lead.model : model, seed, formResult));
+  const characteristicCounted = countEvaluations(() => characteristicValues(lead ? lead.model : model, formResult));
+  calls.histogram = samplesCounted.calls;
+  calls['characteristic-values'] = characteristicCounted.calls;
+  // what no entry above names (the mean check, model building): counted in this thread, so the sum is every call made here
+  const inThread = evaluationsSoFar() - startCount;
+  const named = Object.entries(calls).reduce((a, [k, n]) => a + (k === 'is' || k === 'mc' || k === 'subset' ? 0 : n), 0);
+  const simulatedHere = (out.mc && out.mc.workers <= 1 ? out.mc.calls : 0) + (out.is && out.is.workers <= 1 ? out.is.calls : 0) + (out.subset?.calls ?? 0);
+  const other = inThread - named - simulatedHere;
+  if (other > 0) calls.other = other;
+  const studies = STUDY_NAMES.filter((n) => asked.has(n));
   return {
     scenario: s,
     model: lead ? lead.model : model,
     modelFactor: model.modelFactorUsed,
     byStrengthModel,
-    characteristic: characteristicValues(lead ? lead.model : model, formResult),
+    characteristic: characteristicCounted.result,
     check,
     methods,
     seed,
@@ -373,8 +445,10 @@ export async function assessColumn(given: Scenario, opts: AssessOptions = {}): P
     ...(combos ? { combinations: combos } : {}),
     sensitivity,
     restraint,
-    samples: samplesSummary(problem, lead ? lead.model : model, seed, formResult),
+    samples: samplesCounted.result,
     warnings,
     interrupted,
+    studies,
+    calls,
   };
 }

@@ -6,8 +6,8 @@ import { runCli } from './runCli.js';
 
 // Checks of docs/json-output.md (common practice for a CLI: one JSON document on stdout).
 describe('stanchion assess (end to end)', () => {
-  it('prints the contract JSON; importance sums to 1; tornado sorted by swing', () => {
-    const r = runCli(['assess', 'scenarios/braced-base-plate.yaml', '--json', '--methods', 'form,sorm,mc', '--samples', '50000', '--seed', '3']);
+  it('prints the contract JSON; importance sums to 1; tornado sorted by swing', async () => {
+    const r = await runCli(['assess', 'scenarios/braced-base-plate.yaml', '--json', '--methods', 'form,sorm,mc', '--samples', '50000', '--seed', '3']);
     expect(r.status, r.stderr).toBe(0);
     const doc = JSON.parse(r.stdout);
     expect(Object.keys(doc.reliability)).toEqual(expect.arrayContaining(['form', 'sorm', 'mc']));
@@ -38,30 +38,30 @@ describe('stanchion assess (end to end)', () => {
     expect(f.partial_factors['loads.imposed'].gamma).toBeGreaterThan(1);
   });
 
-  it('the same seed gives the same numbers with 1 and 2 workers', () => {
+  it('the same seed gives the same numbers with 1 and 2 workers', async () => {
     const args = ['assess', 'scenarios/sway-canopy-post.yaml', '--json', '--methods', 'mc', '--samples', '40000', '--seed', '9'];
-    const one = JSON.parse(runCli([...args, '--workers', '1']).stdout);
-    const two = JSON.parse(runCli([...args, '--workers', '2']).stdout);
+    const one = JSON.parse((await runCli([...args, '--workers', '1'])).stdout);
+    const two = JSON.parse((await runCli([...args, '--workers', '2'])).stdout);
     expect(two.reliability.mc).toEqual({ ...one.reliability.mc, workers: 2 });
   });
 
-  it('--out writes the report and refuses an existing folder without --force', () => {
+  it('--out writes the report and refuses an existing folder without --force', async () => {
     const dir = join(mkdtempSync(join(tmpdir(), 'stanchion-')), 'report');
-    const r = runCli(['assess', 'scenarios/sway-canopy-post.yaml', '--methods', 'form,sorm', '--out', dir]);
+    const r = await runCli(['assess', 'scenarios/sway-canopy-post.yaml', '--methods', 'form,sorm', '--out', dir]);
     expect(r.status, r.stderr).toBe(0);
     for (const f of ['report.html', 'result.json', 'summary.md']) expect(existsSync(join(dir, f)), f).toBe(true);
     const result = JSON.parse(readFileSync(join(dir, 'result.json'), 'utf8'));
     expect(result.reliability.form.beta).toBeGreaterThan(0);
-    const again = runCli(['assess', 'scenarios/sway-canopy-post.yaml', '--methods', 'form', '--out', dir]);
+    const again = await runCli(['assess', 'scenarios/sway-canopy-post.yaml', '--methods', 'form', '--out', dir]);
     expect(again.status).toBe(2);
     expect(again.stderr).toMatch(/--out/);
   });
 });
 
 describe('stanchion restraint (end to end)', () => {
-  it('the least stiffness fed back into the scenario gives β = target ± 0.02', () => {
+  it('the least stiffness fed back into the scenario gives β = target ± 0.02', async () => {
     // common practice: the study's root, substituted back, must reproduce the target it was solved for
-    const r = runCli(['restraint', 'scenarios/sway-canopy-post.yaml', '--json']);
+    const r = await runCli(['restraint', 'scenarios/sway-canopy-post.yaml', '--json']);
     expect(r.status, r.stderr).toBe(0);
     const res = JSON.parse(r.stdout).restraint;
     expect(res.ends).toEqual(['bottom']);
@@ -74,8 +74,27 @@ describe('stanchion restraint (end to end)', () => {
       /bottom: \{rotation: \{dist: lognormal, mean: [^,]+, cov: 0.4\}\}/,
       `bottom: {rotation: {dist: lognormal, mean: ${k} N m/rad, cov: 0.4}}`,
     );
-    const a = runCli(['assess', '-', '--json', '--methods', 'form'], text);
+    const a = await runCli(['assess', '-', '--json', '--methods', 'form'], text);
     expect(a.status, a.stderr).toBe(0);
     expect(Math.abs(JSON.parse(a.stdout).reliability.form.beta - res.target_beta)).toBeLessThan(0.02);
+  });
+});
+
+describe('assess --studies and meta.calls (end to end)', () => {
+  it('--no-studies: the methods only, every call listed in meta.calls; a bad study name exits 2 naming --studies', async () => {
+    const r = await runCli(['assess', 'scenarios/braced-base-plate.yaml', '--json', '--methods', 'form,is', '--no-studies', '--target-cov', '0.1']);
+    expect(r.status).toBe(0);
+    const j = JSON.parse(r.stdout);
+    expect(j.meta.studies).toEqual([]);
+    expect(j.sensitivity.tornado).toBeUndefined();
+    expect(j.restraint).toBeUndefined();
+    // common practice: the calls each method reports are the calls listed
+    expect(j.meta.calls.form).toBe(j.reliability.form.calls);
+    expect(j.meta.calls.is).toBe(j.reliability.is.calls);
+    expect(j.reliability.is.cov).toBeLessThanOrEqual(0.1);
+    const bad = await runCli(['assess', 'scenarios/braced-base-plate.yaml', '--studies', 'tornado,magic']);
+    expect(bad.status).toBe(2);
+    expect(bad.stderr).toMatch(/--studies.*unknown study 'magic'/);
+    expect(bad.stderr.trim().split('\n')).toHaveLength(1);
   });
 });

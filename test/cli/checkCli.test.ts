@@ -6,8 +6,8 @@ import { ROOT, runCli } from './runCli.js';
 const scenarios = readdirSync(join(ROOT, 'scenarios')).filter((f) => /\.ya?ml$/.test(f) && !f.startsWith('sweep'));
 
 describe('stanchion check (end to end)', () => {
-  it.each(scenarios)('%s: contract JSON with finite numbers', (file) => {
-    const r = runCli(['check', join('scenarios', file), '--json']);
+  it.each(scenarios)('%s: contract JSON with finite numbers', async (file) => {
+    const r = await runCli(['check', join('scenarios', file), '--json']);
     expect(r.status, r.stderr).toBe(0);
     const doc = JSON.parse(r.stdout); // exactly one JSON document on stdout (docs/json-output.md)
     const c = doc.check;
@@ -21,15 +21,15 @@ describe('stanchion check (end to end)', () => {
     expect(c).toHaveProperty('restraint_ratio.top');
   });
 
-  it('reads the scenario from stdin with -', () => {
+  it('reads the scenario from stdin with -', async () => {
     const text = readFileSync(join(ROOT, 'scenarios', 'braced-base-plate.yaml'), 'utf8');
-    const fromFile = runCli(['check', 'scenarios/braced-base-plate.yaml', '--json']);
-    const fromStdin = runCli(['check', '-', '--json'], text);
+    const fromFile = await runCli(['check', 'scenarios/braced-base-plate.yaml', '--json']);
+    const fromStdin = await runCli(['check', '-', '--json'], text);
     expect(fromStdin.status, fromStdin.stderr).toBe(0);
     expect(JSON.parse(fromStdin.stdout)).toEqual(JSON.parse(fromFile.stdout));
   });
 
-  it('a fixed-fixed column with every value fixed buckles at 4π²EI/L² (K = 0.5)', () => {
+  it('a fixed-fixed column with every value fixed buckles at 4π²EI/L² (K = 0.5)', async () => {
     // source: Timoshenko & Gere, Theory of Elastic Stability, 1961, ch. 2 (from memory): fixed–fixed Pcr = 4π²EI/L²
     const yaml = `stanchion: 1
 title: fixed-fixed oracle
@@ -43,7 +43,7 @@ column:
 loads: {dead: 500 kN}
 strength: first-yield
 `;
-    const r = runCli(['check', '-', '--json'], yaml);
+    const r = await runCli(['check', '-', '--json'], yaml);
     expect(r.status, r.stderr).toBe(0);
     const c = JSON.parse(r.stdout).check;
     const EI = 200e9 * 20e-6;
@@ -54,8 +54,8 @@ strength: first-yield
     expect(c.capacity / 1e3).toBeCloseTo(1300.13, 1);
   });
 
-  it('human output names the quantities with units and ends with the caution', () => {
-    const r = runCli(['check', 'scenarios/sway-canopy-post.yaml']);
+  it('human output names the quantities with units and ends with the caution', async () => {
+    const r = await runCli(['check', 'scenarios/sway-canopy-post.yaml']);
     expect(r.status).toBe(0);
     expect(r.stdout).toMatch(/critical load Pcr\s+[\d.]+ kN/);
     expect(r.stdout).toMatch(/licensed engineer/); // common practice: every output carries the caution
@@ -68,9 +68,9 @@ describe('bad input: one line naming the field, exit 2, no stack trace', () => {
   ];
   const base = readFileSync(join(ROOT, 'scenarios', 'braced-base-plate.yaml'), 'utf8');
 
-  it('a wrong dimension for E', () => {
+  it('a wrong dimension for E', async () => {
     const text = base.replace('E: {dist: lognormal, mean: 200 GPa, cov: 0.03}', 'E: 4 m');
-    const r = runCli(['check', '-'], text);
+    const r = await runCli(['check', '-'], text);
     expect(r.status).toBe(2);
     expect(r.stdout).toBe('');
     expect(r.stderr.trim().split('\n')).toHaveLength(1);
@@ -78,21 +78,21 @@ describe('bad input: one line naming the field, exit 2, no stack trace', () => {
     expect(r.stderr).not.toMatch(/\bat .*\.js:\d+/);
   });
 
-  it('a missing file, an unknown option and an unknown method', () => {
+  it('a missing file, an unknown option and an unknown method', async () => {
     for (const args of [
       ['check', 'no/such/file.yaml'],
       ['check', 'scenarios/braced-base-plate.yaml', '--frobnicate'],
       ['assess', 'scenarios/braced-base-plate.yaml', '--methods', 'form,magic'],
       ['assess', 'scenarios/braced-base-plate.yaml', '--samples', '-5'],
     ]) {
-      const r = runCli(args);
+      const r = await runCli(args);
       expect(r.status, args.join(' ')).toBe(2);
       expect(r.stderr).not.toMatch(/\bat .*\.js:\d+/);
     }
   });
 
-  it.each(bad)('%s is reported plainly', (_name, snippet, field) => {
-    const r = runCli(['check', '-'], `stanchion: 1\n${snippet}\n`);
+  it.each(bad)('%s is reported plainly', async (_name, snippet, field) => {
+    const r = await runCli(['check', '-'], `stanchion: 1\n${snippet}\n`);
     expect(r.status).toBe(2);
     expect(r.stderr).toMatch(field);
   });

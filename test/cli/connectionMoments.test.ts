@@ -28,8 +28,8 @@ const EI = 200e9 * 20e-6;
 
 describe('connection moments and joint classes in check and assess', () => {
   // source: Timoshenko & Gere, Theory of Elastic Stability, 2nd ed., §1.11–1.12: M_mid = P e0/(1 − P/Pcr), no end moment
-  it('check --json, pinned–pinned: zero connection moments, amplified mid-span moment', () => {
-    const r = runCli(['check', '-', '--json'], scenario('{bottom: pinned, top: pinned}'));
+  it('check --json, pinned–pinned: zero connection moments, amplified mid-span moment', async () => {
+    const r = await runCli(['check', '-', '--json'], scenario('{bottom: pinned, top: pinned}'));
     expect(r.status, r.stderr).toBe(0);
     const c = JSON.parse(r.stdout).check;
     const Pcr = (Math.PI ** 2 * EI) / 16;
@@ -45,11 +45,11 @@ describe('connection moments and joint classes in check and assess', () => {
   });
 
   // source: EN 1993-1-8:2005 §5.2.2.5(1)–(2) (from memory): braced, rigid from 8 E I_b/L_b, pinned up to 0.5 E I_b/L_b
-  it('a top connection with its beam is classified at the mean stiffness and at its 5 % fractile', () => {
+  it('a top connection with its beam is classified at the mean stiffness and at its 5 % fractile', async () => {
     const EIbOverL = (200e9 * 100e-6) / 8; // beam 100e6 mm⁴ over 8 m, E of the column
     const mean = 10 * EIbOverL; // well above the rigid limit 8 E I_b/L_b; its 5 % fractile (cov 0.5) is well below
     const ends = `{bottom: fixed, top: {rotation: {dist: lognormal, mean: ${mean} N m/rad, cov: 0.5}, beam: {inertia: 100e6 mm^4, length: 8 m}}}`;
-    const r = runCli(['check', '-', '--json'], scenario(ends));
+    const r = await runCli(['check', '-', '--json'], scenario(ends));
     expect(r.status, r.stderr).toBe(0);
     const t = JSON.parse(r.stdout).check.joint_classification.top;
     expect(t.rule).toBe('beam');
@@ -59,7 +59,7 @@ describe('connection moments and joint classes in check and assess', () => {
     expect(t.class_at_5pct).toBe('semi-rigid');
     expect(t.stiffness_mean / mean).toBeCloseTo(1, 12);
     expect(t.stiffness_5pct).toBeLessThan(0.5 * mean);
-    const human = runCli(['check', '-'], scenario(ends));
+    const human = await runCli(['check', '-'], scenario(ends));
     expect(human.stdout).toMatch(/M_j,Rd/);
     expect(human.stdout).toMatch(/top\s+[\d.]+ kN·m\s+[\d.]+ mrad\s+rigid at the mean k, semi-rigid at its 5 % fractile/);
     expect(human.stdout).toMatch(/Caution/);
@@ -71,8 +71,8 @@ describe('connection moments and joint classes in check and assess', () => {
     ['{bottom: fixed, top: {rotation: 5 MN m/rad, beam: {inertia: 100e6 mm^4}}}', /column\.ends\.top\.beam\.length/],
     ['{bottom: fixed, top: {rotation: 5 MN m/rad, beam: {inertia: 100e6 mm^4, length: -8 m}}}', /column\.ends\.top\.beam\.length/],
     ['{bottom: fixed, top: {rotation: 5 MN m/rad, beam: {inertia: 100e6 mm^4, length: 8 m, span: 3 m}}}', /span/],
-  ])('bad beam %s', (ends, field) => {
-    const r = runCli(['check', '-', '--json'], scenario(ends));
+  ])('bad beam %s', async (ends, field) => {
+    const r = await runCli(['check', '-', '--json'], scenario(ends));
     expect(r.status).toBe(2);
     expect(r.stdout).toBe('');
     expect(r.stderr).toMatch(field);

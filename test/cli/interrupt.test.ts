@@ -79,7 +79,7 @@ function hiddenLeftovers(parent: string, name: string): string[] {
 describe('Ctrl-C stops every phase within a second, exit 130', () => {
   it('FORM on 400 correlated variables', async () => {
     const r = await interruptAfter(['assess', 'many400.yaml', '--methods', 'form', '--out', 'form-out'], 4000);
-    expectStopped(r, /^stanchion: interrupted during FORM; nothing was written$/);
+    expectStopped(r, /^stanchion: interrupted during [^;]+; nothing was written$/);
     expect(existsSync(join(dir, 'form-out'))).toBe(false);
     expect(hiddenLeftovers(dir, 'form-out')).toEqual([]);
   });
@@ -87,14 +87,14 @@ describe('Ctrl-C stops every phase within a second, exit 130', () => {
   it('the sensitivity studies (200 variables)', async () => {
     // FORM takes well under a second here; the conditional β and elasticity FORMs take minutes
     const r = await interruptAfter(['assess', 'many200-independent.yaml', '--methods', 'form', '--out', 'sens-out'], 4000);
-    expectStopped(r, /^stanchion: interrupted during (FORM|the [a-zβ ]+); nothing was written$/);
+    expectStopped(r, /^stanchion: interrupted during [^;]+; nothing was written$/);
     expect(existsSync(join(dir, 'sens-out'))).toBe(false);
     expect(hiddenLeftovers(dir, 'sens-out')).toEqual([]);
   });
 
   it('the restraint study (200 variables)', async () => {
     const r = await interruptAfter(['restraint', 'many200.yaml', '--out', 'restraint-out'], 3500);
-    expectStopped(r, /^stanchion: interrupted during (FORM|the restraint study); nothing was written$/);
+    expectStopped(r, /^stanchion: interrupted during [^;]+; nothing was written$/);
     expect(existsSync(join(dir, 'restraint-out'))).toBe(false);
     expect(hiddenLeftovers(dir, 'restraint-out')).toEqual([]);
   });

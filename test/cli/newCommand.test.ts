@@ -15,8 +15,8 @@ const dir = mkdtempSync(join(tmpdir(), 'stanchion-new-cli-'));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
 describe('stanchion new', () => {
-  it('prints the starter scenario, and `stanchion new | stanchion check -` succeeds', () => {
-    const alone = runCli(['new']);
+  it('prints the starter scenario, and `stanchion new | stanchion check -` succeeds', async () => {
+    const alone = await runCli(['new']);
     expect(alone.status, alone.stderr).toBe(0);
     expect(alone.stdout).toBe(starterScenario('braced'));
     const node = JSON.stringify(process.execPath);
@@ -26,12 +26,12 @@ describe('stanchion new', () => {
     expect(pipeline.stdout).toMatch(/mean-value ratio/);
   });
 
-  it('writes FILE, which `check --json` reads', () => {
+  it('writes FILE, which `check --json` reads', async () => {
     const file = join(dir, 'post.yaml');
-    const made = runCli(['new', '--frame', 'sway', file]);
+    const made = await runCli(['new', '--frame', 'sway', file]);
     expect(made.status, made.stderr).toBe(0);
     expect(readFileSync(file, 'utf8')).toBe(starterScenario('sway'));
-    const check = runCli(['check', file, '--json']);
+    const check = await runCli(['check', file, '--json']);
     expect(check.status, check.stderr).toBe(0);
     const c = JSON.parse(check.stdout).check;
     expect(c.utilization).toBeGreaterThan(0);
@@ -40,24 +40,24 @@ describe('stanchion new', () => {
     expect(c.effective_length_factor).toBeGreaterThanOrEqual(1);
   });
 
-  it('keeps an existing FILE unless --force, leaving no temporary file behind', () => {
+  it('keeps an existing FILE unless --force, leaving no temporary file behind', async () => {
     const file = join(dir, 'mine.yaml');
     writeFileSync(file, 'my own notes\n');
-    const refused = runCli(['new', file]);
+    const refused = await runCli(['new', file]);
     expect(refused.status).toBe(2);
     expect(refused.stderr.trim().split('\n')).toHaveLength(1);
     expect(refused.stderr).toMatch(/already exists.*--force/);
     expect(readFileSync(file, 'utf8')).toBe('my own notes\n');
-    const forced = runCli(['new', file, '--force']);
+    const forced = await runCli(['new', file, '--force']);
     expect(forced.status, forced.stderr).toBe(0);
     expect(readFileSync(file, 'utf8')).toBe(starterScenario('braced'));
     expect(readdirSync(dir).filter((n) => n.endsWith('.tmp'))).toEqual([]);
   });
 
-  it('refuses a bad --frame or a file name that is not YAML, writing nothing', () => {
-    expect(runCli(['new', '--frame', 'portal']).status).toBe(2);
+  it('refuses a bad --frame or a file name that is not YAML, writing nothing', async () => {
+    expect((await runCli(['new', '--frame', 'portal'])).status).toBe(2);
     const json = join(dir, 'x.json');
-    const r = runCli(['new', json]);
+    const r = await runCli(['new', json]);
     expect(r.status).toBe(2);
     expect(existsSync(json)).toBe(false);
   });

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { Command, Option } from 'commander';
 import { findRepeatedOption } from '../../src/cli/repeatedOptions.js';
 import { didYouMean, nearestName } from '../../src/scenario/nearestName.js';
-import { runCli } from './runCli.js';
+import { runCliProcess as runCli } from './runCli.js'; // a real process: these read its exit code and streams whole
 
 function toyProgram(): Command {
   const program = new Command();

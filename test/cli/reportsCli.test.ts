@@ -6,9 +6,9 @@ import { runCli } from './runCli.js';
 
 // CLI behaviour checks (common practice): --out writes a complete report for restraint and sweep too.
 describe('reports from restraint and sweep', () => {
-  it('restraint --out writes the report; the deterministic K needs no more restraint than the random one', () => {
+  it('restraint --out writes the report; the deterministic K needs no more restraint than the random one', async () => {
     const dir = join(mkdtempSync(join(tmpdir(), 'stanchion-')), 'restraint');
-    const r = runCli(['restraint', 'scenarios/sway-canopy-post.yaml', '--json', '--out', dir]);
+    const r = await runCli(['restraint', 'scenarios/sway-canopy-post.yaml', '--json', '--out', dir]);
     expect(r.status, r.stderr).toBe(0);
     const res = JSON.parse(r.stdout).restraint;
     // common practice: springs known exactly (no scatter) reach the same target with less mean
@@ -22,9 +22,9 @@ describe('reports from restraint and sweep', () => {
     expect(readFileSync(join(dir, 'report.html'), 'utf8')).toMatch(/Restraint justification/);
   });
 
-  it('a finished sweep writes OUT/report with the sweep chart, values converted to SI', () => {
+  it('a finished sweep writes OUT/report with the sweep chart, values converted to SI', async () => {
     const out = join(mkdtempSync(join(tmpdir(), 'stanchion-')), 'sweep');
-    const r = runCli([
+    const r = await runCli([
       'sweep',
       'scenarios/braced-base-plate.yaml',
       '--vary',

@@ -2,7 +2,7 @@ import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
-import { runCli } from './runCli.js';
+import { runCliProcess as runCli } from './runCli.js'; // a real process: these read its exit code and streams whole
 import { overlappingTexts } from '../report/svgTextBoxes.js';
 
 const dir = mkdtempSync(join(tmpdir(), 'stanchion-restraint-'));

@@ -3,7 +3,7 @@
 import { afterAll, describe, expect, it } from 'vitest';
 import { existsSync, mkdtempSync, rmSync } from 'node:fs';
 import { basename, join } from 'node:path';
-import { ROOT, runCli } from './runCli.js';
+import { ROOT, runCliProcess as runCli } from './runCli.js'; // a real process: these read its exit code and streams whole
 
 const lastLine = (s: string) => s.trimEnd().split('\n').pop() ?? '';
 const scratch = mkdtempSync(join(ROOT, 'result-lines-test-'));

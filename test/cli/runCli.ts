@@ -1,7 +1,15 @@
-/** Runs the compiled CLI (npm test builds it first) as a real child process. */
+/**
+ * Runs the CLI on a command line. By default in this process: `runProgram` of src/cli/program.ts
+ * with stdout and stderr captured and the working folder set to the project root, which is what
+ * the child process would see, without paying node's and the command thread's start-up for every
+ * case. A run that reads stdin (`input`) or whose point is the executable itself (exit codes from
+ * main.ts, the command thread, signals) spawns the compiled CLI (`runCliProcess`; npm test builds
+ * it first).
+ */
 import { spawnSync } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
 import { dirname, join } from 'node:path';
+import { runProgram } from '../../src/cli/program.js';
 
 export const ROOT = join(dirname(fileURLToPath(import.meta.url)), '..', '..');
 export const CLI = join(ROOT, 'dist', 'src', 'cli', 'main.js');
@@ -12,7 +20,38 @@ export interface CliRun {
   stderr: string;
 }
 
-export function runCli(args: string[], input?: string): CliRun {
+/** The compiled executable as a real child process. */
+export function runCliProcess(args: string[], input?: string): CliRun {
   const r = spawnSync(process.execPath, [CLI, ...args], { cwd: ROOT, input, encoding: 'utf8', timeout: 120_000 });
   return { status: r.status, stdout: r.stdout, stderr: r.stderr };
+}
+
+type Write = typeof process.stdout.write;
+
+function capture(into: string[]): Write {
+  return ((chunk: string | Uint8Array, ...rest: unknown[]) => {
+    into.push(typeof chunk === 'string' ? chunk : Buffer.from(chunk).toString('utf8'));
+    const done = rest.find((r) => typeof r === 'function') as (() => void) | undefined;
+    done?.();
+    return true;
+  }) as Write;
+}
+
+/** In this process unless stdin is needed (see the file comment). One run at a time. */
+export async function runCli(args: string[], input?: string): Promise<CliRun> {
+  if (input !== undefined) return runCliProcess(args, input);
+  const out: string[] = [];
+  const err: string[] = [];
+  const [writeOut, writeErr, cwd] = [process.stdout.write, process.stderr.write, process.cwd()];
+  process.stdout.write = capture(out);
+  process.stderr.write = capture(err);
+  process.chdir(ROOT);
+  try {
+    const status = await runProgram([process.execPath, CLI, ...args]);
+    return { status, stdout: out.join(''), stderr: err.join('') };
+  } finally {
+    process.stdout.write = writeOut;
+    process.stderr.write = writeErr;
+    process.chdir(cwd);
+  }
 }

@@ -79,7 +79,7 @@ beforeAll(async () => {
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
 describe('stanchion sweep', () => {
-  it('writes one row per case with finite FORM β, and --json prints one document', () => {
+  it('writes one row per case with finite FORM β, and --json prints one document', async () => {
     const [csv] = reference;
     const lines = csv.trim().split('\n');
     expect(lines).toHaveLength(1 + CASES);
@@ -124,7 +124,7 @@ describe('stanchion sweep', () => {
     expect(b.code, b.stderr).toBe(0);
     expect(existsSync(join(dir, 'shard0', 'sweep.csv'))).toBe(false); // a shard keeps only its journal
     expect(a.stdout).toContain(`stanchion merge ${state}`);
-    const merged = runCli(['merge', state, '--out', join(dir, 'merged')]);
+    const merged = await runCli(['merge', state, '--out', join(dir, 'merged')]);
     expect(merged.status, merged.stderr).toBe(0);
     expect(files('merged')).toEqual(reference);
   });
@@ -133,7 +133,7 @@ describe('stanchion sweep', () => {
     // Slurm sets SLURM_ARRAY_TASK_ID/MIN/MAX/COUNT in each task of `sbatch --array=0-2`
     // (Slurm documentation, sbatch "OUTPUT ENVIRONMENT VARIABLES")
     const out = join(dir, 'slurm-out');
-    const emitted = runCli([...sweep('slurm-out'), '--emit-array-script', '3']);
+    const emitted = await runCli([...sweep('slurm-out'), '--emit-array-script', '3']);
     expect(emitted.status, emitted.stderr).toBe(0);
     expect(existsSync(out)).toBe(false); // emitting runs nothing and writes nothing
     const script = emitted.stdout;
@@ -163,17 +163,17 @@ describe('stanchion sweep', () => {
     expect(files('slurm-out')).toEqual(reference);
   });
 
-  it('--shard auto outside an array job is refused with exit 2 naming --shard', () => {
-    const r = runCli([...sweep('no-array'), '--shard', 'auto']);
+  it('--shard auto outside an array job is refused with exit 2 naming --shard', async () => {
+    const r = await runCli([...sweep('no-array'), '--shard', 'auto']);
     expect(r.status).toBe(2);
     expect(r.stderr).toMatch(/--shard/);
     expect(r.stderr).toMatch(/SLURM_ARRAY_TASK_ID/);
     expect(existsSync(join(dir, 'no-array'))).toBe(false);
   });
 
-  it('a bad --vary exits 2 with one line on stderr naming --vary, and writes nothing', () => {
+  it('a bad --vary exits 2 with one line on stderr naming --vary, and writes nothing', async () => {
     for (const bad of ['column.lenght=4 m:7 m:3', 'column.length=4 m:7 mm:3', 'loads.dead.mean=300 kN,abc', 'loads.dead.mean=300 MPa:400 MPa:3']) {
-      const r = runCli(['sweep', scenario, '--vary', bad, '--out', join(dir, 'bad')]);
+      const r = await runCli(['sweep', scenario, '--vary', bad, '--out', join(dir, 'bad')]);
       expect(r.status).toBe(2);
       expect(r.stdout).toBe('');
       const lines = r.stderr.trim().split('\n');
@@ -185,18 +185,18 @@ describe('stanchion sweep', () => {
     expect(existsSync(join(dir, 'bad'))).toBe(false);
   });
 
-  it('a scenario without --vary, or another sweep in the same folder, is refused with exit 2', () => {
-    const none = runCli(['sweep', scenario, '--out', join(dir, 'none')]);
+  it('a scenario without --vary, or another sweep in the same folder, is refused with exit 2', async () => {
+    const none = await runCli(['sweep', scenario, '--out', join(dir, 'none')]);
     expect(none.status).toBe(2);
     expect(none.stderr).toContain('--vary');
-    const other = runCli(['sweep', scenario, '--vary', 'column.length=4 m:5 m:2', '--out', join(dir, 'reference')]);
+    const other = await runCli(['sweep', scenario, '--vary', 'column.length=4 m:5 m:2', '--out', join(dir, 'reference')]);
     expect(other.status).toBe(2);
     expect(other.stderr).toMatch(/different sweep/);
     expect(files('reference')).toEqual(reference);
   });
 
-  it('ends with how many cases meet the target and where β crosses it; the report path comes last', () => {
-    const r = runCli(['sweep', scenario, '--vary', 'column.length=3 m:9 m:4', '--out', join(dir, 'line')]);
+  it('ends with how many cases meet the target and where β crosses it; the report path comes last', async () => {
+    const r = await runCli(['sweep', scenario, '--vary', 'column.length=3 m:9 m:4', '--out', join(dir, 'line')]);
     expect(r.status, r.stderr).toBe(0);
     const csv = readFileSync(join(dir, 'line', 'sweep.csv'), 'utf8').trim().split('\n');
     const beta = csv[0].split(',').indexOf('beta_form');
@@ -213,10 +213,10 @@ describe('stanchion sweep', () => {
     expect(err[err.length - 2]).toBe('stanchion: writing the report …');
   });
 
-  it('reads a sweep file whose scenario path is relative to it', () => {
+  it('reads a sweep file whose scenario path is relative to it', async () => {
     const file = join(dir, 'study.yaml');
     writeFileSync(file, ['scenario: column.yaml', 'seed: 3', 'vary:', '  - "loads.dead.mean=300 kN:400 kN:3"', ''].join('\n'));
-    const r = runCli(['sweep', file, '--out', join(dir, 'study'), '--json']);
+    const r = await runCli(['sweep', file, '--out', join(dir, 'study'), '--json']);
     expect(r.status, r.stderr).toBe(0);
     const doc = JSON.parse(r.stdout).sweep;
     expect(doc.varied).toEqual(['loads.dead.mean']);

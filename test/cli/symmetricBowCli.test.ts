@@ -18,8 +18,8 @@ function symmetricBowScenario(): string {
 describe('assess --methods form,sorm on a bow of unknown sign', () => {
   const file = symmetricBowScenario();
 
-  it('does not say MEETS (Monte Carlo puts β near 3.3, below the target 3.8)', () => {
-    const r = runCli(['assess', file, '--methods', 'form,sorm', '--json']);
+  it('does not say MEETS (Monte Carlo puts β near 3.3, below the target 3.8)', async () => {
+    const r = await runCli(['assess', file, '--methods', 'form,sorm', '--json']);
     expect(r.status, r.stderr).toBe(0);
     const rel = JSON.parse(r.stdout).reliability;
     // common practice: the MC reference of test/studies/symmetricBow.test.ts (β ≈ 3.3 with 400 000 samples)

@@ -77,9 +77,9 @@ describe('loads in time (end to end)', () => {
     expect(Math.abs(rel.mc.pf - ref.pf)).toBeLessThan(4 * Math.hypot(se(ref.pf, ref.samples), se(ref.pf, samples)));
   });
 
-  it('echoes the target source verbatim in the terminal, the report, the verdict and the charts', () => {
+  it('echoes the target source verbatim in the terminal, the report, the verdict and the charts', async () => {
     const out = join(tmp, 'report');
-    const r = runCli(['assess', TURKSTRA, '--methods', 'form', '--seed', '1', '--out', out]);
+    const r = await runCli(['assess', TURKSTRA, '--methods', 'form', '--seed', '1', '--out', out]);
     expect(r.status, r.stderr).toBe(0);
     expect(r.stdout).toContain(`from ${SOURCE}; CC2`);
     expect(r.stdout).toMatch(/imposed \(lowest β\)\s+\d\.\d\d/);
@@ -95,11 +95,11 @@ describe('loads in time (end to end)', () => {
     for (const f of labelled) expect(readFileSync(join(out, 'charts', f), 'utf8')).toContain(SOURCE);
   });
 
-  it('a target outside 0.5–8 is refused with exit 2, nothing written', () => {
+  it('a target outside 0.5–8 is refused with exit 2, nothing written', async () => {
     const file = join(tmp, 'bad.yaml');
     writeFileSync(file, readFileSync(join(ROOT, TURKSTRA), 'utf8').replace('beta: 3.8,', 'beta: 12,'));
     const out = join(tmp, 'never');
-    const r = runCli(['assess', file, '--out', out]);
+    const r = await runCli(['assess', file, '--out', out]);
     expect(r.status).toBe(2);
     expect(r.stderr.trim().split('\n')).toHaveLength(1);
     expect(r.stderr).toMatch(/target\.beta \(line \d+\): must be a reliability index between 0.5 and 8/);

@@ -4,7 +4,7 @@
  * outcome class, plus a few facts of the mechanics marked with their source.
  */
 import { describe, expect, it } from 'vitest';
-import { runCli } from './runCli.js';
+import { runCliProcess as runCli } from './runCli.js'; // a real process: these read its exit code and streams whole
 
 function scenario(frame: 'braced' | 'sway', E: string, bottom: string, top: string, dead = '{dist: normal, mean: 300 kN, cov: 0.10}'): string {
   return `stanchion: 1

@@ -24,8 +24,9 @@ describe('FORM with a gradient of unknown sign (g = c − u1 − k|u2|)', () => 
   const betaPoint = c / Math.sqrt(1 + k * k);
 
   it('without the doubtful-direction search FORM converges on the saddle u = (c, 0, 0): confidently wrong', () => {
-    const r = form(problem, { restarts: 0, probeDoubtful: false });
+    const r = form(problem, { restarts: 0, probeDoubtful: false, differences: 'central' });
     // common practice: at u2 = 0 the central difference of |u2| is exactly 0, so HL-RF never leaves u2 = 0
+    // (the forward difference, the default, sees one side of the kink and leaves it by chance)
     expect(r.converged).toBe(true);
     expect(r.beta).toBeCloseTo(c, 8);
     const check = checkForm(problem, r, { seed: 4 });

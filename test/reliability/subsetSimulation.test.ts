@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { subsetSimulation } from '../../src/reliability/subsetSimulation.js';
+import { subsetSimulation, subsetToTargetCov } from '../../src/reliability/subsetSimulation.js';
 import { linearSum, paraboloid } from '../../src/reliability/testProblems.js';
 import type { ReliabilityProblem, SubsetResult } from '../../src/reliability/types.js';
 
@@ -98,5 +98,29 @@ describe('subset simulation', () => {
   it('rejects an N that p0 does not divide', () => {
     // common practice: N·p0 seeds, each growing a chain of 1/p0 states
     expect(() => subsetSimulation(linearSum({ n: 2, beta: 3 }), { seed: 1, samplesPerLevel: 1005 })).toThrow(/whole number/);
+  });
+});
+
+describe('subset simulation to a target CoV', () => {
+  const problem = linearSum({ n: 2, beta: 3.5 });
+  it('adds independent runs until the CoV of their mean reaches the target, then stops', () => {
+    const one = subsetSimulation(problem, { seed: 31 });
+    const r = subsetToTargetCov(problem, { seed: 31, targetCov: 0.1 });
+    expect(r.cov).toBeLessThanOrEqual(0.1);
+    expect(r.runs).toBeGreaterThan(1);
+    // stops as soon as reached: one run fewer would not have reached it
+    const fewer = subsetToTargetCov(problem, { seed: 31, targetCov: 0.1, maxRuns: (r.runs ?? 1) - 1 });
+    expect(fewer.cov).toBeGreaterThan(0.1);
+    expect(fewer.warnings.join(' ')).toMatch(/target CoV 0.1 was not reached/);
+    // run 0 is the plain run: same streams, and its calls are counted with the others'
+    expect(r.calls).toBeGreaterThan(one.calls);
+    expect(subsetToTargetCov(problem, { seed: 31, targetCov: 0.1 })).toEqual(r);
+    // source: docs/verification.md §R1 (row 1c1) exact pf Φ(−3.5) = 2.32629e-4; 4 × the reported CoV (from memory: levels as independent understate it slightly)
+    expect(Math.abs(r.pf / 2.32629e-4 - 1)).toBeLessThanOrEqual(4 * r.cov);
+  });
+
+  it('without a target it is exactly one run', () => {
+    // common practice: an option left out changes nothing
+    expect(subsetToTargetCov(problem, { seed: 5 })).toEqual(subsetSimulation(problem, { seed: 5 }));
   });
 });

@@ -54,12 +54,12 @@ describe('a column whose bow has unknown sign (first yield uses |e0|)', () => {
     expect(f.system.beta).toBeGreaterThanOrEqual(band[0]);
     expect(f.system.beta).toBeLessThanOrEqual(band[1]);
     // the search that stays at bow = 0 is far outside the band: the failure this guards against
-    const stuck = form(problem, { restarts: 0, probeDoubtful: false });
+    const stuck = form(problem, { restarts: 0, probeDoubtful: false, differences: 'central' });
     expect(stuck.beta).toBeGreaterThan(band[1] + 1);
   });
 
   it('a FORM that disagrees with its check never governs the verdict', () => {
-    const stuck = form(problem, { restarts: 0, probeDoubtful: false });
+    const stuck = form(problem, { restarts: 0, probeDoubtful: false, differences: 'central' });
     const v = verdict({ form: stuck });
     expect(v.trust).toBe('form');
     const g = checkedGoverning(problem, stuck, v, { method: 'form', beta: stuck.system.beta, pf: stuck.system.pf }, 7);

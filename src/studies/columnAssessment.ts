@@ -334,6 +334,8 @@ export async function assessColumn(given: Scenario, opts: AssessOptions = {}): P
     if (!lead) calls.sorm = out.sorm.calls;
     warnings.push(...out.sorm.warnings.map((w) => `SORM: ${w}`));
   }
+  // the sampling methods' own evaluations in this thread (a run split over workers does part here)
+  const simulationStart = evaluationsSoFar();
   if (methods.includes('is')) {
     out.is = await importanceSamplingAtDesignPoint(simProblem, formResult, {
       samples: s.analysis.isSamples ?? DEFAULT_IS_SAMPLES,
@@ -365,6 +367,7 @@ export async function assessColumn(given: Scenario, opts: AssessOptions = {}): P
     warnings.push(...out.subset.warnings.map((w) => `subset: ${w}`));
     calls.subset = out.subset.calls;
   }
+  const simulatedHere = evaluationsSoFar() - simulationStart;
   // With combinations every method is compared on the series system.
   const sysForm: FormResult = combos
     ? {
@@ -423,7 +426,6 @@ export async function assessColumn(given: Scenario, opts: AssessOptions = {}): P
   // what no entry above names (the mean check, model building): counted in this thread, so the sum is every call made here
   const inThread = evaluationsSoFar() - startCount;
   const named = Object.entries(calls).reduce((a, [k, n]) => a + (k === 'is' || k === 'mc' || k === 'subset' ? 0 : n), 0);
-  const simulatedHere = (out.mc && out.mc.workers <= 1 ? out.mc.calls : 0) + (out.is && out.is.workers <= 1 ? out.is.calls : 0) + (out.subset?.calls ?? 0);
   const other = inThread - named - simulatedHere;
   if (other > 0) calls.other = other;
   const studies = STUDY_NAMES.filter((n) => asked.has(n));

@@ -131,6 +131,8 @@ export interface BeamColumnResponse {
   /** largest |M| over the height (N·m) and where (m above the base) */
   memberMax: number;
   memberMaxAt: number;
+  /** the top's added sideways displacement v(L) (m); 0 when braced */
+  drift: number;
   /** +1 or −1: the side of the bow that gives memberMax */
   bowSide: number;
   /** bending moment M(x) (N·m) at x (m above the base), with the bow on bowSide */
@@ -151,18 +153,18 @@ export function beamColumnResponse(
   if (!(Pcr > 0) || P >= Pcr) {
     return {
       stable: false, load: P, Pcr, rotation: { bottom: Infinity, top: Infinity }, springMoment: { bottom: Infinity, top: Infinity },
-      memberMax: Infinity, memberMaxAt: NaN, bowSide: 1, moment: () => Infinity,
+      memberMax: Infinity, memberMaxAt: NaN, drift: Infinity, bowSide: 1, moment: () => Infinity,
     };
   }
   if (P <= 0) {
     return {
       stable: true, load: P, Pcr, rotation: { bottom: 0, top: 0 }, springMoment: { bottom: 0, top: 0 },
-      memberMax: 0, memberMaxAt: 0, bowSide: 1, moment: () => 0,
+      memberMax: 0, memberMaxAt: 0, drift: 0, bowSide: 1, moment: () => 0,
     };
   }
   const phi = L * Math.sqrt(P / EI);
   const k = eccentricCoefficientsInto(new Float64Array(ECC_LENGTH), frame, r, phi, eB, eT);
-  const [A, B, C] = [k[0], k[1], k[2]];
+  const [A, B, C, D] = [k[0], k[1], k[2], k[3]];
   const mode = modeShape(frame, r, phiCr);
   // bow: added deflection a·ŵ, a = |e0| (P/Pcr)/(1 − P/Pcr); its moment Pcr·a·(Am sin ψξ + Bm cos ψξ)
   const ratio = P / Pcr;
@@ -192,6 +194,7 @@ export function beamColumnResponse(
     },
     memberMax: Math.max(up, down),
     memberMaxAt: (side === 1 ? upAt : at[0]) * L,
+    drift: frame === 'sway' ? A * Math.sin(phi) + B * Math.cos(phi) + C + D + side * a * mode.sample(1) : 0,
     bowSide: side,
     moment,
   };

@@ -26,7 +26,7 @@ describe('pinned-pinned beam-column: classic closed forms', () => {
   const kL = L * Math.sqrt(P / EI);
   const pinned = { bottom: 0, top: 0 };
 
-  // Timoshenko & Gere, Theory of Elastic Stability, 2nd ed. 1961, §1.4: equal end couples, M_max = M0 sec(kL/2) at mid-height
+  // Timoshenko & Gere, Theory of Elastic Stability, 2nd ed. 1961, §1.4 (section number from memory; docs/verification.md §M4b): equal end couples, M_max = M0 sec(kL/2) at mid-height
   it('equal eccentricities give the secant amplification sec(kL/2)', () => {
     const e = 0.04;
     const r = beamColumnResponse(EI, L, 'braced', pinned, 0, e, e, P);
@@ -38,7 +38,7 @@ describe('pinned-pinned beam-column: classic closed forms', () => {
     expect(rel(r.moment(L), P * e)).toBeLessThan(1e-12);
   });
 
-  // Timoshenko & Gere 1961, §1.5: unequal end couples M_A, M_B (single curvature both positive):
+  // Timoshenko & Gere 1961, §1.5 (from memory; docs/verification.md §M4b): unequal end couples M_A, M_B (single curvature both positive):
   // M_max = M_B √(1 − 2α cos kL + α²) / sin kL, α = M_A/M_B, when the peak lies inside the span
   it('unequal eccentricities: the interior maximum of the two-couple solution', () => {
     const eB = 0.025;
@@ -117,7 +117,7 @@ describe('no eccentricity: the bow alone, as before', () => {
 });
 
 describe('first yield under combined actions', () => {
-  // Timoshenko & Gere 1961, §1.4 with first yield N/A + M_max/S = fy: the secant formula, solved here by bisection
+  // Timoshenko & Gere 1961, §1.4 (from memory; docs/verification.md §M4b) with first yield N/A + M_max/S = fy: the secant formula, solved here by bisection
   it('pinned ends, equal eccentricities, no bow: the secant-formula load', () => {
     const e = 0.05;
     const state: ColumnState = { E, fy, A, I, S, L, bow: 0, frame: 'braced', r: { bottom: 0, top: 0 }, eccentricity: { bottom: e, top: e } };

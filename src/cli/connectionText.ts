@@ -1,6 +1,6 @@
 /** Terminal lines for the connection moments, rotations and joint classes (check and assess). */
 import type { EndSpringMoments } from '../mechanics/endSpringMoments.js';
-import type { EndClassification } from '../limitState/connectionResponse.js';
+import type { ConnectionResponse, EndClassification } from '../limitState/connectionResponse.js';
 import { formatNumber, formatQuantity, type UnitSystem } from '../report/displayUnits.js';
 import { textTable } from './textTable.js';
 
@@ -18,8 +18,12 @@ function classText(c: EndClassification, system: UnitSystem): string {
 }
 
 /** Where and under what the moments were computed, in one sentence. */
-export function connectionBasis(m: EndSpringMoments, where: string, system: UnitSystem): string {
+export function connectionBasis(m: ConnectionResponse, where: string, system: UnitSystem): string {
   if (!m.stable) return `  at ${where} the load ${formatQuantity(m.load, 'force', system)} reaches Pcr: no equilibrium, the moments are unbounded.`;
+  const e = m.eccentricity;
+  if (e !== undefined && (e.bottom !== 0 || e.top !== 0)) {
+    return `  at ${where}: P = ${formatQuantity(m.load, 'force', system)} at end eccentricities bottom ${formatQuantity(e.bottom, 'length', system)}, top ${formatQuantity(e.top, 'length', system)} (load-weighted; the moments include the end couples P·e), bow ${formatQuantity(m.bow, 'length', system)} on its unfavourable side`;
+  }
   if (m.bow === 0) return `  no bow is given (column.imperfection.bow), so the column stays straight and the connections carry no moment at ${where}.`;
   return `  at ${where}: P = ${formatQuantity(m.load, 'force', system)}, bow ${formatQuantity(m.bow, 'length', system)}, amplification 1/(1 − P/Pcr) = ${formatNumber(m.amplification, 3)}`;
 }

@@ -121,7 +121,11 @@ export function feFirstMode(frame: FeFrame, r: FeRestraint, elements: number, it
   return splitVector(full);
 }
 
-/** The second-order response to the initial shape w0 (nodal values, m) under P (N). */
+/**
+ * The second-order response to the initial shape w0 (nodal values, m) under P (N), and to external
+ * couples (N·m) applied to the end nodes, positive when they turn the node towards +w going up
+ * (a load P at eccentricity e on the +w side gives +P·e at the bottom and −P·e at the top).
+ */
 export function feSecondOrder(
   EI: number,
   L: number,
@@ -129,6 +133,7 @@ export function feSecondOrder(
   r: FeRestraint,
   P: number,
   w0: FeNodalShape,
+  endCouples: { bottom: number; top: number } = { bottom: 0, top: 0 },
 ): FeSecondOrderResult {
   const elements = w0.w.length - 1;
   const lambda = (P * L * L) / EI;
@@ -146,7 +151,11 @@ export function feSecondOrder(
   }
   const A = new Float64Array(n * n);
   for (let i = 0; i < n * n; i++) A[i] = K[i] - lambda * Kg[i];
-  const rhs = Float64Array.from(keep, (d) => lambda * gw0[d]);
+  // a couple M on dv/dx = (dv/dξ)/L does the work of M L²/EI on the dimensionless slope DOF
+  const fExt = new Float64Array(N);
+  fExt[1] = (endCouples.bottom * L * L) / EI;
+  fExt[N - 1] = (endCouples.top * L * L) / EI;
+  const rhs = Float64Array.from(keep, (d) => lambda * gw0[d] + fExt[d]);
   const vFree = solveCholesky(choleskyInPlace(A, n), n, rhs);
   const v = new Float64Array(N);
   keep.forEach((d, i) => (v[d] = vFree[i]));
@@ -183,7 +192,8 @@ export function feSecondOrder(
   return {
     v: splitVector(v),
     rotation: { bottom: v[1] / L, top: v[N - 1] / L },
-    springMoment: { bottom: -fInt[1] * toMoment, top: -fInt[N - 1] * toMoment },
+    // the spring (or support) supplies what the applied couple leaves over of the element end forces
+    springMoment: { bottom: (fExt[1] - fInt[1]) * toMoment, top: (fExt[N - 1] - fInt[N - 1]) * toMoment },
     memberMax,
     memberMaxAt,
   };

@@ -128,6 +128,25 @@ export function buildColumnModel(given: Scenario, combination: LoadCombination =
   const bow = slotOf(c.bow, 'column.imperfection.bow', names);
   const theta = slotOf(s.modelFactor, 'model_factor', names);
   const loads = s.loads.map((l) => slotOf(l.value, l.path, names));
+  // end eccentricities per load (docs/beam-column.md); a load without any reads fixed 0
+  const zero: Slot = { index: -1, value: 0 };
+  const eccTop = s.loads.map((l) => (l.eccentricity ? slotOf(l.eccentricity.top, `${l.path}.eccentricity.top`, names) : zero));
+  const eccBottom = s.loads.map((l) => (l.eccentricity ? slotOf(l.eccentricity.bottom, `${l.path}.eccentricity.bottom`, names) : zero));
+  const eccentric = [...eccTop, ...eccBottom].some((e) => e.index >= 0 || e.value !== 0);
+  // every load scaled together: the end couples are Σ P_i e_i, i.e. the total load at the
+  // load-weighted eccentricity; written to ecc[0] (bottom), ecc[1] (top). No column in tension is eccentric.
+  const ecc = new Float64Array(2);
+  const effectiveEccentricity = (x: Float64Array): void => {
+    let sum = 0, mB = 0, mT = 0;
+    for (let k = 0; k < loads.length; k++) {
+      const p = read(loads[k], x);
+      sum += p;
+      mB += p * read(eccBottom[k], x);
+      mT += p * read(eccTop[k], x);
+    }
+    ecc[0] = sum > 0 ? mB / sum : 0;
+    ecc[1] = sum > 0 ? mT / sum : 0;
+  };
   const lateral = c.ends.lateral === null ? null : slotOf(c.ends.lateral, 'column.ends.lateral', names);
   const bottom = endRatio(c.ends.bottom, 'column.ends.bottom', names, s);
   const top = endRatio(c.ends.top, 'column.ends.top', names, s);
@@ -139,7 +158,9 @@ export function buildColumnModel(given: Scenario, combination: LoadCombination =
 
   const state = (x: Float64Array): ColumnState => {
     const EI = read(E, x) * read(I, x);
+    if (eccentric) effectiveEccentricity(x);
     return {
+      ...(eccentric ? { eccentricity: { bottom: ecc[0], top: ecc[1] } } : {}),
       E: read(E, x),
       fy: read(fy, x),
       A: read(A, x),
@@ -164,6 +185,11 @@ export function buildColumnModel(given: Scenario, combination: LoadCombination =
     // A sample on the zero bound of a stiffness or strength (uniform or truncnormal with min 0, a
     // far tail that underflows) carries no load: capacity 0 is the answer, not an error.
     if (!(EI > 0) || !(read(A, x) * read(fy, x) > 0)) return 0;
+    if (eccentric) {
+      effectiveEccentricity(x);
+      // the tabulated path knows only the concentric column: an eccentric sample takes the exact one
+      if (ecc[0] !== 0 || ecc[1] !== 0) return columnCapacity(strength, state(x)).capacity;
+    }
     if (lateralAlwaysZero) {
       return fast(e, read(fy, x), read(A, x), i, read(S, x), L, read(bow, x), bottom(x, EI), top(x, EI));
     }

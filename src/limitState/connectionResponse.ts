@@ -4,6 +4,7 @@
  * from mechanics/endSpringMoments.ts and mechanics/jointClassification.ts; this file only picks the
  * inputs out of the scenario.
  */
+import { beamColumnResponse } from '../mechanics/beamColumn.js';
 import { endSpringMoments, type EndSpringMoments } from '../mechanics/endSpringMoments.js';
 import {
   beamJointBoundaries, classifyJoint, columnBaseBoundaries, pinnedRelativeSlenderness,
@@ -15,10 +16,30 @@ import type { ColumnModel } from './columnModel.js';
 export type EndKey = 'bottom' | 'top';
 const END_KEYS: readonly EndKey[] = ['bottom', 'top'];
 
-/** Second-order moments and rotations at x; the load is the demand (sum of loads) at x. */
-export function connectionResponseAt(model: ColumnModel, x: Float64Array): EndSpringMoments {
+/** What connectionResponseAt gives: the bowed column's response, with the load's end eccentricities when it has any. */
+export type ConnectionResponse = EndSpringMoments & { eccentricity?: { bottom: number; top: number } };
+
+/**
+ * Second-order moments and rotations at x; the load is the demand (sum of loads) at x. An eccentric
+ * load adds its end couples P·e (mechanics/beamColumn.ts): the spring moments then include them.
+ */
+export function connectionResponseAt(model: ColumnModel, x: Float64Array): ConnectionResponse {
   const st = model.state(x);
-  return endSpringMoments(st.E * st.I, st.L, st.frame, st.r, st.bow, model.demand(x));
+  const P = model.demand(x);
+  const bowed = endSpringMoments(st.E * st.I, st.L, st.frame, st.r, st.bow, P);
+  const e = st.eccentricity;
+  if (e === undefined) return bowed;
+  if (!bowed.stable || (e.bottom === 0 && e.top === 0)) return { ...bowed, eccentricity: e };
+  const b = beamColumnResponse(st.E * st.I, st.L, st.frame, st.r, st.bow, e.bottom, e.top, P);
+  return {
+    ...bowed,
+    rotation: b.rotation,
+    springMoment: b.springMoment,
+    memberMax: b.memberMax,
+    memberMaxAt: b.memberMaxAt,
+    drift: b.drift,
+    eccentricity: e,
+  };
 }
 
 /**
@@ -27,7 +48,7 @@ export function connectionResponseAt(model: ColumnModel, x: Float64Array): EndSp
  * magnitudes) and `connection_response` (what they were computed from). Non-finite values (load at or
  * above Pcr) become null through jsonSafe / JSON.stringify callers.
  */
-export function connectionJson(m: EndSpringMoments, at: 'means' | 'form design point'): Record<string, unknown> {
+export function connectionJson(m: ConnectionResponse, at: 'means' | 'form design point'): Record<string, unknown> {
   const nullIfInfinite = (v: number) => (Number.isFinite(v) ? v : null);
   return {
     connection_moments: {
@@ -44,6 +65,8 @@ export function connectionJson(m: EndSpringMoments, at: 'means' | 'form design p
       bow: m.bow,
       critical_load: m.Pcr,
       amplification: nullIfInfinite(m.amplification),
+      // the load-weighted end eccentricities (m) whose couples P·e the moments include
+      ...(m.eccentricity ? { eccentricity: { bottom: m.eccentricity.bottom, top: m.eccentricity.top } } : {}),
     },
   };
 }

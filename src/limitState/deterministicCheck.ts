@@ -9,7 +9,7 @@ import { fixityFactor } from '../mechanics/restraint.js';
 import type { ColumnState } from '../mechanics/types.js';
 import type { ColumnModel } from './columnModel.js';
 import type { EndSpringMoments } from '../mechanics/endSpringMoments.js';
-import { classificationJson, classifyEnds, connectionJson, connectionResponseAt, type EndClassification } from './connectionResponse.js';
+import { classificationJson, classifyEnds, connectionJson, connectionResponseAt, type ConnectionResponse, type EndClassification } from './connectionResponse.js';
 
 export interface ModeSummary {
   mode: number;
@@ -41,7 +41,7 @@ export interface CheckResult {
   model_factor: number;
   modes: ModeSummary[];
   /** second-order moments and rotations of the end connections under the mean loads */
-  connections: EndSpringMoments;
+  connections: ConnectionResponse;
   /** EN 1993-1-8 §5.2.2.5 class of each end at the mean stiffness and at its 5 % fractile */
   jointClasses: EndClassification[];
 }

@@ -2,6 +2,7 @@ import { aiscCapacity } from './aisc360.js';
 import { criticalLoad } from './criticalLoad.js';
 import { EN_IMPERFECTION, enCapacity } from './en1993.js';
 import { equivalentBowCapacity } from './equivalentBow.js';
+import { eccentricFirstYieldCapacity } from './eccentricFirstYield.js';
 import { firstYieldCapacity } from './firstYield.js';
 import { modeShape } from './modeShape.js';
 import { strengthModelKind } from './strengthModelKind.js';
@@ -34,6 +35,18 @@ export function isStrengthModel(s: string): s is StrengthModel {
 export function columnCapacity(model: StrengthModel, s: ColumnState): CapacityResult {
   if (!isStrengthModel(model)) throw new RangeError(`unknown strength model '${String(model)}'`);
   const { Pcr, phi, K } = criticalLoad(s.E * s.I, s.L, s.frame, s.r);
-  const c = modeShape(s.frame, s.r, phi).curvatureFactor;
-  return { capacity: capacityFromPcr(model, s.A, s.S, s.fy, s.bow, Pcr, c), Pcr, K, c };
+  const mode = modeShape(s.frame, s.r, phi);
+  const c = mode.curvatureFactor;
+  const e = s.eccentricity;
+  // zero eccentricity takes the concentric path untouched, so its results stay the same bit for bit
+  if (e === undefined || (e.bottom === 0 && e.top === 0)) {
+    return { capacity: capacityFromPcr(model, s.A, s.S, s.fy, s.bow, Pcr, c), Pcr, K, c };
+  }
+  if (strengthModelKind(model)?.family !== 'first-yield') {
+    throw new RangeError(`strength model '${model}' takes no load eccentricity yet (only first-yield does)`);
+  }
+  const capacity = eccentricFirstYieldCapacity({
+    A: s.A, S: s.S, fy: s.fy, EI: s.E * s.I, L: s.L, frame: s.frame, r: s.r, bow: s.bow, eB: e.bottom, eT: e.top, Pcr, mode,
+  });
+  return { capacity, Pcr, K, c };
 }

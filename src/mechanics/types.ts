@@ -108,6 +108,8 @@ export interface ColumnState {
   bow: number;
   frame: Frame;
   r: EndRestraint;
+  /** end eccentricities of the axial load (m; same sign = single curvature); absent = concentric */
+  eccentricity?: { bottom: number; top: number };
 }
 
 export interface CapacityResult {

@@ -5,6 +5,7 @@
 import type { Domain } from './readScalar.js';
 
 export function fieldDomain(path: string): Domain {
+  if (path.startsWith('loads.') && path.includes('.eccentricity.')) return 'any';
   if (path.startsWith('loads.')) return 'load';
   if (path.endsWith('.fixity')) return 'fixity';
   if (path.endsWith('.alignment_g')) return 'alignment';

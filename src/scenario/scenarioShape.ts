@@ -241,8 +241,22 @@ const LOAD_TIME_KEYS = {
   renewal_period: periodText('with point_in_time: how often the load takes an independent new value, e.g. 1 year').optional(),
 };
 
-const loadSchema = z.union([quantitySchema('force'), randomVariableSchema(() => quantitySchema('force'), LOAD_TIME_KEYS)], {
-  error: (iss) => (iss.input === undefined ? quantityMessage('force', undefined, false) : `${quantityMessage('force', iss.input, false)}, or a random variable {dist: NAME, ..., kind, maximum_over | point_in_time}`),
+/** End eccentricities of a load in the plane of the buckling axis (docs/beam-column.md); an omitted end is 0. */
+const eccentricitySchema = strict(
+  {
+    top: quantityScalar('length').optional().meta({ description: 'eccentricity of the load at the top (a length, fixed or random; default 0)' }),
+    bottom: quantityScalar('length').optional().meta({ description: 'eccentricity at the bottom; the same sign as top is single curvature (default 0)' }),
+  },
+  'end eccentricities {top: Q, bottom: Q} (lengths; either may be omitted)',
+).meta({ description: 'end eccentricities of the load in the plane of the buckling axis; the same sign at both ends is single curvature' });
+
+const LOAD_KEYS = { ...LOAD_TIME_KEYS, eccentricity: eccentricitySchema.optional() };
+
+/** A fixed load that carries keys besides its value: {value: Q, eccentricity: {...}, kind: ...}. */
+const fixedLoadWithKeys = strict({ value: quantitySchema('force'), ...LOAD_KEYS }, 'a fixed load {value: Q, eccentricity: {top: Q, bottom: Q}, kind: ...}');
+
+const loadSchema = z.union([quantitySchema('force'), fixedLoadWithKeys, randomVariableSchema(() => quantitySchema('force'), LOAD_KEYS)], {
+  error: (iss) => (iss.input === undefined ? quantityMessage('force', undefined, false) : `${quantityMessage('force', iss.input, false)}, {value: Q, eccentricity: {top: Q, bottom: Q}}, or a random variable {dist: NAME, ..., kind, maximum_over | point_in_time, eccentricity}`),
 });
 
 const correlationEntry = z
@@ -338,5 +352,6 @@ export const scenarioShape = strict(
 );
 
 export type ScenarioShape = z.infer<typeof scenarioShape>;
-export type RawScalar = ScenarioShape['loads'][string];
+/** A fixed or random value as written (the widest form: a random load with its extra keys). */
+export type RawScalar = Exclude<ScenarioShape['loads'][string], { value: string }>;
 export type RawEnd = ScenarioShape['column']['ends']['bottom'];

@@ -74,6 +74,8 @@ export interface Load {
   readonly value: Scalar;
   readonly kind?: LoadKind;
   readonly basis: LoadBasis;
+  /** end eccentricities (m), paths `loads.<name>.eccentricity.top|bottom`; absent when the file gives none */
+  readonly eccentricity?: { readonly top: Scalar; readonly bottom: Scalar };
 }
 
 /** The target reliability as stated, and converted to the reference period. */

@@ -1,6 +1,7 @@
 /**
  * Every value of a scenario by its contract path (docs/scenario-format.md), in one stable order:
- * section, material, ends (bottom, top, lateral), bow, loads in file order, model factor.
+ * section, material, ends (bottom, top, lateral), bow, loads in file order (each followed by its
+ * eccentricities when it has any), model factor.
  */
 import type { End, RandomVariable, Scalar, Scenario } from './types.js';
 
@@ -30,7 +31,13 @@ export function listScalars(s: Omit<Scenario, 'correlation'>): NamedScalar[] {
   ];
   if (c.ends.lateral !== null) list.push({ path: 'column.ends.lateral', scalar: c.ends.lateral });
   list.push({ path: 'column.imperfection.bow', scalar: c.bow });
-  for (const load of s.loads) list.push({ path: load.path, scalar: load.value });
+  for (const load of s.loads) {
+    list.push({ path: load.path, scalar: load.value });
+    if (load.eccentricity !== undefined) {
+      list.push({ path: `${load.path}.eccentricity.top`, scalar: load.eccentricity.top });
+      list.push({ path: `${load.path}.eccentricity.bottom`, scalar: load.eccentricity.bottom });
+    }
+  }
   list.push({ path: 'model_factor', scalar: s.modelFactor });
   return list;
 }

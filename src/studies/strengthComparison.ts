@@ -9,6 +9,12 @@ import type { FormResult } from '../reliability/types.js';
 import type { Scenario, StrengthModel } from '../scenario/types.js';
 import { scenarioForm } from './columnForm.js';
 
+/** Some load has an end eccentricity that is not a fixed zero. */
+function hasEccentricity(s: Scenario): boolean {
+  const nonZero = (v: Scenario['modelFactor']) => !(v.kind === 'fixed' && v.value === 0);
+  return s.loads.some((l) => l.eccentricity !== undefined && (nonZero(l.eccentricity.top) || nonZero(l.eccentricity.bottom)));
+}
+
 /** The models every assessment compares (the equivalent-bow forms repeat their curve's β; they are added only when chosen). */
 export const COMPARED_STRENGTH_MODELS: readonly StrengthModel[] = ['first-yield', 'aisc360-e3', 'en1993-a0', 'en1993-a', 'en1993-b', 'en1993-c', 'en1993-d'];
 
@@ -32,11 +38,15 @@ export interface StrengthModelBeta {
 export function betaByStrengthModel(given: Scenario, chosenForm: FormResult): StrengthModelBeta[] {
   const models = COMPARED_STRENGTH_MODELS.includes(given.strength) ? COMPARED_STRENGTH_MODELS : [...COMPARED_STRENGTH_MODELS, given.strength];
   const noBow = given.column.bow.kind === 'fixed' && given.column.bow.value === 0;
+  const eccentric = hasEccentricity(given);
   return models.map((strength) => {
     const resolved = resolveStrengthModel(given, strength);
     const chosen = strength === given.strength;
     if (strengthUsesBow(strength) && noBow) {
       return { strength, beta: null, pf: null, converged: false, modelFactor: resolved.modelFactor, chosen, note: 'needs a bow; the scenario gives none' };
+    }
+    if (eccentric && strength !== 'first-yield') {
+      return { strength, beta: null, pf: null, converged: false, modelFactor: resolved.modelFactor, chosen, note: 'has no check for eccentric loads yet' };
     }
     const r = chosen ? chosenForm : scenarioForm(resolved.scenario);
     return { strength, beta: r.beta, pf: r.pf, converged: r.converged, modelFactor: resolved.modelFactor, chosen };

@@ -1,0 +1,67 @@
+import { ECC_LENGTH, eccentricCoefficientsInto, maxAbsTwoSinusoids } from './beamColumn.js';
+import { brentRoot } from './brent.js';
+import type { EndRestraint, Frame, ModeShape } from './types.js';
+
+/** Load-independent data of one column for the eccentric first-yield search (docs/beam-column.md). */
+export interface EccentricColumn {
+  A: number;
+  S: number;
+  fy: number;
+  EI: number;
+  L: number;
+  frame: Frame;
+  r: EndRestraint;
+  bow: number;
+  eB: number;
+  eT: number;
+  Pcr: number;
+  /** the first mode at Pcr (mechanics/modeShape.ts) */
+  mode: ModeShape;
+}
+
+/**
+ * N/A + max_x |M(x)|/S − fy at the axial load P, M the second-order moment of mechanics/beamColumn.ts
+ * (end couples P·e plus the amplified bow on its unfavourable side). scratch: ECC_LENGTH + 1 entries.
+ */
+export function firstYieldMargin(col: EccentricColumn, P: number, scratch: Float64Array): number {
+  if (P <= 0) return -col.fy;
+  const phi = col.L * Math.sqrt(P / col.EI);
+  const k = eccentricCoefficientsInto(scratch, col.frame, col.r, phi, col.eB, col.eT);
+  const ratio = P / col.Pcr;
+  const q = col.Pcr * ((Math.abs(col.bow) * ratio) / (1 - ratio));
+  const at = scratch.subarray(ECC_LENGTH, ECC_LENGTH + 1);
+  const A = k[0];
+  const B = k[1];
+  const m = col.mode;
+  const up = maxAbsTwoSinusoids(P, A, B, phi, q, m.A, m.B, m.phi, at);
+  const down = q === 0 ? up : maxAbsTwoSinusoids(P, A, B, phi, -q, m.A, m.B, m.phi, at);
+  return P / col.A + Math.max(up, down) / col.S - col.fy;
+}
+
+const SCAN = 16;
+const NO_PARAMS = new Float64Array(0);
+const BELOW_PCR = 1 - 1e-12;
+
+/**
+ * The smallest axial load P at which N/A + max|M|/S reaches fy, the end couples growing with P
+ * (every load scaled together, so the eccentricities stay fixed). A column that stays below yield up
+ * to its critical load has capacity Pcr, as the concentric first-yield model gives min(A fy, Pcr).
+ * A mechanism (Pcr = 0) gives 0. The margin need not be monotonic in P (double curvature), so a scan
+ * of SCAN steps finds the first sign change before Brent's method refines it.
+ */
+export function eccentricFirstYieldCapacity(col: EccentricColumn): number {
+  if (!(col.Pcr > 0)) return 0;
+  const scratch = new Float64Array(ECC_LENGTH + 1);
+  const f = (P: number) => firstYieldMargin(col, P, scratch);
+  const top = col.Pcr * BELOW_PCR;
+  let lo = 0;
+  let flo = -col.fy;
+  for (let i = 1; i <= SCAN; i++) {
+    const hi = (top * i) / SCAN;
+    const fhi = f(hi);
+    if (fhi >= 0) return brentRoot((P) => f(P), NO_PARAMS, lo, hi, flo, fhi);
+    lo = hi;
+    flo = fhi;
+  }
+  return col.Pcr;
+}

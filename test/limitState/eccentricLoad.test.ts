@@ -1,0 +1,125 @@
+import { readFileSync } from 'node:fs';
+import { describe, expect, it } from 'vitest';
+import YAML from 'yaml';
+import { buildColumnModel } from '../../src/limitState/columnModel.js';
+import { connectionResponseAt } from '../../src/limitState/connectionResponse.js';
+import { checkJson, deterministicCheck } from '../../src/limitState/deterministicCheck.js';
+import { beamColumnResponse } from '../../src/mechanics/beamColumn.js';
+import { columnCapacity } from '../../src/mechanics/columnCapacity.js';
+import { loadScenario } from '../../src/scenario/loadScenario.js';
+import { runCli } from '../cli/runCli.js';
+
+const DEMOS = ['braced-base-plate', 'sway-canopy-post', 'timber-store-post'];
+
+function demoText(name: string): string {
+  return readFileSync(new URL(`../../scenarios/${name}.yaml`, import.meta.url), 'utf8');
+}
+
+/** The scenario with `eccentricity` added to every load (a plain force becomes {value: ...}). */
+function withEccentricity(text: string, ecc: (name: string) => Record<string, unknown>): string {
+  const doc = YAML.parse(text) as { loads: Record<string, unknown> };
+  for (const [name, raw] of Object.entries(doc.loads)) {
+    doc.loads[name] = typeof raw === 'string' ? { value: raw, eccentricity: ecc(name) } : { ...(raw as object), eccentricity: ecc(name) };
+  }
+  return YAML.stringify(doc);
+}
+
+/** Points of x: the means, and each variable moved to a few quantiles in turn and all together. */
+function probePoints(model: ReturnType<typeof buildColumnModel>): Float64Array[] {
+  const points = [Float64Array.from(model.mean)];
+  for (const p of [0.001, 0.1, 0.7, 0.999]) {
+    points.push(Float64Array.from(model.dists, (d) => d.quantile(p)));
+    for (let i = 0; i < model.dists.length; i++) {
+      const x = Float64Array.from(model.mean);
+      x[i] = model.dists[i].quantile(p);
+      points.push(x);
+    }
+  }
+  return points;
+}
+
+describe('zero eccentricity changes nothing, bit for bit, on every demo scenario', () => {
+  it.each(DEMOS)('%s', (name) => {
+    const text = demoText(name);
+    const plain = buildColumnModel(loadScenario(text, `${name}.yaml`));
+    const zero = buildColumnModel(loadScenario(withEccentricity(text, () => ({ top: '0 mm', bottom: '0 m' })), `${name}.yaml`));
+    expect(zero.names).toEqual(plain.names);
+    for (const x of probePoints(plain)) {
+      expect(Object.is(zero.capacity(x), plain.capacity(x))).toBe(true);
+      expect(Object.is(zero.g(x), plain.g(x))).toBe(true);
+    }
+    // a fixed zero everywhere is the concentric column: the same `check` JSON, no eccentricity key
+    expect(checkJson(deterministicCheck(zero))).toEqual(checkJson(deterministicCheck(plain)));
+  });
+});
+
+describe('eccentric loads in the limit state', () => {
+  const base = demoText('braced-base-plate');
+
+  it('a random eccentricity is a new variable; the capacity uses the load-weighted eccentricity', () => {
+    const text = withEccentricity(base, (load) => (load === 'dead' ? { top: { dist: 'normal', mean: '60 mm', sd: '15 mm' }, bottom: '-10 mm' } : { top: '20 mm' }));
+    const model = buildColumnModel(loadScenario(text, 'ecc.yaml'));
+    expect(model.names).toContain('loads.dead.eccentricity.top');
+    expect(model.names).not.toContain('loads.dead.eccentricity.bottom');
+    const x = Float64Array.from(model.mean);
+    const at = (path: string) => x[model.names.indexOf(path)];
+    const dead = at('loads.dead');
+    const imposed = at('loads.imposed');
+    const eTop = (dead * at('loads.dead.eccentricity.top') + imposed * 0.02) / (dead + imposed);
+    const eBottom = (dead * -0.01) / (dead + imposed);
+    const st = model.state(x);
+    expect(st.eccentricity!.top).toBeCloseTo(eTop, 15);
+    expect(st.eccentricity!.bottom).toBeCloseTo(eBottom, 15);
+    expect(model.capacity(x)).toBe(columnCapacity('first-yield', st).capacity);
+    expect(model.capacity(x)).toBeLessThan(buildColumnModel(loadScenario(base, 'plain.yaml')).capacity(x));
+    // every load scaled together leaves the eccentricities, and so the capacity, unchanged
+    const scaled = Float64Array.from(x);
+    scaled[model.names.indexOf('loads.dead')] *= 1.7;
+    scaled[model.names.indexOf('loads.imposed')] *= 1.7;
+    expect(Math.abs(model.capacity(scaled) / model.capacity(x) - 1)).toBeLessThan(1e-12);
+  });
+
+  it('the connection moments include the end couples P·e', () => {
+    const text = withEccentricity(base, (load) => (load === 'dead' ? { top: '80 mm' } : {}));
+    const model = buildColumnModel(loadScenario(text, 'ecc.yaml'));
+    const x = Float64Array.from(model.mean);
+    const st = model.state(x);
+    const r = connectionResponseAt(model, x);
+    const exact = beamColumnResponse(st.E * st.I, st.L, st.frame, st.r, st.bow, st.eccentricity!.bottom, st.eccentricity!.top, model.demand(x));
+    expect(r.springMoment).toEqual(exact.springMoment);
+    expect(r.memberMax).toBe(exact.memberMax);
+    const plain = connectionResponseAt(buildColumnModel(loadScenario(base, 'plain.yaml')), x);
+    expect(r.memberMax).toBeGreaterThan(plain.memberMax + 0.5 * model.demand(x) * st.eccentricity!.top);
+  });
+});
+
+describe('eccentricity input errors: exit 2, the field named', () => {
+  const base = demoText('braced-base-plate');
+  const cases: [string, string, RegExp][] = [
+    ['a force for a length', withEccentricity(base, () => ({ top: '80 kN' })), /loads\.dead\.eccentricity\.top.*length/],
+    ['an unknown end', withEccentricity(base, () => ({ left: '8 mm' })), /loads\.dead\.eccentricity\.left.*unknown key/],
+    [
+      'a code curve with an eccentricity',
+      withEccentricity(base, (l) => (l === 'imposed' ? { bottom: '5 mm' } : {})).replace('strength: first-yield', 'strength: en1993-b'),
+      /loads\.imposed\.eccentricity\.bottom.*first-yield/,
+    ],
+    [
+      'a period on a fixed load',
+      base.replace(/ {2}imposed: .*\n/, '  imposed: {value: 190 kN, maximum_over: 50 years, eccentricity: {top: 5 mm}}\n'),
+      /loads\.imposed\.maximum_over/,
+    ],
+  ];
+  it.each(cases)('%s', async (_label, text, message) => {
+    const r = await runCli(['check', '-'], text);
+    expect(r.status).toBe(2);
+    expect(r.stderr).toMatch(message);
+    expect(r.stderr).not.toMatch(/\n\s+at /); // no stack trace
+    expect(r.stdout).toBe('');
+  });
+
+  it('a code curve accepts an eccentricity of exactly zero', async () => {
+    const text = withEccentricity(demoText('sway-canopy-post'), () => ({ top: '0 mm' }));
+    const r = await runCli(['check', '-', '--json'], text);
+    expect(r.status).toBe(0);
+  });
+});

@@ -25,6 +25,8 @@ function endLabel(end: End, system: UnitSystem): string {
         : `spring, mean ${formatQuantity(end.k.spec.mean ?? NaN, 'rotationalStiffness', system)} (${end.k.spec.dist})`;
     case 'ratio':
       return `${end.from === 'fixity' ? 'fixity factor' : 'alignment-chart G'} given`;
+    case 'series':
+      return `${end.components.length} springs in series`;
   }
 }
 
@@ -54,6 +56,12 @@ export function formatCheck(s: Scenario, c: CheckResult, system: UnitSystem): st
       ['top', endLabel(s.column.ends.top, system), num(c.restraint_ratio.top), c.fixity_factor.top.toFixed(3)],
     ]),
   );
+  for (const key of ['bottom', 'top'] as const) {
+    const series = c.seriesSprings[key];
+    if (!series) continue;
+    const parts = series.components.map((p) => `${p.name} ${p.stiffness === null ? 'rigid' : q(p.stiffness, 'rotationalStiffness')}${p.random ? ' (mean)' : ''}`);
+    lines.push(`  ${key} end, springs in series (1/k = Σ 1/k_i): ${parts.join(' + ')} → effective k = ${q(series.effective_stiffness, 'rotationalStiffness')}`);
+  }
   if (c.lateral_ratio !== null) lines.push(`  lateral spring at the top: T = kT L³/EI = ${num(c.lateral_ratio)}`);
   lines.push('');
   const m1 = c.modes[0];

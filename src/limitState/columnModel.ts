@@ -13,6 +13,7 @@ import type { ColumnState } from '../mechanics/types.js';
 import type { End, Scalar, Scenario } from '../scenario/types.js';
 import { randomVariables } from '../scenario/variables.js';
 import { restraintRatio } from '../scenario/restraintRatio.js';
+import { flexibleComponents, seriesComponentPath, seriesStiffness } from '../scenario/seriesEnd.js';
 import { resolveStrengthModel, type ModelFactorUsed } from './strengthChoice.js';
 
 /** Where a value comes from: x[index] when random, else the fixed value. */
@@ -82,6 +83,16 @@ function endRatio(end: End, path: string, names: readonly string[], s: Scenario)
         return () => R;
       }
       return (x) => restraintRatio(from, frame, x[input.index]);
+    }
+    case 'series': {
+      // springs in series: 1/k = Σ 1/k_i (seriesEnd.ts); rigid components add nothing
+      const parts = flexibleComponents(end.components).map((c) => slotOf(c.k, seriesComponentPath(path, c.name), names));
+      const n = parts.length;
+      const k = new Float64Array(n); // reused on every call: no allocation on the hot path
+      return (x, EI) => {
+        for (let i = 0; i < n; i++) k[i] = read(parts[i], x);
+        return (seriesStiffness(k, n) * L) / EI;
+      };
     }
   }
 }

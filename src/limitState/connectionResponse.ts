@@ -11,6 +11,7 @@ import {
   type JointBoundaries, type JointClass,
 } from '../mechanics/jointClassification.js';
 import type { End } from '../scenario/types.js';
+import { flexibleComponents, seriesComponentPath } from '../scenario/seriesEnd.js';
 import type { ColumnModel } from './columnModel.js';
 
 export type EndKey = 'bottom' | 'top';
@@ -87,6 +88,14 @@ export interface EndClassification {
 /** The x of the means with this end's stiffness variable moved to its adverse 5 % fractile. */
 function lowStiffnessPoint(model: ColumnModel, end: End, path: string): Float64Array {
   const x = Float64Array.from(model.mean);
+  if (end.type === 'series') {
+    // every random component at its own 5 % fractile: the softest end a reviewer would quote
+    for (const c of flexibleComponents(end.components)) {
+      const j = model.names.indexOf(seriesComponentPath(path, c.name));
+      if (j >= 0) x[j] = model.dists[j].quantile(0.05);
+    }
+    return x;
+  }
   const variable = end.type === 'rotation' ? `${path}.rotation` : end.type === 'ratio' ? `${path}.${end.from}` : null;
   const i = variable === null ? -1 : model.names.indexOf(variable);
   if (i >= 0 && end.type === 'ratio' && end.from === 'alignment_g') x[i] = model.dists[i].quantile(0.95); // larger G, softer end
@@ -123,7 +132,7 @@ export function classifyEnds(model: ColumnModel): EndClassification[] {
     }
     let boundaries: JointBoundaries;
     let note: string;
-    const beam = end.type === 'rotation' ? end.beam : undefined;
+    const beam = end.type === 'rotation' || end.type === 'series' ? end.beam : undefined;
     if (beam) {
       const EIb = (beam.E ?? st.E) * beam.inertia;
       boundaries = beamJointBoundaries(s.column.frame, EIb, beam.length, EIc, L);

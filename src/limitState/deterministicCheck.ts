@@ -8,6 +8,7 @@ import { columnCapacity } from '../mechanics/columnCapacity.js';
 import { fixityFactor } from '../mechanics/restraint.js';
 import type { ColumnState } from '../mechanics/types.js';
 import type { ColumnModel } from './columnModel.js';
+import { seriesSpringsAt, type SeriesSprings } from './seriesSprings.js';
 import type { EndSpringMoments } from '../mechanics/endSpringMoments.js';
 import { classificationJson, classifyEnds, connectionJson, connectionResponseAt, type ConnectionResponse, type EndClassification } from './connectionResponse.js';
 
@@ -44,6 +45,8 @@ export interface CheckResult {
   connections: ConnectionResponse;
   /** EN 1993-1-8 §5.2.2.5 class of each end at the mean stiffness and at its 5 % fractile */
   jointClasses: EndClassification[];
+  /** the components of each end given as springs in series, at the means (null: not a series end) */
+  seriesSprings: SeriesSprings;
 }
 
 const SHAPE_POINTS = 41;
@@ -98,6 +101,7 @@ export function deterministicCheck(model: ColumnModel, modes = 3): CheckResult {
     modes: summaries,
     connections: connectionResponseAt(model, x),
     jointClasses: classifyEnds(model),
+    seriesSprings: seriesSpringsAt(model, x),
   };
 }
 
@@ -124,5 +128,6 @@ export function checkJson(c: CheckResult): Record<string, unknown> {
     })),
     ...connectionJson(c.connections, 'means'),
     joint_classification: classificationJson(c.jointClasses),
+    ...(c.seriesSprings.bottom || c.seriesSprings.top ? { series_springs: c.seriesSprings } : {}),
   };
 }

@@ -3,7 +3,7 @@ import type { QuantityKind } from '../report/reportInput.js';
 /** What a scenario value measures, by its contract path, so it can be shown in display units. */
 export function quantityKindOf(path: string): QuantityKind {
   if (path.startsWith('loads.')) return 'force';
-  if (/^column\.ends\.(bottom|top)\.rotation$/.test(path)) return 'rotationalStiffness';
+  if (/^column\.ends\.(bottom|top)\.(rotation$|series\.)/.test(path)) return 'rotationalStiffness';
   switch (path) {
     case 'column.length':
     case 'column.imperfection.bow':
@@ -27,6 +27,8 @@ export function quantityKindOf(path: string): QuantityKind {
 /** Plain words for a path, for tables people read. */
 export function describePath(path: string): string {
   if (path.startsWith('loads.')) return `load: ${path.slice(6)}`;
+  const series = /^column\.ends\.(bottom|top)\.series\.(.+)$/.exec(path);
+  if (series) return `${series[1]} end, ${series[2].replace(/_/g, ' ')} rotational stiffness (in series)`;
   const words: Record<string, string> = {
     'column.length': 'column length',
     'column.section.area': 'cross-section area',

@@ -5,7 +5,9 @@
  */
 import type { DistSpec } from '../probability/distribution.js';
 import { makeDistribution } from '../probability/makeDistribution.js';
-import type { End, Scalar, Scenario } from '../scenario/types.js';
+import type { End, Scalar, Scenario, SeriesComponent } from '../scenario/types.js';
+import { meanOf } from '../scenario/readScalar.js';
+import { scaledComponents, seriesComponentPath, seriesStiffnessAtMeans } from '../scenario/seriesEnd.js';
 import { restraintRatio } from '../scenario/restraintRatio.js';
 
 type Mutable<T> = { -readonly [K in keyof T]: Mutable<T[K]> };
@@ -18,6 +20,13 @@ function setEndScalar(end: Mutable<End>, leaf: string, scalar: Scalar, s: Scenar
   if (leaf === 'rotation' && end.type === 'rotation') {
     end.k = scalar;
     return;
+  }
+  if (end.type === 'series' && leaf.startsWith('series.')) {
+    const component = end.components.find((c) => c.name === leaf.slice('series.'.length));
+    if (component && component.k !== 'rigid') {
+      component.k = scalar;
+      return;
+    }
   }
   if (end.type === 'ratio' && leaf === end.from) {
     end.input = scalar;
@@ -33,7 +42,7 @@ function setEndScalar(end: Mutable<End>, leaf: string, scalar: Scalar, s: Scenar
 export function withScalar(s: Scenario, path: string, scalar: Scalar): Scenario {
   const out = clone(s);
   const c = out.column;
-  const endMatch = /^column\.ends\.(bottom|top)\.(rotation|fixity|alignment_g)$/.exec(path);
+  const endMatch = /^column\.ends\.(bottom|top)\.(rotation|fixity|alignment_g|series\.[A-Za-z][A-Za-z0-9_]*)$/.exec(path);
   if (endMatch) {
     setEndScalar(c.ends[endMatch[1] as 'bottom' | 'top'], endMatch[2], scalar, s, path);
   } else if (path.startsWith('loads.')) {
@@ -87,9 +96,15 @@ export function scaleScalar(v: Scalar, factor: number): Scalar {
 
 /**
  * The scenario with the rotational spring of `end` set from its base stiffness times `factor`:
- * 0 → pinned, Infinity → fixed.
+ * 0 → pinned, Infinity → fixed. A series end (springs in series) keeps its other components:
+ * `base` then stands for the component named `connection` (Infinity makes that component rigid),
+ * or, without one, for the end's effective stiffness at the means, every component being scaled
+ * by the same factor so that the effective mean becomes factor × mean(base) (seriesEnd.ts,
+ * `scaledComponents`).
  */
 export function withEndStiffness(s: Scenario, end: 'bottom' | 'top', base: Scalar, factor: number): Scenario {
+  const given = s.column.ends[end];
+  if (given.type === 'series' && factor > 0) return withSeriesStiffness(s, end, given, base, factor);
   const out = clone(s);
   const replaced: End =
     factor === 0 ? { type: 'pinned' } : factor === Infinity ? { type: 'fixed' } : { type: 'rotation', k: scaleScalar(base, factor) };
@@ -98,6 +113,30 @@ export function withEndStiffness(s: Scenario, end: 'bottom' | 'top', base: Scala
   const prefix = `column.ends.${end}.`;
   const kept = replaced.type === 'rotation' && replaced.k.kind === 'random' ? `${prefix}rotation` : null;
   const gone = (p: string) => p.startsWith(prefix) && p !== kept;
+  out.correlation = out.correlation.filter((r) => !gone(r.a) && !gone(r.b));
+  return out as Scenario;
+}
+
+type SeriesEnd = Extract<End, { type: 'series' }>;
+
+function withSeriesStiffness(s: Scenario, end: 'bottom' | 'top', given: SeriesEnd, base: Scalar, factor: number): Scenario {
+  const scaled = scaledComponents(given);
+  const byConnection = scaled.length === 1 && scaled[0] === 'connection';
+  // without a `connection`, every component × one ratio: the effective stiffness scales by that ratio
+  const ratio = byConnection ? factor : (factor * meanOf(base)) / seriesStiffnessAtMeans(given);
+  const components: SeriesComponent[] = given.components.map((c) => {
+    if (c.k === 'rigid' || !scaled.includes(c.name)) return c;
+    if (!Number.isFinite(ratio)) return { name: c.name, k: 'rigid' };
+    return { name: c.name, k: byConnection ? scaleScalar(base, factor) : scaleScalar(c.k, ratio) };
+  });
+  const replaced: End = components.every((c) => c.k === 'rigid') ? { type: 'fixed' } : { ...given, components };
+  const out = clone(s);
+  out.column.ends[end] = replaced as Mutable<End>;
+  const prefix = `column.ends.${end}.`;
+  const kept = new Set(
+    replaced.type === 'series' ? replaced.components.filter((c) => c.k !== 'rigid' && c.k.kind === 'random').map((c) => seriesComponentPath(`column.ends.${end}`, c.name)) : [],
+  );
+  const gone = (p: string) => p.startsWith(prefix) && !kept.has(p);
   out.correlation = out.correlation.filter((r) => !gone(r.a) && !gone(r.b));
   return out as Scenario;
 }

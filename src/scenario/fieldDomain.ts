@@ -9,7 +9,7 @@ export function fieldDomain(path: string): Domain {
   if (path.startsWith('loads.')) return 'load';
   if (path.endsWith('.fixity')) return 'fixity';
   if (path.endsWith('.alignment_g')) return 'alignment';
-  if (path.endsWith('.rotation') || path === 'column.ends.lateral') return 'nonnegative';
+  if (path.endsWith('.rotation') || /^column\.ends\.(bottom|top)\.series\./.test(path) || path === 'column.ends.lateral') return 'nonnegative';
   if (path === 'column.imperfection.bow') return 'any';
   return 'positive'; // section, material, model_factor
 }

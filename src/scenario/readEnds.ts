@@ -3,7 +3,7 @@ import type { PathSegment } from './rawTree.js';
 import { fail, readScalar, type ReadContext, type RawScalar } from './readScalar.js';
 import { restraintRatio } from './restraintRatio.js';
 import { meanOf } from './readScalar.js';
-import type { Beam, End, Frame, Scalar } from './types.js';
+import type { Beam, End, Frame, Scalar, SeriesComponent } from './types.js';
 
 export interface RawBeam {
   E?: string | undefined;
@@ -14,6 +14,7 @@ export type RawEndValue =
   | 'pinned'
   | 'fixed'
   | { rotation: RawScalar; beam?: RawBeam | undefined }
+  | { series: Record<string, RawScalar>; beam?: RawBeam | undefined }
   | { fixity: RawScalar }
   | { alignment_g: RawScalar };
 
@@ -36,6 +37,7 @@ export function readEnd(raw: RawEndValue, frame: Frame, path: PathSegment[], ctx
     const k = readScalar(raw.rotation, { kind: 'rotationalStiffness', domain: 'nonnegative' }, [...path, 'rotation'], ctx);
     return raw.beam === undefined ? { type: 'rotation', k } : { type: 'rotation', k, beam: readBeam(raw.beam, [...path, 'beam'], ctx) };
   }
+  if ('series' in raw) return readSeriesEnd(raw, path, ctx);
   const from = 'fixity' in raw ? 'fixity' : 'alignment_g';
   const given = 'fixity' in raw ? raw.fixity : raw.alignment_g;
   const input = readScalar(given, { kind: 'number', domain: from === 'fixity' ? 'fixity' : 'alignment' }, [...path, from], ctx);
@@ -43,11 +45,31 @@ export function readEnd(raw: RawEndValue, frame: Frame, path: PathSegment[], ctx
   return { type: 'ratio', from, input, R: restraintRatio(from, frame, meanOf(input)) };
 }
 
+const COMPONENT_NAME = /^[A-Za-z][A-Za-z0-9_]*$/;
+
+/** `{series: {name: Q | {dist…} | rigid, …}}`: each component validated like `rotation`. */
+function readSeriesEnd(raw: { series: Record<string, RawScalar>; beam?: RawBeam | undefined }, path: PathSegment[], ctx: ReadContext): End {
+  const at = [...path, 'series'];
+  const names = Object.keys(raw.series);
+  if (names.length === 0) fail(ctx, at, 'is empty: give at least one component, e.g. series: {connection: 2.5 MN m/rad, foundation: 8 MN m/rad}');
+  const components: SeriesComponent[] = names.map((name) => {
+    if (!COMPONENT_NAME.test(name)) fail(ctx, [...at, name], 'a component name must start with a letter and hold only letters, digits and _ (it names a variable)');
+    const value = raw.series[name];
+    if (value === 'rigid') return { name, k: 'rigid' };
+    return { name, k: readScalar(value, { kind: 'rotationalStiffness', domain: 'nonnegative' }, [...at, name], ctx) };
+  });
+  // every component rigid: the end is rigid
+  if (components.every((c) => c.k === 'rigid')) return { type: 'fixed' };
+  const beam = raw.beam === undefined ? undefined : readBeam(raw.beam, [...path, 'beam'], ctx);
+  return beam === undefined ? { type: 'series', components } : { type: 'series', components, beam };
+}
+
 /** True when the end certainly gives no rotational restraint. */
 function isFree(end: End): boolean {
   if (end.type === 'pinned') return true;
   if (end.type === 'rotation') return end.k.kind === 'fixed' && end.k.value === 0;
   if (end.type === 'ratio') return end.input.kind === 'fixed' && end.R === 0;
+  if (end.type === 'series') return end.components.some((c) => c.k !== 'rigid' && c.k.kind === 'fixed' && c.k.value === 0);
   return false;
 }
 

@@ -32,7 +32,7 @@ export const STRENGTH_MODELS = [
 export const METHODS = ['form', 'sorm', 'is', 'mc', 'subset'] as const;
 export const DISPLAY_UNITS = ['si', 'us'] as const;
 export const END_TYPES = ['pinned', 'fixed'] as const;
-export const END_KEYS = ['rotation', 'fixity', 'alignment_g'] as const;
+export const END_KEYS = ['rotation', 'series', 'fixity', 'alignment_g'] as const;
 export const LOAD_KIND_NAMES = ['permanent', 'imposed', 'snow', 'wind', 'other'] as const;
 
 /** How a bad value looks in a message. */
@@ -196,17 +196,37 @@ const beamSchema = strict(
   'the connected beam {inertia: Q, length: Q, E: Q (optional)}',
 ).meta({ description: 'the beam this connection joins the column to: classifies the joint by stiffness (EN 1993-1-8 §5.2.2.5)' });
 
+/** One flexibility of a series end: a stiffness (fixed or random) or `rigid`. */
+const seriesComponentSchema = z
+  .union([z.literal('rigid'), quantityScalar('rotationalStiffness')], {
+    error: (iss) =>
+      iss.input === undefined
+        ? `is missing: give ${KINDS.rotationalStiffness.noun} (e.g. ${KINDS.rotationalStiffness.example}), rigid, or a random variable {dist: NAME, ...}`
+        : `expected ${KINDS.rotationalStiffness.noun} (e.g. ${KINDS.rotationalStiffness.example}), rigid, or a random variable {dist: NAME, ...}; got ${describeInput(iss.input)}`,
+  })
+  .meta({ description: 'one component of the series: a rotational stiffness (fixed or random) or rigid' });
+
+const seriesSchema = z
+  .record(z.string(), seriesComponentSchema, {
+    error: (iss) => `expected the components as a mapping {connection: Q, foundation: Q, ...}, got ${describeInput(iss.input)}`,
+  })
+  .meta({ description: 'rotational springs in series, each named (connection, beam, foundation, ...): 1/k = Σ 1/k_i' });
+
 const endSchema = z
   .union(
     [
       choice(END_TYPES, 'an end condition'),
       strict({ rotation: quantityScalar('rotationalStiffness'), beam: beamSchema.optional() }, 'a rotational spring {rotation: Q, beam: {...} (optional)}'),
+      strict(
+        { series: seriesSchema, beam: beamSchema.optional() },
+        'rotational springs in series {series: {connection: Q, foundation: Q, ...}, beam: {...} (optional)}',
+      ),
       strict({ fixity: numberScalar('a fixity factor X = R/(R+3) in [0, 1)') }, 'a fixity factor {fixity: X}'),
       strict({ alignment_g: numberScalar('an alignment-chart G factor (>= 0)') }, 'an alignment-chart factor {alignment_g: G}'),
     ],
     {
       error: (iss) => {
-        const options = 'pinned, fixed, {rotation: Q}, {fixity: X} or {alignment_g: G}';
+        const options = 'pinned, fixed, {rotation: Q}, {series: {name: Q, ...}}, {fixity: X} or {alignment_g: G}';
         const input = iss.input;
         if (input === undefined) return `is missing: give ${options}`;
         if (typeof input === 'string') return `unknown end condition '${input}'${didYouMean(input, END_TYPES)}: use ${options}`;
@@ -222,7 +242,10 @@ const endSchema = z
       },
     },
   )
-  .meta({ description: 'end condition: pinned | fixed | {rotation: Q (moment per radian)} | {fixity: X in [0,1)} | {alignment_g: G >= 0}' });
+  .meta({
+    description:
+      'end condition: pinned | fixed | {rotation: Q (moment per radian)} | {series: {name: Q | rigid, ...} (springs in series, 1/k = Σ 1/k_i)} | {fixity: X in [0,1)} | {alignment_g: G >= 0}',
+  });
 
 const integer = (what: string, minimum: number) =>
   z

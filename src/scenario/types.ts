@@ -41,7 +41,18 @@ export type End =
   | { readonly type: 'pinned' }
   | { readonly type: 'fixed' }
   | { readonly type: 'rotation'; readonly k: Scalar; readonly beam?: Beam }
-  | { readonly type: 'ratio'; readonly from: 'fixity' | 'alignment_g'; readonly input: Scalar; readonly R: number };
+  | { readonly type: 'ratio'; readonly from: 'fixity' | 'alignment_g'; readonly input: Scalar; readonly R: number }
+  | { readonly type: 'series'; readonly components: readonly SeriesComponent[]; readonly beam?: Beam };
+
+/**
+ * One flexibility of a rotational end made of springs in series (1/k = Σ 1/k_i): the connection,
+ * the beam end, the foundation's rotation... Its variable is `column.ends.<end>.series.<name>`;
+ * `rigid` is an infinitely stiff component (it adds no flexibility).
+ */
+export interface SeriesComponent {
+  readonly name: string;
+  readonly k: Scalar | 'rigid';
+}
 
 /**
  * The beam a rotational spring connects the column to (optional; used only to classify the joint by

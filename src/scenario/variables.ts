@@ -3,6 +3,7 @@
  * section, material, ends (bottom, top, lateral), bow, loads in file order (each followed by its
  * eccentricities when it has any), model factor.
  */
+import { flexibleComponents, seriesComponentPath } from './seriesEnd.js';
 import type { End, RandomVariable, Scalar, Scenario } from './types.js';
 
 export interface NamedScalar {
@@ -13,6 +14,7 @@ export interface NamedScalar {
 function endScalar(end: End, path: string): NamedScalar[] {
   if (end.type === 'rotation') return [{ path: `${path}.rotation`, scalar: end.k }];
   if (end.type === 'ratio') return [{ path: `${path}.${end.from}`, scalar: end.input }];
+  if (end.type === 'series') return flexibleComponents(end.components).map((c) => ({ path: seriesComponentPath(path, c.name), scalar: c.k }));
   return [];
 }
 

@@ -5,6 +5,7 @@
 import type { ColumnRestraintResult } from './columnRestraint.js';
 import { quantityKindOf, describePath } from '../limitState/quantityKind.js';
 import { listScalars } from '../scenario/variables.js';
+import { seriesStiffnessAtMeans } from '../scenario/seriesEnd.js';
 import type { End, Scenario } from '../scenario/types.js';
 import type {
   EndDescription,
@@ -72,8 +73,9 @@ function endDescription(end: End, R: number | null, mean: (path: string) => numb
   if (end.type === 'pinned') return { type: 'pinned', R: 0, fixity: 0 };
   if (end.type === 'fixed') return { type: 'fixed', fixity: 1 };
   const Rv = R ?? Infinity;
-  const stiffness = end.type === 'rotation' ? mean(`${path}.rotation`) : undefined;
-  const random = end.type === 'rotation' ? end.k.kind === 'random' : end.input.kind === 'random';
+  const stiffness = end.type === 'rotation' ? mean(`${path}.rotation`) : end.type === 'series' ? seriesStiffnessAtMeans(end) : undefined;
+  const random =
+    end.type === 'rotation' ? end.k.kind === 'random' : end.type === 'series' ? end.components.some((c) => c.k !== 'rigid' && c.k.kind === 'random') : end.input.kind === 'random';
   return { type: 'spring', stiffness, R: Number.isFinite(Rv) ? Rv : undefined, fixity: fixityFactor(Rv), random };
 }
 

@@ -11,6 +11,7 @@ import { makeDistribution } from '../probability/makeDistribution.js';
 import { formatQuantity, type UnitSystem } from '../report/displayUnits.js';
 import { InputError } from '../scenario/inputError.js';
 import type { Scalar, Scenario } from '../scenario/types.js';
+import { flexibleComponents, scaledComponents, seriesComponentPath, seriesStiffnessAtMeans } from '../scenario/seriesEnd.js';
 import { findRootBracketed } from '../probability/rootBracketed.js';
 import { scenarioAlphas, scenarioForm, scenarioFormChecked, scenarioSorm, type BetaPoint, type CheckedBetaPoint } from './columnForm.js';
 import { restraintStudy, type RestraintStudyInput, type RestraintStudyResult } from './restraintStudy.js';
@@ -143,7 +144,7 @@ function roleText(c: RestraintCheckPoint): string {
 /** The ends the study varies: the requested ones, else every end given as a rotational spring. */
 export function studiedEnds(s: Scenario, choice?: EndChoice): EndName[] {
   if (choice) return choice === 'both' ? ['bottom', 'top'] : [choice];
-  return (['bottom', 'top'] as const).filter((e) => s.column.ends[e].type === 'rotation');
+  return (['bottom', 'top'] as const).filter((e) => s.column.ends[e].type === 'rotation' || s.column.ends[e].type === 'series');
 }
 
 function meanValue(v: Scalar): number {
@@ -153,6 +154,7 @@ function meanValue(v: Scalar): number {
 function baseScalar(s: Scenario, end: EndName, notes: string[]): Scalar {
   const e = s.column.ends[end];
   if (e.type === 'rotation' && meanValue(e.k) > 0) return e.k;
+  if (e.type === 'series' && seriesStiffnessAtMeans(e) > 0) return seriesBase(e, end, notes);
   const model = buildColumnModel(s);
   const st = model.state(model.mean);
   const EI = st.E * st.I;
@@ -165,6 +167,45 @@ function baseScalar(s: Scenario, end: EndName, notes: string[]): Scalar {
       `the study treats it as a rotational spring of fixed stiffness ${R === 1 ? 'EI/L' : 'R·EI/L'} = ${(k / 1e3).toPrecision(3)} kN·m/rad times the factor`,
   );
   return { kind: 'fixed', value: k };
+}
+
+/**
+ * A series end is studied through one variable: its `connection` component when it has one (the
+ * flexibility a reviewer argues about; the others stay as given), else all components scaled by one
+ * factor, the requirement then being the effective stiffness 1/Σ(1/k_i) at the means.
+ */
+function seriesBase(e: Extract<Scenario['column']['ends']['bottom'], { type: 'series' }>, end: EndName, notes: string[]): Scalar {
+  const scaled = scaledComponents(e);
+  const others = flexibleComponents(e.components).map((c) => c.name).filter((n) => !scaled.includes(n));
+  const single = scaled.length === 1 ? flexibleComponents(e.components).find((c) => c.name === scaled[0]) : undefined;
+  if (scaled.length === 1 && scaled[0] === 'connection') {
+    notes.push(
+      `the ${end} end is springs in series; the study scales only its connection component${others.length ? ` (${listText(others)} kept as given)` : ''}, so the requirement is the connection's own stiffness and rigid means a rigid connection`,
+    );
+    return single!.k;
+  }
+  if (single) return single.k;
+  notes.push(
+    `the ${end} end is springs in series with no component named connection; the study scales every component (${listText(scaled)}) by one factor, so the requirement is the effective stiffness 1/Σ(1/k_i) with every component at its mean`,
+  );
+  return { kind: 'fixed', value: seriesStiffnessAtMeans(e) };
+}
+
+function listText(names: readonly string[]): string {
+  return names.length <= 1 ? names.join('') : `${names.slice(0, -1).join(', ')} and ${names[names.length - 1]}`;
+}
+
+/** The contract path of the variable a study scales at this end (a path no variable has when several are scaled). */
+function studiedVariable(s: Scenario, end: EndName): string {
+  const e = s.column.ends[end];
+  if (e.type !== 'series') return `column.ends.${end}.rotation`;
+  const scaled = scaledComponents(e);
+  return scaled.length === 1 ? seriesComponentPath(`column.ends.${end}`, scaled[0]) : `column.ends.${end}.series`;
+}
+
+function ratioOfEnd(s: Scenario, end: EndName): number {
+  const model = buildColumnModel(s);
+  return model.state(model.mean).r[end];
 }
 
 function ratioAt(s: Scenario, k: number): number {
@@ -296,7 +337,11 @@ export async function columnRestraint(s: Scenario, opts: ColumnRestraintOptions 
   const f = study.requiredFactor;
   const reached = study.outcome === 'reached' && f !== null && Number.isFinite(f) && f > 0;
   const fixityAtRequired: Record<string, number | null> = {};
-  for (const e of ends) fixityAtRequired[e] = reached ? fixityFactor(ratioAt(s, (baseStiffness[e] ?? 0) * (f as number))) : null;
+  for (const e of ends) {
+    // a series end: R of the whole end (its other components included), at the means
+    const R = s.column.ends[e].type === 'series' ? (reached ? ratioOfEnd(edited(f as number), e) : 0) : ratioAt(s, (baseStiffness[e] ?? 0) * (f as number));
+    fixityAtRequired[e] = reached ? fixityFactor(R) : null;
+  }
   const kAtRequired = reached ? kWith(edited(f as number)) : null;
 
   let requirement: ColumnRestraintResult['requirement'] = null;
@@ -307,7 +352,7 @@ export async function columnRestraint(s: Scenario, opts: ColumnRestraintOptions 
     const { names, alpha } = scenarioAlphas(at);
     requirement = {};
     for (const e of ends) {
-      const a = designAlpha(alpha, names.indexOf(`column.ends.${e}.rotation`), opts.designAlpha ?? 'form');
+      const a = designAlpha(alpha, names.indexOf(studiedVariable(s, e)), opts.designAlpha ?? 'form');
       const q = endRequirement(base[e], f as number, target, a);
       requirement[e] = { ...q, fixityFactor: fixityAtRequired[e] as number };
     }

@@ -21,7 +21,7 @@ export type QuantityKind =
   | 'moment' // N·m
   | 'dimensionless';
 
-export type DistributionName = 'normal' | 'lognormal' | 'gumbel' | 'uniform' | 'truncnormal' | 'weibull' | 'beta';
+export type DistributionName = 'normal' | 'lognormal' | 'gumbel' | 'uniform' | 'truncnormal' | 'weibull' | 'beta' | 'studentt' | 'logstudentt';
 export type MethodName = 'form' | 'sorm' | 'is' | 'mc' | 'subset';
 export type EndName = 'bottom' | 'top';
 /** Where the target comes from, as the user wrote it (echoed verbatim, never rewritten). */

@@ -86,9 +86,11 @@ function supportMin(spec: DistSpec): number {
   switch (spec.dist) {
     case 'normal':
     case 'gumbel':
+    case 'studentt':
       return -Infinity;
     case 'lognormal':
     case 'weibull':
+    case 'logstudentt':
       return 0;
     case 'uniform':
     case 'beta':

@@ -7,6 +7,8 @@ import { zeroFailureBound } from '../reliability/zeroFailureBound.js';
 import { CAUTION, textTable } from './textTable.js';
 import { designPointConnections } from '../studies/designPointConnections.js';
 import { connectionBasis, connectionLines } from './connectionText.js';
+import { evidenceLines } from './evidenceLines.js';
+import { evidenceRows } from '../studies/evidenceSummary.js';
 
 const LABEL = { form: 'FORM', sorm: 'SORM', is: 'importance sampling', mc: 'Monte Carlo', subset: 'subset simulation' } as const;
 
@@ -130,6 +132,7 @@ export function formatAssessment(a: Assessment, system: UnitSystem): string {
   lines.push(`  at the means: capacity ${formatQuantity(a.check.capacity, 'force', system)}, demand ${formatQuantity(a.check.demand, 'force', system)}, mean-value ratio demand / (θ × capacity) ${a.check.utilization.toFixed(3)}, K = ${a.check.effective_length_factor.toFixed(3)}`);
   lines.push(targetLine(a));
   lines.push(`  ${modelFactorLine(a)}`);
+  if (a.scenario.evidence) lines.push(...evidenceLines(evidenceRows(a.scenario), system));
   lines.push('');
   const combos = a.combinations;
   if (combos) lines.push(...combinationLines(a));

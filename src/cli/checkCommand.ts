@@ -1,6 +1,7 @@
 import { deterministicCheck, checkJson, type CheckResult } from '../limitState/deterministicCheck.js';
 import { buildColumnModel } from '../limitState/columnModel.js';
 import { loadScenario } from '../scenario/loadScenario.js';
+import { makeDistribution } from '../probability/makeDistribution.js';
 import type { End, Scenario } from '../scenario/types.js';
 import { formatQuantity, type UnitSystem } from '../report/displayUnits.js';
 import { readScenarioText } from './readScenarioText.js';
@@ -22,7 +23,7 @@ function endLabel(end: End, system: UnitSystem): string {
     case 'rotation':
       return end.k.kind === 'fixed'
         ? `spring ${formatQuantity(end.k.value, 'rotationalStiffness', system)}`
-        : `spring, mean ${formatQuantity(end.k.spec.mean ?? NaN, 'rotationalStiffness', system)} (${end.k.spec.dist})`;
+        : `spring, mean ${formatQuantity(makeDistribution(end.k.spec).mean, 'rotationalStiffness', system)} (${end.k.spec.dist})`;
     case 'ratio':
       return `${end.from === 'fixity' ? 'fixity factor' : 'alignment-chart G'} given`;
     case 'series':

@@ -72,6 +72,17 @@ export function withScalar(s: Scenario, path: string, scalar: Scalar): Scenario 
 
 /** A distribution with its mean and standard deviation moved (coefficient of variation recomputed). */
 export function withMoments(spec: DistSpec, mean: number, sd: number): DistSpec {
+  if (spec.dist === 'studentt') {
+    // a t with ν <= 2 has no finite sd: its scale moves in proportion to the shift in sd asked for
+    const d = makeDistribution(spec);
+    const scale = Number.isFinite(d.sd) ? sd * Math.sqrt((spec.dof! - 2) / spec.dof!) : spec.scale!;
+    return { ...spec, loc: mean, scale };
+  }
+  if (spec.dist === 'logstudentt') {
+    // mean and sd of a log-Student-t are its lognormal stand-ins (docs/evidence.md): invert them
+    const scale2 = Math.log1p((sd / mean) ** 2);
+    return { ...spec, loc: Math.log(mean) - 0.5 * scale2, scale: Math.sqrt(scale2) };
+  }
   const out: DistSpec = { ...spec, mean };
   if (spec.dist === 'uniform') {
     const half = Math.sqrt(3) * sd;
@@ -84,6 +95,8 @@ export function withMoments(spec: DistSpec, mean: number, sd: number): DistSpec 
 
 /** Every length-like parameter of a distribution multiplied by `factor` (its coefficient of variation kept). */
 export function scaleSpec(spec: DistSpec, factor: number): DistSpec {
+  if (spec.dist === 'studentt') return { ...spec, loc: spec.loc! * factor, scale: spec.scale! * Math.abs(factor) };
+  if (spec.dist === 'logstudentt') return { ...spec, loc: spec.loc! + Math.log(factor) };
   const out: DistSpec = { ...spec };
   for (const key of ['mean', 'sd', 'min', 'max'] as const) if (out[key] !== undefined) out[key] = (out[key] as number) * factor;
   return out;

@@ -4,7 +4,12 @@
  * docs/scenario-format.md and checked in makeDistribution.ts.
  */
 
-export type DistName = 'normal' | 'lognormal' | 'gumbel' | 'uniform' | 'truncnormal' | 'weibull' | 'beta';
+/**
+ * 'studentt' and 'logstudentt' are not typed by users: they are the posterior predictive
+ * distributions that test evidence produces (src/evidence/, docs/evidence.md), so DIST_NAMES
+ * (the names a scenario may give) leaves them out.
+ */
+export type DistName = 'normal' | 'lognormal' | 'gumbel' | 'uniform' | 'truncnormal' | 'weibull' | 'beta' | 'studentt' | 'logstudentt';
 
 export const DIST_NAMES: readonly DistName[] = [
   'normal',
@@ -23,6 +28,10 @@ export interface DistSpec {
   cov?: number;
   min?: number;
   max?: number;
+  /** studentt / logstudentt only: location, scale (of ln X for logstudentt) and degrees of freedom. */
+  loc?: number;
+  scale?: number;
+  dof?: number;
 }
 
 export interface Distribution {

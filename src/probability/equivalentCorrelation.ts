@@ -5,10 +5,24 @@
  *   ρ = E[ Z1(U1) Z2(ρ0 U1 + √(1 − ρ0²) V) ],  Z_i = (X_i − μ_i)/σ_i, U1, V iid N(0,1),
  * with the expectation by an n × n Gauss–Hermite product rule (default 64 × 64) and ρ0 by
  * Brent's method on [−1, 1].
+ *
+ * A Student-t (or log-Student-t) marginal may have no finite variance (it comes from updating with
+ * a few tests), so Pearson's ρ is undefined for it: its pair's ρ0 is that of the normal (lognormal)
+ * marginal with the same location and scale, i.e. the stated correlation keeps the dependence
+ * (Gaussian copula) it has between the distributions before updating (docs/evidence.md).
  */
 import { DistributionError, type Distribution } from './distribution.js';
 import { gaussHermiteNormal } from './gaussHermite.js';
+import { LognormalDistribution } from './lognormalDist.js';
+import { NormalDistribution } from './normalDist.js';
 import { findRootBracketed } from './rootBracketed.js';
+
+/** The marginal whose moments stand in for a heavy-tailed t-family marginal. */
+function momentSurrogate(d: Distribution): Distribution {
+  if (d.name === 'studentt') return new NormalDistribution(d.params.loc!, d.params.scale!);
+  if (d.name === 'logstudentt') return new LognormalDistribution(d.params.loc!, d.params.scale!);
+  return d;
+}
 
 export const NATAF_QUADRATURE_NODES = 64;
 
@@ -70,6 +84,8 @@ export function equivalentCorrelation(d1: Distribution, d2: Distribution, rho: n
     throw new DistributionError(`correlation ${rho} must lie strictly between -1 and 1`);
   }
   if (rho === 0) return 0;
+  d1 = momentSurrogate(d1);
+  d2 = momentSurrogate(d2);
   if (d1.name === 'normal' && d2.name === 'normal') return rho; // linear maps keep ρ
   const key = `${marginalKey(d1)}|${marginalKey(d2)}|${rho}|${n}`;
   const known = rho0Cache.get(key);

@@ -11,10 +11,11 @@ import { NormalDistribution } from './normalDist.js';
 import { TruncatedNormalDistribution } from './truncnormalDist.js';
 import { UniformDistribution } from './uniformDist.js';
 import { WeibullDistribution, weibullCovRange } from './weibullDist.js';
+import { LogStudentTDistribution, StudentTDistribution } from './studentTDist.js';
 
 type Field = 'mean' | 'sd' | 'cov' | 'min' | 'max';
 
-const FIELDS: Record<DistSpec['dist'], { required: Field[]; optional: Field[] }> = {
+const FIELDS: Record<Exclude<DistSpec['dist'], 'studentt' | 'logstudentt'>, { required: Field[]; optional: Field[] }> = {
   normal: { required: ['mean'], optional: ['sd', 'cov'] },
   lognormal: { required: ['mean'], optional: ['sd', 'cov'] },
   gumbel: { required: ['mean'], optional: ['sd', 'cov'] },
@@ -29,7 +30,7 @@ function fail(dist: string, message: string): never {
 }
 
 /** Checks presence, finiteness and absence of fields the distribution does not take. */
-function checkFields(spec: DistSpec): void {
+function checkFields(spec: DistSpec & { dist: keyof typeof FIELDS }): void {
   const rule = FIELDS[spec.dist];
   const allowed = new Set<Field>([...rule.required, ...rule.optional]);
   for (const field of ['mean', 'sd', 'cov', 'min', 'max'] as const) {
@@ -70,12 +71,13 @@ function checkOrderedBounds(spec: DistSpec, min: number, max: number): void {
 }
 
 export function makeDistribution(spec: DistSpec): Distribution {
+  if (spec?.dist === 'studentt' || spec?.dist === 'logstudentt') return makeStudentT(spec);
   if (!spec || !DIST_NAMES.includes(spec.dist)) {
     throw new DistributionError(
       `unknown distribution '${String(spec?.dist)}' (expected one of ${DIST_NAMES.join(', ')})`,
     );
   }
-  checkFields(spec);
+  checkFields(spec as DistSpec & { dist: keyof typeof FIELDS });
   const mean = spec.mean as number;
   switch (spec.dist) {
     case 'normal':
@@ -135,4 +137,13 @@ function makeBeta(spec: DistSpec, mean: number): Distribution {
     fail(spec.dist, `'sd' (${sd}) is too large for this mean and range: it must be below ${limit.toPrecision(6)}`);
   }
   return new BetaDistribution(a, b, min, max);
+}
+
+/** The predictive distributions that test evidence produces (never typed by users). */
+function makeStudentT(spec: DistSpec): Distribution {
+  const { loc, scale, dof } = spec;
+  if (loc === undefined || !Number.isFinite(loc)) fail(spec.dist, `'loc' must be a finite number, got ${String(loc)}`);
+  if (scale === undefined || !(scale > 0) || !Number.isFinite(scale)) fail(spec.dist, `'scale' must be a finite number > 0, got ${String(scale)}`);
+  if (dof === undefined || !(dof > 0) || !Number.isFinite(dof)) fail(spec.dist, `'dof' must be a finite number > 0, got ${String(dof)}`);
+  return spec.dist === 'studentt' ? new StudentTDistribution(loc, scale, dof) : new LogStudentTDistribution(loc, scale, dof);
 }

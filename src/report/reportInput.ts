@@ -21,7 +21,7 @@ export type QuantityKind =
   | 'moment' // N·m
   | 'dimensionless';
 
-export type DistributionName = 'normal' | 'lognormal' | 'gumbel' | 'uniform' | 'truncnormal' | 'weibull' | 'beta';
+export type DistributionName = 'normal' | 'lognormal' | 'gumbel' | 'uniform' | 'truncnormal' | 'weibull' | 'beta' | 'studentt' | 'logstudentt';
 export type MethodName = 'form' | 'sorm' | 'is' | 'mc' | 'subset';
 export type EndName = 'bottom' | 'top';
 /** Where the target comes from, as the user wrote it (echoed verbatim, never rewritten). */
@@ -73,6 +73,32 @@ export interface InputRow {
   parameters: InputParameters;
   asWritten?: string; // what the user wrote, e.g. 'L/1500' or '2.5 MN m/rad'
   source?: string; // where the statistics come from, as written (test report, survey, code clause)
+}
+
+/** A distribution's summary before or after updating (SI in the row's kind; cov a plain ratio). */
+export interface EvidenceMoments {
+  distribution: DistributionName;
+  /** for a log-Student-t: the mean of the lognormal with the same ln-location and ln-scale (it has no finite mean) */
+  mean: number;
+  /** Infinity when the sd is not finite (a Student-t with 2 degrees of freedom or fewer) */
+  cov: number;
+  fractile05: number;
+  dof?: number;
+}
+
+/** A variable updated by test results (docs/evidence.md). */
+export interface EvidenceRow {
+  path: string;
+  description: string;
+  kind: QuantityKind;
+  tests: number[];
+  tested: 'similar' | 'this_one';
+  method: string;
+  measurementSd?: number;
+  measurementCov?: number;
+  source?: string;
+  prior: EvidenceMoments;
+  posterior: EvidenceMoments;
 }
 
 export interface CorrelationEntry {
@@ -366,6 +392,8 @@ export interface ReportInput {
   meta: ReportMeta;
   subject?: ReportSubject; // default 'assessment'
   inputs: InputRow[];
+  /** variables updated by test results (absent or empty: none) */
+  evidence?: EvidenceRow[];
   correlation: CorrelationEntry[];
   column: ColumnDescription;
   check: CheckResult;

@@ -2,7 +2,7 @@
  * ReportInput → ReportDocument: the words and tables of every section. Numbers are only
  * formatted and compared here, never computed.
  */
-import type { ConnectionValues, EndDescription, InputRow, JointClassRow, MethodName, ReportInput, StrengthModelName } from './reportInput.js';
+import type { ConnectionValues, EndDescription, EvidenceMoments, InputRow, JointClassRow, MethodName, ReportInput, StrengthModelName } from './reportInput.js';
 import { displayUnit, formatBeta, formatFixedColumn, formatNumber, formatProbability, formatProbabilityColumn, formatQuantity, type UnitSystem } from './displayUnits.js';
 import { SECTION_TITLES, sectionOrder, type Block, type ReportDocument, type Section, type SectionId } from './reportDocument.js';
 import { variableNamer } from './variableNames.js';
@@ -176,6 +176,41 @@ function parameterCell(row: InputRow, key: 'mean' | 'sd' | 'min' | 'max', system
   return v === undefined ? '' : formatQuantity(v, row.kind, system);
 }
 
+const EVIDENCE_DIST: Record<string, string> = { studentt: 'Student-t', logstudentt: 'log-Student-t' };
+
+/** What the test results changed: the data as entered, and each updated distribution before and after. */
+function evidenceBlocks(input: ReportInput, system: UnitSystem): Block[] {
+  const rows = input.evidence ?? [];
+  if (rows.length === 0) return [];
+  const dist = (m: EvidenceMoments) => `${EVIDENCE_DIST[m.distribution] ?? m.distribution}${m.dof === undefined ? '' : ` (ν = ${formatNumber(m.dof, 4)})`}`;
+  const cov = (c: number) => (Number.isFinite(c) ? formatNumber(c, 3) : 'not finite');
+  const table: string[][] = [];
+  for (const r of rows) {
+    const q = (v: number) => formatQuantity(v, r.kind, system);
+    table.push([r.description, String(r.tests.length), 'before', dist(r.prior), q(r.prior.mean), cov(r.prior.cov), q(r.prior.fractile05)]);
+    table.push(['', '', 'after', dist(r.posterior), q(r.posterior.mean), cov(r.posterior.cov), q(r.posterior.fractile05)]);
+  }
+  const data = rows.map((r) => {
+    const q = (v: number) => formatQuantity(v, r.kind, system);
+    const error = r.measurementSd !== undefined ? `, measurement sd ${q(r.measurementSd)}` : r.measurementCov !== undefined ? `, measurement CoV ${formatNumber(r.measurementCov, 3)}` : '';
+    return `${r.description} (${r.tested === 'this_one' ? 'tests of this item' : 'tests of similar items'}): ${r.tests.map(q).join(', ')}${error}. Update: ${r.method}.${r.source ? ` Source: ${r.source}.` : ''}`;
+  });
+  const blocks: Block[] = [
+    {
+      kind: 'table',
+      caption: 'Updated by test results: the posterior predictive distribution replaces the distribution as written in every method (conjugate updating, docs/evidence.md).',
+      head: ['variable', 'tests', '', 'distribution', 'mean', 'CoV', '5 % fractile'],
+      rows: table,
+      numeric: [false, true, false, false, true, true, true],
+    },
+    { kind: 'list', items: data },
+  ];
+  if (rows.some((r) => r.posterior.distribution === 'logstudentt')) {
+    blocks.push({ kind: 'paragraph', text: 'A log-Student-t has no finite mean: its mean and CoV above are those of the lognormal with the same ln-location and ln-scale; its 5 % fractile and every probability are exact.' });
+  }
+  return blocks;
+}
+
 function inputsSection(input: ReportInput, system: UnitSystem): Section {
   const rows = input.inputs.map((r) => [
     r.path,
@@ -197,6 +232,7 @@ function inputsSection(input: ReportInput, system: UnitSystem): Section {
       numeric: [false, false, false, true, true, true, true, true, false],
     }),
   ];
+  blocks.push(...evidenceBlocks(input, system));
   blocks.push({
     kind: 'paragraph',
     text:

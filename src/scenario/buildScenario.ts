@@ -8,7 +8,7 @@ import { fail, readScalar, type ReadContext } from './readScalar.js';
 import { PURE_NUMBER_UNIT, readQuantity, type DisplayUnit } from './quantity.js';
 import { ExpressionError } from './quantityExpression.js';
 import type { RawScalar, ScenarioShape } from './scenarioShape.js';
-import type { Load, LoadBasis, Method, Scalar, Scenario, Target } from './types.js';
+import type { EvidenceRecord, Load, LoadBasis, Method, Scalar, Scenario, Target } from './types.js';
 import { parsePeriod } from './readPeriod.js';
 import { betaOverPeriods } from '../probability/logProbability.js';
 import type { PathSegment } from './rawTree.js';
@@ -113,7 +113,8 @@ export interface Provenance {
 export function buildScenario(shape: ScenarioShape, lines: ReadonlyMap<string, number>, provenance: Provenance): Scenario {
   const units: Record<string, DisplayUnit> = {};
   const sources: Record<string, string> = {};
-  const ctx: ReadContext = { lines, units, sources };
+  const evidence: Record<string, EvidenceRecord> = {};
+  const ctx: ReadContext = { lines, units, sources, evidence };
   const c = shape.column;
   const frame = c.frame;
 
@@ -208,6 +209,7 @@ export function buildScenario(shape: ScenarioShape, lines: ReadonlyMap<string, n
     displayUnits: shape.display_units ?? 'si',
     units,
     sources,
+    ...(Object.keys(evidence).length > 0 ? { evidence } : {}),
   };
   const correlation = readCorrelation(shape.correlation as [string, string, number][] | undefined, listScalars(partial), ctx);
   return { ...partial, correlation };

@@ -11,7 +11,8 @@ import { InputError } from './inputError.js';
 import { PURE_NUMBER_UNIT, readQuantity, type DisplayUnit } from './quantity.js';
 import { ExpressionError } from './quantityExpression.js';
 import { formatPath, lineOf, type PathSegment } from './rawTree.js';
-import type { Scalar } from './types.js';
+import { readEvidence, type RawEvidence } from './readEvidence.js';
+import type { EvidenceRecord, Scalar } from './types.js';
 
 /**
  * Allowed values: `positive` > 0; `nonnegative` >= 0; `fixity` in [0, 1); `alignment` >= 0;
@@ -35,6 +36,8 @@ export interface ReadContext {
   readonly units: Record<string, DisplayUnit>;
   /** Collects the `source:` note of every random variable that has one. */
   readonly sources?: Record<string, string>;
+  /** Collects the test results that updated a variable (docs/evidence.md). */
+  readonly evidence?: Record<string, EvidenceRecord>;
 }
 
 type Param = 'mean' | 'sd' | 'cov' | 'min' | 'max';
@@ -86,9 +89,11 @@ function supportMin(spec: DistSpec): number {
   switch (spec.dist) {
     case 'normal':
     case 'gumbel':
+    case 'studentt':
       return -Infinity;
     case 'lognormal':
     case 'weibull':
+    case 'logstudentt':
       return 0;
     case 'uniform':
     case 'beta':
@@ -193,6 +198,12 @@ function readRandom(raw: Exclude<RawScalar, string | number>, rule: FieldRule, p
   ctx.units[formatPath(path)] = display ?? PURE_NUMBER_UNIT;
   const source = (raw as { source?: unknown }).source;
   if (typeof source === 'string' && source.trim() !== '' && ctx.sources) ctx.sources[formatPath(path)] = source.trim();
+  const evidence = (raw as { evidence?: RawEvidence }).evidence;
+  if (evidence !== undefined) {
+    const updated = readEvidence(spec, evidence, rule.kind, path, ctx.lines);
+    if (ctx.evidence) ctx.evidence[formatPath(path)] = updated.record;
+    return { kind: 'random', spec: updated.spec };
+  }
   return { kind: 'random', spec };
 }
 

@@ -122,16 +122,45 @@ const sourceSchema = z
   .optional()
   .meta({ description: 'where the statistics come from (free text, printed in the Inputs table), e.g. mill certificates 2019, site survey, EN 1990 Annex C' });
 
+export const EVIDENCE_TESTED = ['similar', 'this_one'] as const;
+export const EVIDENCE_SCATTER = ['unknown', 'known'] as const;
+
+/** Test results that update a normal or lognormal variable (docs/evidence.md, docs/scenario-format.md). */
+function evidenceSchema(value: () => ValueSchema) {
+  const pick = <const T extends readonly [string, ...string[]]>(values: T, what: string) =>
+    z.enum(values, { error: (iss) => `expected ${what}, one of ${values.join(', ')}; got ${describeInput(iss.input)}` });
+  return strict(
+    {
+      tests: z
+        .array(value(), { error: (iss) => `expected a list of test results, e.g. [312 MPa, 298 MPa, 305 MPa], got ${describeInput(iss.input)}` })
+        .min(1, { error: () => 'is empty: give at least one test result' })
+        .meta({ description: 'the test results, in the units of this variable' }),
+      tested: pick(EVIDENCE_TESTED, 'what was tested').optional().meta({ description: "similar (default): members of the same population (coupons, sibling connections); this_one: this very item" }),
+      scatter: pick(EVIDENCE_SCATTER, "whether the population's scatter is known").optional().meta({ description: "unknown (default): estimated from the tests; known: the sd or cov given above is the population's" }),
+      prior_weight: pureNumberSchema('how many tests the distribution given above is worth (0 = none, the default)').optional(),
+      measurement_sd: value().optional().meta({ description: 'the sd of the measurement error of each test, in the units of this variable' }),
+      measurement_cov: pureNumberSchema('the CoV of the measurement error of each test, e.g. 0.05').optional(),
+      source: sourceSchema,
+    },
+    'test results {tests: [...], tested, scatter, prior_weight, measurement_sd or measurement_cov, source}',
+  ).meta({ description: 'test results that update this distribution (normal and lognormal only); the updated distribution replaces it everywhere' });
+}
+
 /** `{dist: NAME, ...}` with the parameters docs/scenario-format.md gives each distribution. */
 export function randomVariableSchema<X extends z.core.$ZodLooseShape = Record<never, never>>(value: () => ValueSchema, extra: X = {} as X) {
   const meanSdCov = <const D extends DistName>(dist: D) =>
     strict({ dist: z.literal(dist), mean: value(), sd: value().optional(), cov: covSchema.optional(), source: sourceSchema, ...extra }, `a ${dist} variable (mean and one of sd, cov)`);
+  const updatable = <const D extends 'normal' | 'lognormal'>(dist: D) =>
+    strict(
+      { dist: z.literal(dist), mean: value(), sd: value().optional(), cov: covSchema.optional(), source: sourceSchema, evidence: evidenceSchema(value).optional(), ...extra },
+      `a ${dist} variable (mean and one of sd, cov; evidence optional)`,
+    );
   return z
     .discriminatedUnion(
       'dist',
       [
-        meanSdCov('normal'),
-        meanSdCov('lognormal'),
+        updatable('normal'),
+        updatable('lognormal'),
         meanSdCov('gumbel'),
         strict({ dist: z.literal('uniform'), min: value(), max: value(), source: sourceSchema, ...extra }, 'a uniform variable (min, max)'),
         strict(

@@ -161,6 +161,26 @@ export interface Scenario {
   readonly units: Readonly<Record<string, DisplayUnit>>;
   /** The `source:` note of each random variable that has one, by path, as written. */
   readonly sources?: Readonly<Record<string, string>>;
+  /** Variables updated by test results, by path (absent: none). */
+  readonly evidence?: Readonly<Record<string, EvidenceRecord>>;
+}
+
+/** Test results that updated a variable (docs/evidence.md); the variable's Scalar holds the updated spec. */
+export interface EvidenceRecord {
+  /** SI, as entered */
+  readonly tests: readonly number[];
+  readonly tested: 'similar' | 'this_one';
+  readonly scatter: 'unknown' | 'known';
+  /** how many tests the written distribution counts as (0: none) */
+  readonly priorWeight: number;
+  /** SI */
+  readonly measurementSd?: number;
+  readonly measurementCov?: number;
+  readonly source?: string;
+  /** the distribution as written, before the update */
+  readonly prior: DistSpec;
+  /** one line: which update was made */
+  readonly method: string;
 }
 
 export interface RandomVariable {

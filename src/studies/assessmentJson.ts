@@ -2,6 +2,8 @@
  * The contract JSON of `stanchion assess` (docs/json-output.md): contract keys first, extensions after.
  * JSON has no Infinity: a non-finite number is written as null.
  */
+import { evidenceRows } from './evidenceSummary.js';
+import type { EvidenceMoments } from '../report/reportInput.js';
 import { SAMPLER_VERSION } from '../probability/blockRng.js';
 import type { SobolResult } from '../sensitivity/sobol.js';
 import { checkJson } from '../limitState/deterministicCheck.js';
@@ -208,6 +210,22 @@ function sensitivityJson(a: Assessment): Record<string, unknown> {
   return out;
 }
 
+/** Variables updated by test results: the data as entered and the distribution before and after (SI). */
+function evidenceJson(s: Assessment['scenario']): unknown {
+  const moments = (m: EvidenceMoments) => ({ dist: m.distribution, mean: m.mean, cov: m.cov, fractile_05: m.fractile05, ...(m.dof !== undefined ? { dof: m.dof } : {}) });
+  return evidenceRows(s).map((r) => ({
+    variable: r.path,
+    tests: r.tests,
+    tested: r.tested,
+    measurement_sd: r.measurementSd ?? null,
+    measurement_cov: r.measurementCov ?? null,
+    method: r.method,
+    source: r.source ?? null,
+    prior: moments(r.prior),
+    posterior: moments(r.posterior),
+  }));
+}
+
 export function assessmentJson(a: Assessment, meta: RunMeta): unknown {
   const t = a.scenario.target;
   const doc: Record<string, unknown> = {
@@ -237,6 +255,7 @@ export function assessmentJson(a: Assessment, meta: RunMeta): unknown {
     },
   };
   if (a.restraint) doc.restraint = restraintJson(a.restraint);
+  if (a.scenario.evidence) doc.evidence = evidenceJson(a.scenario);
   doc.warnings = a.warnings;
   return jsonSafe(doc);
 }

@@ -21,6 +21,7 @@ import { formatBeta } from '../report/displayUnits.js';
 import type { EndSpringMoments } from '../mechanics/endSpringMoments.js';
 import type { ConnectionValues } from '../report/reportInput.js';
 import { designPointConnections } from './designPointConnections.js';
+import { evidenceRows } from './evidenceSummary.js';
 import { strengthUsesBow } from '../mechanics/strengthModelKind.js';
 import { makeDistribution } from '../probability/makeDistribution.js';
 import { zeroFailureBound } from '../reliability/zeroFailureBound.js';
@@ -62,8 +63,11 @@ function inputRows(s: Scenario): InputRow[] {
     const { dist, ...params } = scalar.spec;
     // both spreads, whichever was given: sd from the distribution itself, CoV = sd / |mean|
     const d = makeDistribution(scalar.spec);
-    const parameters = { ...params, mean: params.mean ?? d.mean, sd: params.sd ?? d.sd };
-    if (parameters.cov === undefined && d.mean !== 0) parameters.cov = d.sd / Math.abs(d.mean);
+    const { loc: _loc, scale: _scale, dof: _dof, ...plain } = params;
+    const parameters = { ...plain, mean: plain.mean ?? d.mean, sd: plain.sd ?? d.sd };
+    // a Student-t from two or three tests has no finite sd: leave sd and CoV empty
+    if (!Number.isFinite(parameters.sd)) delete (parameters as { sd?: number }).sd;
+    else if (parameters.cov === undefined && d.mean !== 0) parameters.cov = d.sd / Math.abs(d.mean);
     const source = s.sources?.[path];
     return { path, description: describePath(path), kind, distribution: dist, parameters, ...(source ? { source } : {}) };
   });
@@ -268,6 +272,7 @@ export function assessmentReportInput(a: Assessment, meta: RunMeta): ReportInput
       scenarioFile: s.fileName,
     },
     inputs: inputRows(s),
+    ...(s.evidence ? { evidence: evidenceRows(s) } : {}),
     correlation: s.correlation.map((r) => ({ a: r.a, b: r.b, rho: r.rho })),
     column: {
       length: s.column.length,

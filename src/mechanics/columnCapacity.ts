@@ -1,6 +1,8 @@
 import { aiscCapacity } from './aisc360.js';
+import { aiscEccentricCapacity } from './aiscInteraction.js';
 import { criticalLoad } from './criticalLoad.js';
 import { EN_IMPERFECTION, enCapacity } from './en1993.js';
+import { enEccentricCapacity } from './en1993Interaction.js';
 import { equivalentBowCapacity } from './equivalentBow.js';
 import { eccentricFirstYieldCapacity } from './eccentricFirstYield.js';
 import { firstYieldCapacity } from './firstYield.js';
@@ -42,11 +44,27 @@ export function columnCapacity(model: StrengthModel, s: ColumnState): CapacityRe
   if (e === undefined || (e.bottom === 0 && e.top === 0)) {
     return { capacity: capacityFromPcr(model, s.A, s.S, s.fy, s.bow, Pcr, c), Pcr, K, c };
   }
-  if (strengthModelKind(model)?.family !== 'first-yield') {
-    throw new RangeError(`strength model '${model}' takes no load eccentricity yet (only first-yield does)`);
+  const kind = strengthModelKind(model)!;
+  switch (kind.family) {
+    case 'first-yield': {
+      const capacity = eccentricFirstYieldCapacity({
+        A: s.A, S: s.S, fy: s.fy, EI: s.E * s.I, L: s.L, frame: s.frame, r: s.r, bow: s.bow, eB: e.bottom, eT: e.top, Pcr, mode,
+      });
+      return { capacity, Pcr, K, c };
+    }
+    case 'en1993': {
+      const capacity = enEccentricCapacity({
+        alpha: EN_IMPERFECTION[kind.curve!], A: s.A, S: s.S, fy: s.fy, Pcr, eB: e.bottom, eT: e.top, frame: s.frame,
+      });
+      return { capacity, Pcr, K, c };
+    }
+    case 'aisc360-e3': {
+      const capacity = aiscEccentricCapacity({
+        A: s.A, S: s.S, fy: s.fy, EI: s.E * s.I, L: s.L, frame: s.frame, r: s.r, eB: e.bottom, eT: e.top, Pcr,
+      });
+      return { capacity, Pcr, K, c };
+    }
+    case 'equivalent-bow':
+      throw new RangeError(`strength model '${model}' takes no load eccentricity (first-yield, en1993-* and aisc360-e3 do)`);
   }
-  const capacity = eccentricFirstYieldCapacity({
-    A: s.A, S: s.S, fy: s.fy, EI: s.E * s.I, L: s.L, frame: s.frame, r: s.r, bow: s.bow, eB: e.bottom, eT: e.top, Pcr, mode,
-  });
-  return { capacity, Pcr, K, c };
 }

@@ -64,8 +64,8 @@ function readLoadTime(raw: RawLoad, path: readonly PathSegment[], ctx: ReadConte
 const ZERO: Scalar = { kind: 'fixed', value: 0 };
 
 /**
- * A load's end eccentricities (docs/beam-column.md), or undefined when the file gives none. Only the
- * first-yield model has the combined-action check so far; the others refuse a non-zero eccentricity.
+ * A load's end eccentricities (docs/beam-column.md), or undefined when the file gives none. first-yield,
+ * en1993-* and aisc360-e3 have a combined-action check; the equivalent-bow models refuse a non-zero eccentricity.
  */
 function readEccentricity(raw: RawLoad, name: string, strength: string, columnLength: number, ctx: ReadContext): Load['eccentricity'] {
   if (typeof raw === 'string' || raw.eccentricity === undefined) return undefined;
@@ -74,8 +74,9 @@ function readEccentricity(raw: RawLoad, name: string, strength: string, columnLe
     if (given === undefined) return ZERO;
     const path = ['loads', name, 'eccentricity', end];
     const scalar = readScalar(given, { kind: 'length', domain: 'any', columnLength }, path, ctx);
-    if (strength !== 'first-yield' && !(scalar.kind === 'fixed' && scalar.value === 0)) {
-      fail(ctx, path, `strength model '${strength}' has no check for eccentric loads yet: use strength: first-yield (N/A + M/S over the height), or drop the eccentricity`);
+    // the equivalent-bow models (first-yield-en1993-X[-plus-bow]) have no combined-action check
+    if (strength.startsWith('first-yield-en1993-') && !(scalar.kind === 'fixed' && scalar.value === 0)) {
+      fail(ctx, path, `strength model '${strength}' has no check for eccentric loads: use strength: first-yield, en1993-X (EN 1993-1-1 Eq. 6.61) or aisc360-e3 (AISC 360 H1-1), or drop the eccentricity`);
     }
     return scalar;
   };

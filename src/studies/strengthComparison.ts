@@ -3,7 +3,7 @@
  * (or the scenario's model_factor when it gives one), at FORM level: how much the verdict rests on
  * the choice of strength model.
  */
-import { strengthUsesBow } from '../mechanics/strengthModelKind.js';
+import { strengthModelKind, strengthUsesBow } from '../mechanics/strengthModelKind.js';
 import { resolveStrengthModel, type ModelFactorUsed } from '../limitState/strengthChoice.js';
 import type { FormResult } from '../reliability/types.js';
 import type { Scenario, StrengthModel } from '../scenario/types.js';
@@ -45,8 +45,8 @@ export function betaByStrengthModel(given: Scenario, chosenForm: FormResult): St
     if (strengthUsesBow(strength) && noBow) {
       return { strength, beta: null, pf: null, converged: false, modelFactor: resolved.modelFactor, chosen, note: 'needs a bow; the scenario gives none' };
     }
-    if (eccentric && strength !== 'first-yield') {
-      return { strength, beta: null, pf: null, converged: false, modelFactor: resolved.modelFactor, chosen, note: 'has no check for eccentric loads yet' };
+    if (eccentric && strengthModelKind(strength)?.family === 'equivalent-bow') {
+      return { strength, beta: null, pf: null, converged: false, modelFactor: resolved.modelFactor, chosen, note: 'has no check for eccentric loads' };
     }
     const r = chosen ? chosenForm : scenarioForm(resolved.scenario);
     return { strength, beta: r.beta, pf: r.pf, converged: r.converged, modelFactor: resolved.modelFactor, chosen };

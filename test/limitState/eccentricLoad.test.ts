@@ -7,7 +7,13 @@ import { checkJson, deterministicCheck } from '../../src/limitState/deterministi
 import { beamColumnResponse } from '../../src/mechanics/beamColumn.js';
 import { columnCapacity } from '../../src/mechanics/columnCapacity.js';
 import { loadScenario } from '../../src/scenario/loadScenario.js';
+import { form } from '../../src/reliability/form.js';
+import { problemFromModel } from '../../src/limitState/columnRecipe.js';
+import { betaByStrengthModel } from '../../src/studies/strengthComparison.js';
+import type { Scenario } from '../../src/scenario/types.js';
 import { runCli } from '../cli/runCli.js';
+
+const scenarioFormFull = (s: Scenario) => form(problemFromModel(buildColumnModel(s)));
 
 const DEMOS = ['braced-base-plate', 'sway-canopy-post', 'timber-store-post'];
 
@@ -93,15 +99,40 @@ describe('eccentric loads in the limit state', () => {
   });
 });
 
+describe('the code interaction checks in the limit state (docs/beam-column.md)', () => {
+  const base = demoText('sway-canopy-post');
+  it.each(['en1993-b', 'en1993-d', 'aisc360-e3'])('%s: the exact eccentric capacity, below the concentric one', (strength) => {
+    const text = base.replace('strength: en1993-b', `strength: ${strength}`);
+    const plain = buildColumnModel(loadScenario(text, 'plain.yaml'));
+    const model = buildColumnModel(loadScenario(withEccentricity(text, () => ({ top: { dist: 'normal', mean: '40 mm', sd: '10 mm' } })), 'e.yaml'));
+    expect(model.scenario.strength).toBe(strength);
+    const x = Float64Array.from(model.mean);
+    const st = model.state(x);
+    expect(st.eccentricity!.top).toBeGreaterThan(0.03);
+    expect(model.capacity(x)).toBe(columnCapacity(strength as 'en1993-b', st).capacity);
+    expect(model.capacity(x)).toBeLessThan(plain.capacity(Float64Array.from(plain.mean)));
+  });
+
+  // common practice: the comparison table evaluates every model that has a combined-action check
+  it('by strength model: every compared model has a β under an eccentric load', () => {
+    const s = loadScenario(withEccentricity(base, () => ({ top: '30 mm' })), 'e.yaml');
+    const rows = betaByStrengthModel(s, scenarioFormFull(s));
+    for (const r of rows) {
+      expect(r.note).toBeUndefined();
+      expect(Number.isFinite(r.beta)).toBe(true);
+    }
+  });
+});
+
 describe('eccentricity input errors: exit 2, the field named', () => {
   const base = demoText('braced-base-plate');
   const cases: [string, string, RegExp][] = [
     ['a force for a length', withEccentricity(base, () => ({ top: '80 kN' })), /loads\.dead\.eccentricity\.top.*length/],
     ['an unknown end', withEccentricity(base, () => ({ left: '8 mm' })), /loads\.dead\.eccentricity\.left.*unknown key/],
     [
-      'a code curve with an eccentricity',
-      withEccentricity(base, (l) => (l === 'imposed' ? { bottom: '5 mm' } : {})).replace('strength: first-yield', 'strength: en1993-b'),
-      /loads\.imposed\.eccentricity\.bottom.*first-yield/,
+      'an equivalent-bow model with an eccentricity',
+      withEccentricity(base, (l) => (l === 'imposed' ? { bottom: '5 mm' } : {})).replace('strength: first-yield', 'strength: first-yield-en1993-b'),
+      /loads\.imposed\.eccentricity\.bottom.*first-yield-en1993-b.*no check for eccentric loads/,
     ],
     [
       'a period on a fixed load',
@@ -115,6 +146,14 @@ describe('eccentricity input errors: exit 2, the field named', () => {
     expect(r.stderr).toMatch(message);
     expect(r.stderr).not.toMatch(/\n\s+at /); // no stack trace
     expect(r.stdout).toBe('');
+  });
+
+  it('a code curve now checks a non-zero eccentricity (exit 0, a lower capacity)', async () => {
+    const plain = await runCli(['check', '-', '--json'], demoText('sway-canopy-post'));
+    const r = await runCli(['check', '-', '--json'], withEccentricity(demoText('sway-canopy-post'), () => ({ top: '40 mm' })));
+    expect(r.status).toBe(0);
+    const capacity = (out: string) => (JSON.parse(out) as { check: { capacity: number } }).check.capacity;
+    expect(capacity(r.stdout)).toBeLessThan(capacity(plain.stdout));
   });
 
   it('a code curve accepts an eccentricity of exactly zero', async () => {

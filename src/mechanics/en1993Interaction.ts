@@ -1,0 +1,79 @@
+import { brentRoot } from './brent.js';
+import { enReductionFactor } from './en1993.js';
+import type { Frame } from './types.js';
+
+/**
+ * In-plane member check under axial force and end moments of EN 1993-1-1:2005 §6.3.3, Eq. (6.61),
+ * with the interaction factor k_yy of Annex B (method 2), no partial factor (γM1 = 1, mean-level
+ * nominal like the other strength models):
+ *
+ *   N/(χ_y N_Rk) + k_yy · M_y/M_y,Rk ≤ 1,   N_Rk = A fy,  M_y,Rk = fy S.
+ *
+ * One buckling axis and no lateral-torsional buckling: χ_LT = 1, M_z = 0, and Eq. (6.62) (buckling
+ * about the other axis) does not apply. S is the elastic modulus, so k_yy takes the class 3 form of
+ * Table B.1 (members not susceptible to torsional deformation):
+ *
+ *   k_yy = C_my (1 + 0.6 λ̄_y n) ≤ C_my (1 + 0.6 n),   n = N/(χ_y N_Rk),
+ *
+ * i.e. C_my (1 + 0.6 min(λ̄_y, 1) n). C_my from Table B.3 for a linear moment diagram between the end
+ * moments: 0.6 + 0.4ψ ≥ 0.4, ψ = M_min/M_max (−1 ≤ ψ ≤ 1, positive in single curvature); for a
+ * member whose buckling mode sways the note to Table B.3 sets C_my = 0.9 (table values from memory).
+ * M_y is the first-order end moment P·e; the factors χ and k_yy account for second order.
+ */
+
+/** C_my of Table B.3: the end moments M_B = P e_B, M_T = P e_T (same sign = single curvature). */
+export function enEquivalentMomentFactor(eB: number, eT: number, frame: Frame): number {
+  if (frame === 'sway') return 0.9;
+  const big = Math.abs(eB) >= Math.abs(eT) ? eB : eT;
+  const small = big === eB ? eT : eB;
+  const psi = big === 0 ? 1 : small / big;
+  const c = 0.6 + 0.4 * psi;
+  return c > 0.4 ? c : 0.4;
+}
+
+/** k_yy of Table B.1, class 3 form: C_my (1 + 0.6 λ̄ n) capped at C_my (1 + 0.6 n), n = N/(χ N_Rk). */
+export function enInteractionFactor(cmy: number, lambdaBar: number, n: number): number {
+  return cmy * (1 + 0.6 * (lambdaBar < 1 ? lambdaBar : 1) * n);
+}
+
+/** Load-independent data of the Eq. (6.61) check of one column. */
+export interface EnInteractionColumn {
+  /** imperfection factor α of Table 6.1 */
+  alpha: number;
+  A: number;
+  S: number;
+  fy: number;
+  Pcr: number;
+  eB: number;
+  eT: number;
+  frame: Frame;
+}
+
+/** χ N_Rk evaluated as en1993.ts's enCapacity does, so that n = 1 exactly at the concentric capacity. */
+function flexuralResistance(alpha: number, lambdaBar: number, A: number, fy: number): number {
+  return enReductionFactor(alpha, lambdaBar) * A * fy;
+}
+
+/** Left-hand side of Eq. (6.61) at the axial load P, with M_y = P·max(|e_B|, |e_T|). */
+export function enInteractionRatio(col: EnInteractionColumn, P: number): number {
+  const lambdaBar = Math.sqrt((col.A * col.fy) / col.Pcr);
+  const Nb = flexuralResistance(col.alpha, lambdaBar, col.A, col.fy);
+  const n = P / Nb;
+  const M = P * Math.max(Math.abs(col.eB), Math.abs(col.eT));
+  const kyy = enInteractionFactor(enEquivalentMomentFactor(col.eB, col.eT, col.frame), lambdaBar, n);
+  return n + (kyy * M) / (col.fy * col.S);
+}
+
+const NO_PARAMS = new Float64Array(0);
+
+/**
+ * The axial load P (all loads scaled together, so e_B, e_T stay fixed) at which Eq. (6.61) equals 1.
+ * The ratio rises strictly with P (n and k_yy both grow) from 0 at P = 0 to at least 1 at the
+ * flexural buckling resistance χ N_Rk, so that load brackets the single root. A mechanism gives 0.
+ */
+export function enEccentricCapacity(col: EnInteractionColumn): number {
+  if (!(col.Pcr > 0)) return 0;
+  const Nb = flexuralResistance(col.alpha, Math.sqrt((col.A * col.fy) / col.Pcr), col.A, col.fy);
+  if (!(Nb > 0)) return 0;
+  return brentRoot((P) => enInteractionRatio(col, P) - 1, NO_PARAMS, 0, Nb, -1, enInteractionRatio(col, Nb) - 1);
+}

@@ -179,9 +179,11 @@ function sensitivityStudy(s: Scenario, model: ColumnModel, baseline: number, see
         for (const [path, o] of Object.entries(overrides)) {
           const i = names.indexOf(path);
           const spec = withMoments(specOf(s, path), o.mean ?? moments[i].mean, o.sd ?? moments[i].sd);
+          // e.g. a uniform fixity on [0, 1] shifted past 1: that side of the difference does not exist
+          if (!supportInsideDomain(spec, fieldDomain(path))) return NaN;
           t = withScalar(t, path, { kind: 'random', spec });
         }
-        return scenarioForm(t).beta;
+        return studyBeta(t);
       }),
     );
   }

@@ -103,6 +103,14 @@ strength: first-yield
     expect(JSON.parse(r.stdout).reliability.mc.pf).toBe(1);
   });
 
+  it('the sensitivity studies never move a bounded distribution out of its domain (uniform stiffness, fixity and G from 0)', () => {
+    // the elasticities shift a mean or an sd: a uniform from 0 would reach below 0, which is skipped, not evaluated
+    const braced = assess(scenario('braced', '200 GPa', '{rotation: {dist: uniform, min: 0 kN m/rad, max: 6937 kN m/rad}}', '{fixity: {dist: uniform, min: 0, max: 0.3}}'));
+    expect(braced.status, braced.stderr).toBe(0);
+    const sway = assess(scenario('sway', '200 GPa', '{alignment_g: {dist: uniform, min: 0, max: 2}}', 'pinned'));
+    expect(sway.status, sway.stderr).toBe(0);
+  });
+
   it('a sway column on a weak lognormal spring (a near-mechanism) is assessed', () => {
     const r = assess(scenario('sway', '200 GPa', '{rotation: {dist: lognormal, mean: 1 N m/rad, cov: 0.5}}', 'pinned'));
     expect(r.status, r.stderr).toBe(0);

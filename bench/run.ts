@@ -40,6 +40,15 @@ async function main(): Promise<void> {
     for (const line of await runValidBench(count, seed)) console.log(line);
     return;
   }
+  if (process.argv[2] === 'cost') {
+    // `node dist/bench/run.js cost`: the Monte Carlo kernel (with the whole-process ratio) and the sweep cost only
+    const demo = join(root, 'scenarios', 'braced-base-plate.yaml');
+    console.log('\n## Monte Carlo kernel (per CPU second; numpy reference: bench/numpy_column_mc.py)');
+    for (const line of await runKernelBench({ root, recipe: recipeFor('braced-base-plate.yaml'), scenario: demo })) console.log(line);
+    console.log('\n## sweep cost per case');
+    for (const line of await runSweepCostBench(demo)) console.log(line);
+    return;
+  }
   console.log('\n## start-up (wall time, against node -e 0 in the same run)');
   for (const line of runStartupBench(root, join(root, 'scenarios', 'braced-base-plate.yaml'))) console.log(line);
   console.log('\n## FORM calls');

@@ -7,6 +7,7 @@ import type { UnitSystem } from '../report/displayUnits.js';
 import type { Method } from '../scenario/types.js';
 import type { StudyName } from '../studies/studyNames.js';
 import type { EndChoice } from '../studies/columnRestraint.js';
+import { defaultStudies, skippedStudiesLine } from '../studies/defaultStudies.js';
 import { readScenarioText } from './readScenarioText.js';
 import { formatAssessment } from './assessSummary.js';
 import { toolVersion } from './version.js';
@@ -37,6 +38,10 @@ export async function runAssess(file: string, opts: AssessCliOptions, argv: stri
   // refuse a bad --out before the long run; writeOutputs checks again when it writes
   if (opts.out) checkOutFolder(opts.out, { force: opts.force ?? false, inputFiles: [file] });
   const system = opts.units ?? scenario.displayUnits;
+  // an explicit --studies always wins; otherwise the explicitly chosen methods decide (defaultStudies.ts)
+  const chosen = opts.studies === undefined ? defaultStudies(opts.methods) : undefined;
+  if (chosen && chosen.skipped.length > 0) process.stderr.write(skippedStudiesLine(chosen.skipped) + '\n');
+  const studies = opts.studies === false ? [] : (opts.studies ?? chosen?.studies);
   const progress = progressPrinter();
   const a = await withInterrupt((signal) =>
     assessColumn(scenario, {
@@ -44,7 +49,7 @@ export async function runAssess(file: string, opts: AssessCliOptions, argv: stri
       samples: opts.samples,
       targetCov: opts.targetCov,
       thorough: opts.thorough,
-      studies: opts.studies === false ? [] : opts.studies,
+      studies,
       seed: opts.seed,
       workers: opts.workers,
       end: opts.end,

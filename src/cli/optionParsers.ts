@@ -46,14 +46,15 @@ export function parseMethods(value: string): MethodName[] {
   return [...new Set(list)] as MethodName[];
 }
 
-/** `--studies LIST`: names from STUDY_NAMES, or `none`. */
+/** `--studies LIST`: names from STUDY_NAMES, `all` or `none`. */
 export function parseStudies(value: string): StudyName[] {
   const list = value.split(',').map((m) => m.trim().toLowerCase()).filter(Boolean);
   if (list.length === 1 && list[0] === 'none') return [];
-  if (list.length === 0) throw new InvalidArgumentError(`expected a comma-separated list of ${STUDY_NAMES.join(', ')} (or none).`);
+  if (list.length === 1 && list[0] === 'all') return [...STUDY_NAMES];
+  if (list.length === 0) throw new InvalidArgumentError(`expected a comma-separated list of ${STUDY_NAMES.join(', ')} (or all, or none).`);
   for (const m of list) {
     if (!(STUDY_NAMES as readonly string[]).includes(m)) {
-      throw new InvalidArgumentError(`unknown study '${m}'; expected some of ${STUDY_NAMES.join(', ')} (or none).`);
+      throw new InvalidArgumentError(`unknown study '${m}'; expected some of ${STUDY_NAMES.join(', ')} (or all, or none).`);
     }
   }
   return [...new Set(list)] as StudyName[];

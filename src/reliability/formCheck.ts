@@ -6,8 +6,13 @@
  * FORM's system in proportion to its Φ(−β_i), with the weight φ(u)/q(u) of the whole mixture
  * q = w0 φ + Σ w_i φ(· − u_i*). The weight never exceeds 1/w0, so a failure region that FORM
  * missed but that carries more than about 1/(w0 N) of probability still shows up. When FORM's
- * pf is large the check is plain Monte Carlo. Fixed budget and seed: the same problem always
- * gets the same check.
+ * pf is large the check is plain Monte Carlo. Fixed seed: the same problem always gets the same
+ * check.
+ *
+ * Sequential: the samples come in batches of FORM_CHECK_BATCH, each with the same mixture
+ * allocation, and the check stops after a batch once agreement is shown (see `agreementShown`),
+ * up to the budget. A disagreement, or a run where nothing failed, always gets the full budget:
+ * there the check's own estimate replaces FORM's and should be as precise as the budget allows.
  *
  * FORM agrees when its (system) β lies in the check's band: the check's pf ± CHECK_SIGMAS
  * standard deviations on the log scale, converted to β and widened by BETA_TOLERANCE for the
@@ -22,7 +27,7 @@ import type { FormResult, ReliabilityProblem } from './types.js';
 
 export interface FormCheckOptions {
   seed?: number;
-  /** Limit-state calls (default 4000). */
+  /** Most limit-state calls (default 4000); the check stops sooner once agreement is shown. */
   samples?: number;
 }
 
@@ -52,6 +57,8 @@ export interface FormCheckResult {
 
 export const FORM_CHECK_SAMPLES = 4000;
 export const FORM_CHECK_SEED = 1;
+/** Samples per batch of the sequential check. */
+export const FORM_CHECK_BATCH = 500;
 /** Standard deviations of the check allowed (log scale). */
 export const CHECK_SIGMAS = 4;
 /** β difference FORM may show for its linearisation alone. */
@@ -70,9 +77,8 @@ export function checkForm(problem: ReliabilityProblem, f: FormResult, opts: Form
   const crude = f.originFails || !(f.system.beta > 0) || f.system.pf >= LARGE_PF || !f.converged;
   const centres = crude ? [] : f.system.designPoints.map((p) => Float64Array.from(p.designPointU));
   const halfSquare = centres.map((c) => 0.5 * c.reduce((s, v) => s + v * v, 0));
-  // Deterministic allocation; the mixture weights are the realised shares, which keeps the estimator unbiased.
-  const counts = allocate(total, crude ? [] : f.system.designPoints.map((p) => normalSf(p.beta)));
-  const share = counts.map((c) => c / total);
+  const pfs = crude ? [] : f.system.designPoints.map((p) => normalSf(p.beta));
+  const formBeta = f.system.beta;
   // The block sampler's generator (ziggurat normals, filled a block at a time).
   const rng = new BlockRng(seed, FORM_CHECK_STREAM_BASE);
   const block = new Float64Array(512);
@@ -89,60 +95,91 @@ export function checkForm(problem: ReliabilityProblem, f: FormResult, opts: Form
   let sumW = 0;
   let sumW2 = 0;
   let failures = 0;
-  for (let k = 0; k < counts.length; k++) {
-    for (let j = 0; j < counts[k]; j++) {
-      const c = k === 0 ? null : centres[k - 1];
-      for (let i = 0; i < n; i++) u[i] = draw() + (c ? c[i] : 0);
-      if (G(u) > 0) continue;
-      failures++;
-      // φ(u)/q(u) = 1 / (w0 + Σ w_i exp(u·c_i − |c_i|²/2)), summed without overflow.
-      let largest = 0;
-      for (let m = 0; m < centres.length; m++) {
-        let d = 0;
-        for (let i = 0; i < n; i++) d += u[i] * centres[m][i];
-        exponents[m] = d - halfSquare[m];
-        if (exponents[m] > largest) largest = exponents[m];
+  let drawn = 0;
+  let defensiveDrawn = 0;
+  while (drawn < total) {
+    const size = Math.min(FORM_CHECK_BATCH, total - drawn);
+    // Deterministic allocation within the batch; the mixture weights are the batch's realised
+    // shares, which keeps each batch, and so their sum, unbiased.
+    const counts = allocate(size, pfs);
+    const share = counts.map((c) => c / size);
+    for (let k = 0; k < counts.length; k++) {
+      for (let j = 0; j < counts[k]; j++) {
+        const c = k === 0 ? null : centres[k - 1];
+        for (let i = 0; i < n; i++) u[i] = draw() + (c ? c[i] : 0);
+        if (G(u) > 0) continue;
+        failures++;
+        // φ(u)/q(u) = 1 / (w0 + Σ w_i exp(u·c_i − |c_i|²/2)), summed without overflow.
+        let largest = 0;
+        for (let m = 0; m < centres.length; m++) {
+          let d = 0;
+          for (let i = 0; i < n; i++) d += u[i] * centres[m][i];
+          exponents[m] = d - halfSquare[m];
+          if (exponents[m] > largest) largest = exponents[m];
+        }
+        let scaled = share[0] * Math.exp(-largest);
+        for (let m = 0; m < centres.length; m++) scaled += share[m + 1] * Math.exp(exponents[m] - largest);
+        const w = Math.exp(-largest) / scaled;
+        sumW += w;
+        sumW2 += w * w;
       }
-      let scaled = share[0] * Math.exp(-largest);
-      for (let m = 0; m < centres.length; m++) scaled += share[m + 1] * Math.exp(exponents[m] - largest);
-      const w = Math.exp(-largest) / scaled;
-      sumW += w;
-      sumW2 += w * w;
     }
+    drawn += size;
+    defensiveDrawn += counts[0];
+    if (drawn < total && failures > 0 && agreementShown(estimate(sumW, sumW2, drawn), formBeta)) break;
   }
-  const pf = sumW / total;
-  const variance = Math.max(0, sumW2 / total - pf * pf) / (total - 1);
-  const cov = pf > 0 ? Math.sqrt(variance) / pf : Infinity;
+  const { pf, cov } = estimate(sumW, sumW2, drawn);
   const beta = pf > 0 ? normalQuantileUpper(pf) : Infinity;
   const method = crude ? 'Monte Carlo' : 'importance sampling';
-  const what = `${method === 'Monte Carlo' ? 'a Monte Carlo' : 'an importance-sampling'} check (${total} samples, seed ${seed})`;
-  const formBeta = f.system.beta;
+  const what = `${method === 'Monte Carlo' ? 'a Monte Carlo' : 'an importance-sampling'} check (${drawn} samples, seed ${seed})`;
   if (failures === 0) {
     // common practice: zero failures in N independent samples bound p by 3/N at 95 % (rule of three)
-    const upperBound = Math.min(1, 3 / counts[0]);
+    const upperBound = Math.min(1, 3 / defensiveDrawn);
     const band: [number, number] = [crude ? normalQuantileUpper(upperBound) - BETA_TOLERANCE : Infinity, Infinity];
     const agrees = formBeta >= band[0];
     return {
-      method, pf, cov, beta, samples: total, failures, calls: G.calls(), seed, betaBand: band, agrees, upperBound,
+      method, pf, cov, beta, samples: drawn, failures, calls: G.calls(), seed, betaBand: band, agrees, upperBound,
       reason: agrees
         ? `FORM's β = ${formBeta.toFixed(2)} agrees with ${what}: no sample failed, so pf is below about ${upperBound.toPrecision(2)}.`
         : `FORM's β = ${formBeta.toFixed(2)} is not confirmed by ${what}: no sample failed, not even near its design point, so that point is not where failure is; pf is only known to be below about ${upperBound.toPrecision(2)}.`,
     };
   }
-  const s = Math.sqrt(Math.log1p(cov * cov));
-  const band: [number, number] = [
-    normalQuantileUpper(Math.min(1, pf * Math.exp(CHECK_SIGMAS * s))) - BETA_TOLERANCE,
-    normalQuantileUpper(pf * Math.exp(-CHECK_SIGMAS * s)) + BETA_TOLERANCE,
-  ];
+  const interval = statisticalInterval(pf, cov);
+  const band: [number, number] = [interval[0] - BETA_TOLERANCE, interval[1] + BETA_TOLERANCE];
   const agrees = formBeta >= band[0] && formBeta <= band[1];
   const upperBound = null;
   const checkText = `${what}: β = ${beta.toFixed(2)} (pf ${pf.toPrecision(3)}, CoV ${(100 * cov).toFixed(0)} %)`;
   return {
-    method, pf, cov, beta, samples: total, failures, calls: G.calls(), seed, betaBand: band, agrees, upperBound,
+    method, pf, cov, beta, samples: drawn, failures, calls: G.calls(), seed, betaBand: band, agrees, upperBound,
     reason: agrees
       ? `FORM's β = ${formBeta.toFixed(2)} agrees with ${checkText}.`
       : `FORM's β = ${formBeta.toFixed(2)} disagrees with ${checkText}; the gap exceeds ${CHECK_SIGMAS} standard deviations plus ${BETA_TOLERANCE} in β.`,
   };
+}
+
+function estimate(sumW: number, sumW2: number, count: number): { pf: number; cov: number } {
+  const pf = sumW / count;
+  const variance = Math.max(0, sumW2 / count - pf * pf) / (count - 1);
+  return { pf, cov: pf > 0 ? Math.sqrt(variance) / pf : Infinity };
+}
+
+/** β from pf · e^(±CHECK_SIGMAS·s), s the log-scale standard deviation: [low, high]. */
+function statisticalInterval(pf: number, cov: number): [number, number] {
+  const s = Math.sqrt(Math.log1p(cov * cov));
+  return [normalQuantileUpper(Math.min(1, pf * Math.exp(CHECK_SIGMAS * s))), normalQuantileUpper(pf * Math.exp(-CHECK_SIGMAS * s))];
+}
+
+/**
+ * Agreement shown before the budget is spent: the check's whole CHECK_SIGMAS interval in β lies
+ * within BETA_TOLERANCE of FORM's β. That says, at the confidence of the full check, that the true
+ * β is within the tolerance of FORM's, which is more than the full check's agreement (the two
+ * intervals merely overlap), so stopping here never lets through a FORM the full budget would have
+ * refuted for a reason beyond chance.
+ */
+function agreementShown(e: { pf: number; cov: number }, formBeta: number): boolean {
+  if (!(e.pf > 0 && Number.isFinite(e.cov))) return false;
+  const [low, high] = statisticalInterval(e.pf, e.cov);
+  return low >= formBeta - BETA_TOLERANCE && high <= formBeta + BETA_TOLERANCE;
 }
 
 /** The estimate to put against a target when the check governs: its pf, or its upper bound when nothing failed. */

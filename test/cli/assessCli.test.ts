@@ -98,3 +98,22 @@ describe('assess --studies and meta.calls (end to end)', () => {
     expect(bad.stderr.trim().split('\n')).toHaveLength(1);
   });
 });
+
+describe('assess: the default studies follow --methods (end to end)', () => {
+  it('--methods mc skips the FORM and costly studies with one line; --studies wins; the scenario default keeps all', async () => {
+    const base = ['assess', 'scenarios/braced-base-plate.yaml', '--json', '--samples', '2000', '--seed', '5'];
+    const mc = await runCli([...base, '--methods', 'mc']);
+    expect(mc.status, mc.stderr).toBe(0);
+    const j = JSON.parse(mc.stdout);
+    expect(j.meta.studies).toEqual(['tornado']);
+    expect(j.meta.calls.sobol).toBeUndefined();
+    expect(j.restraint).toBeUndefined();
+    const lines = mc.stderr.split('\n').filter((l) => l.includes('were skipped'));
+    expect(lines).toHaveLength(1);
+    expect(lines[0]).toContain('--studies');
+    const wins = await runCli([...base, '--methods', 'mc', '--studies', 'tornado,sobol']);
+    expect(wins.status, wins.stderr).toBe(0);
+    expect(JSON.parse(wins.stdout).meta.studies).toEqual(['tornado', 'sobol']);
+    expect(wins.stderr).not.toContain('were skipped');
+  });
+});

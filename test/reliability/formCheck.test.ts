@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { form } from '../../src/reliability/form.js';
-import { checkEstimate, checkForm, FORM_CHECK_SAMPLES } from '../../src/reliability/formCheck.js';
+import { checkEstimate, checkForm, FORM_CHECK_BATCH, FORM_CHECK_SAMPLES } from '../../src/reliability/formCheck.js';
 import { linearSum, symmetricKink } from '../../src/reliability/testProblems.js';
 import { normalPdf, normalSf } from '../../src/probability/normal.js';
 
@@ -32,6 +32,8 @@ describe('FORM with a gradient of unknown sign (g = c − u1 − k|u2|)', () => 
     const check = checkForm(problem, r, { seed: 4 });
     expect(check.agrees).toBe(false);
     expect(check.reason).toMatch(/disagrees/);
+    // a disagreement is never decided early: the check's estimate then replaces FORM's
+    expect(check.samples).toBe(FORM_CHECK_SAMPLES);
   });
 
   it('finds both design points and their series system gives the exact pf', () => {
@@ -69,8 +71,10 @@ describe('FORM self-check', () => {
     // source: docs/verification.md §R1c exact pf = Φ(−β) for the linear sum
     const exact = normalSf(3.5);
     expect(c.method).toBe('importance sampling');
-    expect(c.samples).toBe(FORM_CHECK_SAMPLES);
-    expect(c.calls).toBe(FORM_CHECK_SAMPLES);
+    // a clear agreement stops after a few batches, not at the budget
+    expect(c.samples % FORM_CHECK_BATCH).toBe(0);
+    expect(c.samples).toBeLessThanOrEqual(2 * FORM_CHECK_BATCH);
+    expect(c.calls).toBe(c.samples);
     expect(Math.abs(c.pf - exact)).toBeLessThanOrEqual(4 * c.cov * c.pf);
     expect(c.agrees).toBe(true);
     expect(c.betaBand[0]).toBeLessThan(3.5);
@@ -96,6 +100,31 @@ describe('FORM self-check', () => {
     expect(c.agrees).toBe(false);
     expect(c.upperBound).toBeCloseTo(3 / 800, 12);
     expect(checkEstimate(c).pf).toBe(c.upperBound);
+  });
+
+  it('sequential stopping still refutes a FORM β off by 0.25 (2.5 × the tolerance), at the full budget', () => {
+    // FORM's answer for g = 3.5 − Σu/2 checked against the same plane at 3.75: the design point is in the
+    // right direction, only β is wrong. source: docs/verification.md §R1c exact pf = Φ(−β) for the linear sum
+    const f = form(linearSum({ n: 4, beta: 3.5 }));
+    for (const seed of [1, 2, 3, 4, 5]) {
+      const c = checkForm(linearSum({ n: 4, beta: 3.75 }), f, { seed });
+      expect(c.agrees).toBe(false);
+      expect(c.samples).toBe(FORM_CHECK_SAMPLES);
+      expect(Math.abs(c.pf - normalSf(3.75))).toBeLessThanOrEqual(4 * c.cov * c.pf);
+    }
+  });
+
+  it('an early agreement is a sound one: the early estimate is within 4 standard errors and 0.1 in β of the exact', () => {
+    const problem = linearSum({ n: 4, beta: 3.5 });
+    const f = form(problem);
+    for (const seed of [11, 12, 13]) {
+      const early = checkForm(problem, f, { seed });
+      expect(early.samples).toBeLessThan(FORM_CHECK_SAMPLES);
+      expect(early.agrees).toBe(true);
+      // source: docs/verification.md §R1c exact pf = Φ(−β); the early estimate is within 4 of its standard errors
+      expect(Math.abs(early.pf - normalSf(3.5))).toBeLessThanOrEqual(4 * early.cov * early.pf);
+      expect(Math.abs(early.beta - 3.5)).toBeLessThanOrEqual(0.1);
+    }
   });
 
   it('is reproducible: same seed, same numbers', () => {

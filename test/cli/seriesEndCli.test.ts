@@ -36,7 +36,7 @@ describe('series end springs (end to end)', () => {
     expect(importance).toHaveProperty(['column.ends.bottom.series.connection']);
     expect(importance).toHaveProperty(['column.ends.bottom.series.foundation']);
     expect(Number.isFinite(d.reliability.form.beta)).toBe(true);
-    // hand value: k = 1/(1/2.5 + 1/8) MN·m/rad; R = k·5.6 m / (200 GPa × 15.4e6 mm⁴) = 3.4632035
+    // hand value, springs in series (common practice): k = 1/(1/2.5 + 1/8) MN·m/rad; R = k·5.6 m / (200 GPa × 15.4e6 mm⁴) = 3.4632035
     expect(d.check.restraint_ratio.bottom).toBeCloseTo(3.4632035, 6);
     const k = 1 / (1 / 2.5e6 + 1 / 8e6);
     expect(d.check.connection_moments.bottom).toBeCloseTo(k * d.check.connection_rotations.bottom, 6); // M = k·θ

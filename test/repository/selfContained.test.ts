@@ -13,7 +13,7 @@ const THIS_FILE = relative(ROOT, fileURLToPath(import.meta.url)).split(sep).join
 
 // The patterns are built from pieces so that this file does not match itself by accident.
 const SLASH = '/';
-/** An absolute home, work or temporary folder: `/work/…`, `/home/…`, `/root/…`, `/Users/…`, `/tmp/…`, `C:\Users\…`. */
+/** An absolute home, work or temporary folder of some machine (work, home, root, Users, tmp at the root) or a Windows user folder. */
 const MACHINE_PATH = new RegExp(
   String.raw`(?<![\w.~+/\\-])${SLASH}(?:work|home|root|Users|tmp)${SLASH}(?=[\w.-])|\b[A-Za-z]:\\(?:Users|home)\\`,
 );

@@ -113,7 +113,8 @@ export function checkOutFolder(dir: string, rules: OutFolderRules): 'absent' | '
     st = lstatSync(dir);
   } catch (e) {
     const code = (e as NodeJS.ErrnoException).code;
-    if (code === 'ENOENT' || code === 'ENOTDIR') return 'absent';
+    if (code === 'ENOENT') return 'absent'; // created with any missing parent folders when written
+    if (code === 'ENOTDIR') throw new InputError(field, `${dir}: a part of the path is a file, not a folder`);
     throw new InputError(field, `cannot inspect ${dir}: ${(e as Error).message}`);
   }
   if (!st.isDirectory()) {

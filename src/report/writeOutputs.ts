@@ -76,15 +76,29 @@ function isErrno(e: unknown, ...codes: string[]): boolean {
 
 /** Fail before the slow rendering when DIR cannot be created at all. */
 async function requireParentFolder(dir: string): Promise<void> {
-  const parent = dirname(dir);
-  const stat = await fsp.stat(parent).catch(() => null);
-  if (stat === null || !stat.isDirectory()) throw new InputError('--out', `the parent folder of ${dir} does not exist`);
+  // missing parents are created when the report is written (`--out out/c3` on a fresh clone);
+  // what must hold now is that the nearest existing one is a folder
+  let here = dirname(dir);
+  for (;;) {
+    const stat = await fsp.stat(here).catch((e: unknown) => (isErrno(e, 'ENOENT') ? null : e));
+    if (stat === null) {
+      const up = dirname(here);
+      if (up === here) throw new InputError('--out', `no folder on the path of ${dir} exists`);
+      here = up;
+      continue;
+    }
+    if (stat instanceof Error || !(stat as { isDirectory(): boolean }).isDirectory()) {
+      throw new InputError('--out', `${here} is not a folder, so ${dir} cannot be made inside it`);
+    }
+    return;
+  }
 }
 
 /**
  * Write the report into `outDir`. Throws InputError (field '--out') when checkOutFolder refuses
  * outDir (outputFolder.ts: only a stanchion output folder is ever replaced, and only with
- * `force`), or when its parent folder is missing or not writable; on any failure nothing is
+ * `force`), or when its path runs through a file or cannot be written (missing parent folders
+ * are created); on any failure nothing is
  * left behind and an existing outDir is untouched. Hidden leftovers of writers that died are
  * removed first (staleSiblings.ts).
  */
@@ -106,6 +120,7 @@ export async function writeOutputs(
   const temp = siblingFolderName(dir, 'partial');
   const release = holdTemporary(temp); // removed by the main thread if this thread is stopped hard
   try {
+    await fsp.mkdir(dirname(dir), { recursive: true });
     await fsp.mkdir(temp);
   } catch (e) {
     release();

@@ -168,9 +168,13 @@ describe('writeOutputs', () => {
     expect(readdirSync(root).filter((n) => n.includes('precious'))).toEqual(['precious']);
   });
 
-  it('reports a missing parent folder as a bad --out', async () => {
-    const err = await writeOutputs(join(root, 'no', 'such', 'dir'), input, result, fast).catch((e: unknown) => e);
+  it('creates missing parent folders, and refuses a path that runs through a file', async () => {
+    const written = await writeOutputs(join(root, 'no', 'such', 'dir'), input, result, fast);
+    expect(readdirSync(written.dir)).toContain('report.html');
+    writeFileSync(join(root, 'plain-file'), 'x');
+    const err = await writeOutputs(join(root, 'plain-file', 'dir'), input, result, fast).catch((e: unknown) => e);
     expect(err).toBeInstanceOf(InputError);
     expect((err as InputError).field).toBe('--out');
+    expect(readFileSync(join(root, 'plain-file'), 'utf8')).toBe('x');
   });
 });

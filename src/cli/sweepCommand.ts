@@ -42,7 +42,7 @@ import { parseVaryOption } from '../studies/varyOption.js';
 import { slurmArrayScript } from '../studies/arrayScript.js';
 import { isAutoShard, shardFromScheduler } from '../studies/schedulerShard.js';
 import { readScenarioText, readTextFileBounded } from './readScenarioText.js';
-import { checkFolderTarget } from './outputFolder.js';
+import { checkFolderTarget } from '../report/folderTarget.js';
 import { CAUTION } from './textTable.js';
 import { INLINE_RESULTS_LIMIT, REPORT_CASES_LIMIT } from './sweepDefinition.js';
 

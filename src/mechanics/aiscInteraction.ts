@@ -1,7 +1,7 @@
 import { aiscCapacity } from './aisc360.js';
 import { ECC_LENGTH, eccentricCoefficientsInto, maxAbsTwoSinusoids } from './beamColumn.js';
 import { brentRoot } from './brent.js';
-import type { EndRestraint, Frame } from './types.js';
+import type { EccentricColumn } from './eccentricFirstYield.js';
 
 /**
  * Members under flexure and axial compression, AISC 360-16 §H1.1 (Eqs. H1-1a/b, from memory), with no
@@ -22,19 +22,8 @@ export function aiscInteractionRatio(Pr: number, Pc: number, Mr: number, Mc: num
   return p >= 0.2 ? p + (8 / 9) * (Mr / Mc) : p / 2 + Mr / Mc;
 }
 
-/** Load-independent data of the H1-1 check of one column. */
-export interface AiscInteractionColumn {
-  A: number;
-  S: number;
-  fy: number;
-  EI: number;
-  L: number;
-  frame: Frame;
-  r: EndRestraint;
-  eB: number;
-  eT: number;
-  Pcr: number;
-}
+/** Load-independent data of the H1-1 check of one column: the eccentric column without its bow (P_n holds the imperfection). */
+export type AiscInteractionColumn = Omit<EccentricColumn, 'bow' | 'mode'>;
 
 /** Largest |M(x)| (N·m) over the height at P (0 < P < Pcr) under the end couples alone. scratch: ECC_LENGTH + 1. */
 export function secondOrderEndCoupleMoment(col: AiscInteractionColumn, P: number, scratch: Float64Array): number {

@@ -6,6 +6,7 @@
 import { promises as fsp } from 'node:fs';
 import { dirname, join, resolve } from 'node:path';
 import { InputError } from '../scenario/inputError.js';
+import { checkFolderTarget } from './folderTarget.js';
 import { throwIfInterrupted } from '../runtime/interruptFlag.js';
 import { holdTemporary } from '../runtime/temporaryPaths.js';
 import type { ReportInput } from './reportInput.js';
@@ -74,26 +75,6 @@ function isErrno(e: unknown, ...codes: string[]): boolean {
   return e instanceof Error && codes.includes((e as NodeJS.ErrnoException).code ?? '');
 }
 
-/** Fail before the slow rendering when DIR cannot be created at all. */
-async function requireParentFolder(dir: string): Promise<void> {
-  // missing parents are created when the report is written (`--out out/c3` on a fresh clone);
-  // what must hold now is that the nearest existing one is a folder
-  let here = dirname(dir);
-  for (;;) {
-    const stat = await fsp.stat(here).catch((e: unknown) => (isErrno(e, 'ENOENT') ? null : e));
-    if (stat === null) {
-      const up = dirname(here);
-      if (up === here) throw new InputError('--out', `no folder on the path of ${dir} exists`);
-      here = up;
-      continue;
-    }
-    if (stat instanceof Error || !(stat as { isDirectory(): boolean }).isDirectory()) {
-      throw new InputError('--out', `${here} is not a folder, so ${dir} cannot be made inside it`);
-    }
-    return;
-  }
-}
-
 /**
  * Write the report into `outDir`. Throws InputError (field '--out') when checkOutFolder refuses
  * outDir (outputFolder.ts: only a stanchion output folder is ever replaced, and only with
@@ -111,7 +92,8 @@ export async function writeOutputs(
   const dir = resolve(outDir);
   const rules = { force: options.force ?? false, inputFiles: options.inputFiles };
   checkOutFolder(outDir, rules);
-  await requireParentFolder(dir);
+  // before the slow rendering: the parent exists, or the nearest existing folder above it can hold it
+  checkFolderTarget(dirname(dir), '--out');
   const files = await renderReportFiles(input, resultJson, options);
   files.set(OUTPUT_MARKER, outputMarkerText({ command: input.meta.commandLine, version: input.meta.toolVersion, created: new Date().toISOString() }));
   const write = options.writeFile ?? ((p: string, d: string | Uint8Array) => fsp.writeFile(p, d));

@@ -5,10 +5,13 @@
  * Rates per core are samples per CPU second (process.cpuUsage here, time.process_time in
  * Python): on a shared machine, wall time measures the neighbours as much as the code.
  *
- * 1. floor: a bare loop g = R − S (lognormal R from ziggurat normals, Gumbel S by its inverse
- *    CDF) on the block generator, written out, nothing else;
- * 2. the kernel on the demo column (1 thread), and its ratio to the floor;
- * 3. numpy, tabulated φ and c: its rate per core, and the kernel's ratio to it;
+ * 1. floors: a bare loop g = R − S (lognormal R from ziggurat normals, Gumbel S by its inverse
+ *    CDF) on the block generator, written out, nothing else; and a loop that only draws the
+ *    demo's random numbers (7 normals and 1 uniform per sample, block-wise) and does nothing with them;
+ * 2. the kernel on the demo column (1 thread), and its ratio to each floor;
+ * 3. numpy, tabulated φ and c: its rate per core, and the kernel's ratio to it. Kernel and numpy
+ *    run alternately, ROUNDS times each, and each keeps its best round: on a shared machine the
+ *    best round is the one least disturbed by the neighbours, for both alike;
  * 4. whole processes on a 4e6-sample run with default settings: `stanchion assess --methods mc
  *    --samples 4e6 --json` against numpy solving the buckling equation per sample.
  * Lines 3 and 4 are skipped, saying so, where python3 or numpy is missing.
@@ -52,6 +55,21 @@ function bareFloor(samples: number): { cpu: number; failures: number } {
   return { cpu: cpuSeconds(c0), failures };
 }
 
+/** Draws only: per sample the demo's 7 standard normals and 1 uniform, block-wise, nothing computed from them. */
+function drawsOnlyFloor(samples: number): number {
+  const rng = new BlockRng(SEED, 0);
+  const z = new Float64Array(512);
+  const c0 = process.cpuUsage();
+  for (let done = 0; done < samples; done += 512) {
+    for (let v = 0; v < 7; v++) fillNormal(rng, z, 512);
+    rng.fillUniform(z, 512);
+  }
+  return cpuSeconds(c0);
+}
+
+/** Kernel and numpy alternate this many times; each keeps its best round. */
+const ROUNDS = 2;
+
 function numpyAvailable(): string | null {
   const r = spawnSync('python3', ['-c', 'import numpy'], { encoding: 'utf8' });
   if (r.error) return 'python3 not found';
@@ -81,24 +99,41 @@ export async function runKernelBench(opts: { root: string; recipe: ProblemRecipe
   const floorRate = floorSamples / floor.cpu;
   lines.push(`floor: bare loop g = R − S on block uniforms, 1 core: ${perSecond(floorSamples, floor.cpu)} per CPU second (pf ${(floor.failures / floorSamples).toExponential(3)})`);
 
+  drawsOnlyFloor(200_000);
+  const drawsCpu = drawsOnlyFloor(floorSamples);
+  const drawsRate = floorSamples / drawsCpu;
+  lines.push(`floor: draws only (7 ziggurat normals + 1 uniform per sample, nothing computed), 1 core: ${perSecond(floorSamples, drawsCpu)} per CPU second`);
+
   const problem = await loadRecipe(opts.recipe);
   await monteCarlo(problem, { samples: 262_144, seed: SEED + 1, workers: 1 });
   const kernelSamples = 2_000_000;
-  const c0 = process.cpuUsage();
-  const mc = await monteCarlo(problem, { samples: kernelSamples, seed: SEED, workers: 1 });
-  const kernelCpu = cpuSeconds(c0);
-  const kernelRate = kernelSamples / kernelCpu;
-  lines.push(`MC kernel, demo column, 1 core: ${perSecond(kernelSamples, kernelCpu)} per CPU second (pf ${mc.pf.toExponential(3)}), ${(kernelRate / floorRate).toFixed(2)} × floor`);
-
+  const kernelRound = async (): Promise<{ rate: number; pf: number }> => {
+    const c0 = process.cpuUsage();
+    const mc = await monteCarlo(problem, { samples: kernelSamples, seed: SEED, workers: 1 });
+    return { rate: kernelSamples / cpuSeconds(c0), pf: mc.pf };
+  };
   const missing = numpyAvailable();
-  if (missing !== null) {
-    lines.push(`numpy comparison skipped: ${missing}`);
+  const script = join(opts.root, 'bench', 'numpy_column_mc.py');
+  if (missing === null) runNumpy(script, 'tabulated', 100_000); // warm the file cache
+  let kernel = { rate: 0, pf: NaN };
+  let tab: NumpyRun | null = null;
+  for (let round = 0; round < ROUNDS; round++) {
+    const k = await kernelRound();
+    if (k.rate > kernel.rate) kernel = k;
+    if (missing !== null) continue;
+    const t = runNumpy(script, 'tabulated', kernelSamples).out;
+    if (tab === null || t.rate_per_cpu_second > tab.rate_per_cpu_second) tab = t;
+  }
+  const kernelRate = kernel.rate;
+  lines.push(
+    `MC kernel, demo column, 1 core, best of ${ROUNDS}: ${(kernelRate / 1e6).toFixed(2)} M/s per CPU second (pf ${kernel.pf.toExponential(3)}), ` +
+      `${(kernelRate / floorRate).toFixed(2)} × the R − S floor, ${(kernelRate / drawsRate).toFixed(2)} × the draws-only floor`,
+  );
+  if (missing !== null || tab === null) {
+    lines.push(`numpy comparison skipped: ${missing ?? 'no run'}`);
     return lines;
   }
-  const script = join(opts.root, 'bench', 'numpy_column_mc.py');
-  runNumpy(script, 'tabulated', 100_000); // warm the file cache
-  const tab = runNumpy(script, 'tabulated', kernelSamples).out;
-  lines.push(`numpy, same limit state with φ and c tabulated, 1 core: ${(tab.rate_per_cpu_second / 1e6).toFixed(2)} M/s per CPU second (pf ${tab.pf.toExponential(3)}); kernel / numpy = ${(kernelRate / tab.rate_per_cpu_second).toFixed(2)}`);
+  lines.push(`numpy, same limit state with φ and c tabulated, 1 core, best of ${ROUNDS}: ${(tab.rate_per_cpu_second / 1e6).toFixed(2)} M/s per CPU second (pf ${tab.pf.toExponential(3)}); kernel / numpy = ${(kernelRate / tab.rate_per_cpu_second).toFixed(2)}`);
 
   const cli = join(opts.root, 'dist', 'src', 'cli', 'main.js');
   const t = performance.now();

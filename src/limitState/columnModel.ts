@@ -10,17 +10,13 @@ import type { LoadCombination } from '../loads/loadCombinations.js';
 import { columnCapacity } from '../mechanics/columnCapacity.js';
 import { makeFastCapacityFromRatio } from '../mechanics/fastColumn.js';
 import type { ColumnState } from '../mechanics/types.js';
-import type { End, Scalar, Scenario } from '../scenario/types.js';
+import type { End, Scenario } from '../scenario/types.js';
 import { randomVariables } from '../scenario/variables.js';
 import { restraintRatio } from '../scenario/restraintRatio.js';
 import { flexibleComponents, seriesComponentPath, seriesStiffness } from '../scenario/seriesEnd.js';
 import { resolveStrengthModel, type ModelFactorUsed } from './strengthChoice.js';
-
-/** Where a value comes from: x[index] when random, else the fixed value. */
-interface Slot {
-  readonly index: number;
-  readonly value: number;
-}
+import { read, slotOf, type Slot } from './slots.js';
+import { makeColumnBlockG, type ColumnBlockG } from './columnBlock.js';
 
 export interface ColumnModel {
   /** the scenario as its strength model sees it (resolveStrengthModel): default model factor in, ignored bow out */
@@ -43,21 +39,12 @@ export interface ColumnModel {
   modelFactor(x: Float64Array): number;
   /** θ·capacity − demand */
   g(x: Float64Array): number;
+  /** g over a block of samples, bit-identical to g (columnBlock.ts); null where only g applies (eccentric loads, a lateral spring) */
+  readonly gBlock: ColumnBlockG | null;
   /** demand / (θ·capacity), as in `check` when x is the mean */
   utilization(x: Float64Array): number;
   /** everything the mechanics needs at x (allocates: not for hot loops) */
   state(x: Float64Array): ColumnState;
-}
-
-function slotOf(scalar: Scalar, path: string, names: readonly string[]): Slot {
-  if (scalar.kind === 'fixed') return { index: -1, value: scalar.value };
-  const index = names.indexOf(path);
-  if (index < 0) throw new Error(`random variable ${path} is missing from the variable list`);
-  return { index, value: NaN };
-}
-
-function read(slot: Slot, x: Float64Array): number {
-  return slot.index < 0 ? slot.value : x[slot.index];
 }
 
 /** An end as a function of (x, EI) → R = kL/EI. */
@@ -212,6 +199,12 @@ export function buildColumnModel(given: Scenario, combination: LoadCombination =
     return sum;
   };
   const modelFactor = (x: Float64Array): number => read(theta, x);
+  // built on first use: most models (sweep cases, studies) never sample in blocks
+  let block: ColumnBlockG | null = null;
+  const gBlock: ColumnBlockG | null = eccentric || !lateralAlwaysZero ? null : (columns, count, out) => {
+    block ??= makeColumnBlockG({ names, L, frame, strength, E, fy, A, I, S, bow, theta, loads, bottom: c.ends.bottom, top: c.ends.top, finiteMargin });
+    block(columns, count, out);
+  };
 
   return {
     scenario: s,
@@ -231,6 +224,7 @@ export function buildColumnModel(given: Scenario, combination: LoadCombination =
       const resistance = theta === 0 ? 0 : theta * capacity(x);
       return finiteMargin(finiteMargin(resistance) - finiteMargin(demand(x)));
     },
+    gBlock,
     utilization: (x) => demand(x) / (modelFactor(x) * capacity(x)),
     state,
   };

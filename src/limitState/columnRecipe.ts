@@ -21,6 +21,7 @@ export function problemFromModel(model: ColumnModel): ReliabilityProblem {
     names: model.names.slice(),
     transform: natafTransform(model.dists, model.correlation, model.names),
     g: model.g,
+    ...(model.gBlock ? { gBlock: { of: model.g, evaluate: model.gBlock } } : {}),
   };
 }
 

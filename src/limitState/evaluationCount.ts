@@ -9,6 +9,11 @@ export function noteEvaluation(): void {
   evaluations++;
 }
 
+/** n evaluations at once (the block limit state, columnBlock.ts). */
+export function noteEvaluations(n: number): void {
+  evaluations += n;
+}
+
 /** Evaluations in this thread so far; a study's calls are the difference across it. */
 export function evaluationsSoFar(): number {
   return evaluations;

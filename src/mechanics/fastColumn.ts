@@ -118,6 +118,11 @@ export function fastCurvatureFactor(frame: Frame, RBottom: number, RTop: number,
   return curvatureFactorFromExtrema(extrema);
 }
 
+/** Braced φ and c interleaved on one grid (built on first use; fastCapacityBlock.ts reads it too). */
+export function bracedFirstYieldTables(): FixityTablePair {
+  return bracedPair ?? (bracedPair = pairFixityTables(fastTable('braced'), bracedCurvatureTable()));
+}
+
 /** Capacity (N) from SI inputs; bow = e0 (either sign). */
 export type FastCapacity = (
   E: number, fy: number, A: number, I: number, S: number, L: number, bow: number, rBottom: number, rTop: number,
@@ -143,7 +148,7 @@ export function makeFastCapacityFromRatio(frame: Frame, model: StrengthModel): F
   if (model === 'first-yield') {
     if (frame === 'braced') {
       // φ and c from one pass over both tables (same values as fastPhi / fastCurvatureFactor).
-      const tables = bracedPair ?? (bracedPair = pairFixityTables(fastTable('braced'), bracedCurvatureTable()));
+      const tables = bracedFirstYieldTables();
       const pair = new Float64Array(2);
       return (E, fy, A, I, S, L, bow, RA, RB) => {
         if (!(RA >= 0) || !(RB >= 0)) throw new RangeError('restraint ratios must be >= 0');

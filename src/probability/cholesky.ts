@@ -43,3 +43,42 @@ export function lowerSolve(L: Float64Array, n: number, b: ArrayLike<number>, x: 
     x[i] = sum / L[row + i];
   }
 }
+
+/**
+ * L's nonzero entries row by row (CSR), for y = L x when most variables are independent (their
+ * rows are the identity): the same sums as lowerTimes with the zero terms left out.
+ */
+export interface SparseLower {
+  readonly n: number;
+  /** Entries of row i: start[i] … start[i + 1]. */
+  readonly start: Int32Array;
+  readonly column: Int32Array;
+  readonly value: Float64Array;
+}
+
+export function sparseLower(L: Float64Array, n: number): SparseLower {
+  const start = new Int32Array(n + 1);
+  const column: number[] = [];
+  const value: number[] = [];
+  for (let i = 0; i < n; i++) {
+    start[i] = column.length;
+    for (let k = 0; k <= i; k++) {
+      if (L[i * n + k] !== 0) {
+        column.push(k);
+        value.push(L[i * n + k]);
+      }
+    }
+  }
+  start[n] = column.length;
+  return { n, start, column: Int32Array.from(column), value: Float64Array.from(value) };
+}
+
+/** y = L x over the nonzero entries only (equal to lowerTimes up to the sign of a zero). */
+export function sparseLowerTimes(L: SparseLower, x: ArrayLike<number>, y: Float64Array): void {
+  const { n, start, column, value } = L;
+  for (let i = 0; i < n; i++) {
+    let sum = 0;
+    for (let e = start[i]; e < start[i + 1]; e++) sum += value[e] * x[column[e]];
+    y[i] = sum;
+  }
+}

@@ -5,7 +5,7 @@
  * from equivalentCorrelation.ts). Both directions use preallocated buffers: no allocation
  * per call, so they can sit in a sampling loop.
  */
-import { choleskyLower, lowerSolve, lowerTimes } from './cholesky.js';
+import { choleskyLower, lowerSolve, sparseLower, sparseLowerTimes } from './cholesky.js';
 import { DistributionError, type Distribution } from './distribution.js';
 import { equivalentCorrelation } from './equivalentCorrelation.js';
 
@@ -97,9 +97,11 @@ export function natafTransform(
     );
   }
   const z = new Float64Array(n);
-  const toPhysical = lower
+  // independent variables have identity rows in L₀: skip the zeros (hot in the FORM self-check)
+  const sparse = lower ? sparseLower(lower, n) : null;
+  const toPhysical = sparse
     ? (u: Float64Array, x: Float64Array): void => {
-        lowerTimes(lower, n, u, z);
+        sparseLowerTimes(sparse, u, z);
         for (let i = 0; i < n; i++) x[i] = marginals[i].fromStandardNormal(z[i]);
       }
     : (u: Float64Array, x: Float64Array): void => {

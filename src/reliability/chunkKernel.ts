@@ -4,7 +4,8 @@
  * with the block generator (probability/blockRng.ts, ziggurat normals), in blocks of
  * BLOCK_SIZE samples; the Ctrl-C flag is looked at once per block.
  *
- * 'mc': x drawn column-wise by blockSampler.ts (same law as x = T(u), u ~ N(0, I)), counts g <= 0.
+ * 'mc': x drawn column-wise by blockSampler.ts (same law as x = T(u), u ~ N(0, I)), counts g <= 0;
+ *       g of a whole block at once when the problem has a block form (types.ts BlockLimitState).
  * 'is': u = c + z, z ~ N(0, I) (standard normal shifted to the centre c, usually the FORM
  *       design point); weight φ(u)/φ(u − c) = exp(−z·c − c·c/2); sums the weighted indicator
  *       and its square.
@@ -12,7 +13,7 @@
 import { BlockRng } from '../probability/blockRng.js';
 import { fillNormal } from '../probability/ziggurat.js';
 import { BLOCK_SIZE, makeBlockSampler } from './blockSampler.js';
-import type { ReliabilityProblem } from './types.js';
+import type { BlockLimitState, ReliabilityProblem } from './types.js';
 import { describeThrown, isFiniteNumber } from './limitStateError.js';
 import { interruptRequested } from '../runtime/interruptFlag.js';
 
@@ -60,6 +61,9 @@ export function makeChunkKernel(problem: ReliabilityProblem, spec: SamplingSpec)
   const g = problem.g;
   if (spec.kind === 'mc') {
     const { columns, fill } = makeBlockSampler(problem.transform);
+    // the block form only while it belongs to this g (a copy of the problem with another g must not use it)
+    const block = problem.gBlock !== undefined && problem.gBlock.of === g ? problem.gBlock : null;
+    const gOut = new Float64Array(BLOCK_SIZE);
     return (job) => {
       const rng = new BlockRng(spec.seed, spec.streamBase + job.index);
       let failures = 0;
@@ -70,6 +74,19 @@ export function makeChunkKernel(problem: ReliabilityProblem, spec: SamplingSpec)
           if (interruptRequested()) return stopped(job, start);
           const count = Math.min(BLOCK_SIZE, job.count - start);
           fill(rng, count);
+          if (block !== null && blockOf(block, columns, count, gOut)) {
+            for (let b = 0; b < count; b++) {
+              v = gOut[b];
+              if (!(v > 0 && v < Infinity)) {
+                if (!isFiniteNumber(v)) {
+                  for (let i = 0; i < n; i++) x[i] = columns[i][b];
+                  return faulted(job, x, v, undefined, start + b);
+                }
+                failures++;
+              }
+            }
+            continue;
+          }
           for (let b = 0; b < count; b++) {
             s = start + b;
             for (let i = 0; i < n; i++) x[i] = columns[i][b];
@@ -130,6 +147,16 @@ export function makeChunkKernel(problem: ReliabilityProblem, spec: SamplingSpec)
     }
     return { index: job.index, count: job.count, failures, sumW, sumW2 };
   };
+}
+
+/** g of the whole block into out; false when the block form threw (that block is then done one sample at a time, which names the sample). */
+function blockOf(block: BlockLimitState, columns: readonly Float64Array[], count: number, out: Float64Array): boolean {
+  try {
+    block.evaluate(columns, count, out);
+    return true;
+  } catch {
+    return false;
+  }
 }
 
 function stopped(job: ChunkJob, s: number): ChunkOutcome {

@@ -21,7 +21,7 @@
 import { normalQuantileUpper, normalSf } from '../probability/normal.js';
 import { BlockRng } from '../probability/blockRng.js';
 import { fillNormal } from '../probability/ziggurat.js';
-import { checkedLimitState } from './checkedLimitState.js';
+import { batchLimitState } from './batchLimitState.js';
 import { FORM_CHECK_STREAM_BASE } from './streams.js';
 import type { FormResult, ReliabilityProblem } from './types.js';
 
@@ -73,7 +73,7 @@ export function checkForm(problem: ReliabilityProblem, f: FormResult, opts: Form
   const total = opts.samples ?? FORM_CHECK_SAMPLES;
   const seed = opts.seed ?? FORM_CHECK_SEED;
   if (!(Number.isInteger(total) && total >= 100)) throw new Error(`checkForm: samples must be an integer >= 100, got ${total}`);
-  const G = checkedLimitState(problem, 'FORM check');
+  const G = batchLimitState(problem, 'FORM check', FORM_CHECK_BATCH);
   const crude = f.originFails || !(f.system.beta > 0) || f.system.pf >= LARGE_PF || !f.converged;
   const centres = crude ? [] : f.system.designPoints.map((p) => Float64Array.from(p.designPointU));
   const halfSquare = centres.map((c) => 0.5 * c.reduce((s, v) => s + v * v, 0));
@@ -90,7 +90,8 @@ export function checkForm(problem: ReliabilityProblem, f: FormResult, opts: Form
     }
     return block[next++];
   };
-  const u = new Float64Array(n);
+  const uRows = new Float64Array(FORM_CHECK_BATCH * n);
+  const gRows = new Float64Array(FORM_CHECK_BATCH);
   const exponents = new Float64Array(centres.length);
   let sumW = 0;
   let sumW2 = 0;
@@ -103,26 +104,32 @@ export function checkForm(problem: ReliabilityProblem, f: FormResult, opts: Form
     // shares, which keeps each batch, and so their sum, unbiased.
     const counts = allocate(size, pfs);
     const share = counts.map((c) => c / size);
+    // the batch's points in drawing order (component by component), then g over all of them
+    let rows = 0;
     for (let k = 0; k < counts.length; k++) {
-      for (let j = 0; j < counts[k]; j++) {
-        const c = k === 0 ? null : centres[k - 1];
-        for (let i = 0; i < n; i++) u[i] = draw() + (c ? c[i] : 0);
-        if (G(u) > 0) continue;
-        failures++;
-        // φ(u)/q(u) = 1 / (w0 + Σ w_i exp(u·c_i − |c_i|²/2)), summed without overflow.
-        let largest = 0;
-        for (let m = 0; m < centres.length; m++) {
-          let d = 0;
-          for (let i = 0; i < n; i++) d += u[i] * centres[m][i];
-          exponents[m] = d - halfSquare[m];
-          if (exponents[m] > largest) largest = exponents[m];
-        }
-        let scaled = share[0] * Math.exp(-largest);
-        for (let m = 0; m < centres.length; m++) scaled += share[m + 1] * Math.exp(exponents[m] - largest);
-        const w = Math.exp(-largest) / scaled;
-        sumW += w;
-        sumW2 += w * w;
+      const c = k === 0 ? null : centres[k - 1];
+      for (let j = 0; j < counts[k]; j++, rows++) {
+        for (let i = 0; i < n; i++) uRows[rows * n + i] = draw() + (c ? c[i] : 0);
       }
+    }
+    G.evaluate(uRows, rows, gRows);
+    for (let r = 0; r < rows; r++) {
+      if (gRows[r] > 0) continue;
+      const u = uRows.subarray(r * n, r * n + n);
+      failures++;
+      // φ(u)/q(u) = 1 / (w0 + Σ w_i exp(u·c_i − |c_i|²/2)), summed without overflow.
+      let largest = 0;
+      for (let m = 0; m < centres.length; m++) {
+        let d = 0;
+        for (let i = 0; i < n; i++) d += u[i] * centres[m][i];
+        exponents[m] = d - halfSquare[m];
+        if (exponents[m] > largest) largest = exponents[m];
+      }
+      let scaled = share[0] * Math.exp(-largest);
+      for (let m = 0; m < centres.length; m++) scaled += share[m + 1] * Math.exp(exponents[m] - largest);
+      const w = Math.exp(-largest) / scaled;
+      sumW += w;
+      sumW2 += w * w;
     }
     drawn += size;
     defensiveDrawn += counts[0];

@@ -8,11 +8,24 @@ import type { IsoTransform } from '../probability/nataf.js';
 /** Failure is g(x) <= 0. Must not keep a reference to x (the array is reused). */
 export type LimitState = (x: Float64Array) => number;
 
+/**
+ * g over a block of samples: out[b] = of(x_b) for b < count, x_b[i] = columns[i][b], bit-identical
+ * to the one-sample `of` (Monte Carlo uses it in column-wise passes). It may throw where `of` would
+ * not (the kernel then evaluates that block with `of`, sample by sample).
+ */
+export interface BlockLimitState {
+  /** The one-sample limit state this block form equals; used only while it is the problem's g. */
+  readonly of: LimitState;
+  evaluate(columns: readonly Float64Array[], count: number, out: Float64Array): void;
+}
+
 export interface ReliabilityProblem {
   /** One name per physical variable, in the order of x. */
   names: string[];
   transform: IsoTransform;
   g: LimitState;
+  /** Optional block form of g (see BlockLimitState). */
+  gBlock?: BlockLimitState;
 }
 
 /**

@@ -31,6 +31,20 @@ const NAME = /[A-Za-zµΩ°_][A-Za-z0-9µΩ°_]*/g;
  * Throws ExpressionError with a message meant for the user (the caller adds the path).
  */
 export function readQuantity(text: string, kind: QuantityKind, columnLength?: number): Quantity {
+  // a sweep reads the same strings for every case: a pure function of its arguments, so remember results
+  const key = `${kind}\u0000${columnLength ?? ''}\u0000${text}`;
+  const known = remembered.get(key);
+  if (known !== undefined) return known;
+  const q = readQuantityOnce(text, kind, columnLength);
+  if (remembered.size >= REMEMBERED_MAX) remembered.clear();
+  remembered.set(key, q);
+  return q;
+}
+
+const REMEMBERED_MAX = 4096;
+const remembered = new Map<string, Quantity>();
+
+function readQuantityOnce(text: string, kind: QuantityKind, columnLength?: number): Quantity {
   const info = KINDS[kind];
   const expected = `expected ${info.noun} (e.g. ${info.example})`;
   const accepted = acceptedUnitsPhrase(kind, info.noun);

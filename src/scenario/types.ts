@@ -213,6 +213,8 @@ export interface EvidenceRecord {
   readonly prior: DistSpec;
   /** one line: which update was made */
   readonly method: string;
+  /** the distribution these tests gave, when a later update (measurements on the structure) replaced it in the Scalar */
+  readonly result?: DistSpec;
 }
 
 export interface RandomVariable {

@@ -23,6 +23,8 @@ import { buildColumnModel, type ColumnModel } from '../limitState/columnModel.js
 import { measuredReading, predictedReading } from '../limitState/measurementModel.js';
 import { describePath, quantityKindOf } from '../limitState/quantityKind.js';
 import { withScalar } from '../limitState/scenarioEdits.js';
+import { countEvaluations } from '../limitState/evaluationCount.js';
+import { scenarioForm } from './columnForm.js';
 import { DistributionError, type DistSpec, type Distribution } from '../probability/distribution.js';
 import { natafTransform } from '../probability/nataf.js';
 import type { QuantityKind } from '../report/reportInput.js';
@@ -295,6 +297,9 @@ export function updateScenarioWithEvidence(
       ess: diag.ess,
     });
     next = withScalar(next, path, { kind: 'random', spec: fitted });
+    const tests = next.evidence?.[path];
+    // the test results' own update stays on record (the report shows it) while the Scalar moves on
+    if (tests) next = { ...next, evidence: { ...next.evidence, [path]: { ...tests, result: spec } } };
   }
 
   // correlations: prior entries outside the updated set stay; inside it they come from the draws
@@ -379,4 +384,73 @@ function randomSpec(s: Scenario, path: string): DistSpec {
 function buildAndTransform(s: Scenario): void {
   const m = buildColumnModel(s);
   natafTransform(m.dists, m.correlation, m.names);
+}
+
+/** The update and FORM β (series system of design points) of the scenario before and after it. */
+export interface MeasurementUpdateResult {
+  summary: MeasurementUpdateSummary;
+  betaPrior: number;
+  betaPosterior: number;
+  /** limit-state calls of the two FORM runs */
+  formCalls: number;
+}
+
+/**
+ * updateScenarioWithEvidence plus β before and after by FORM on both scenarios (like for like;
+ * the assessment of the updated scenario then runs every method asked for). Null without measurements.
+ */
+export function measurementUpdate(scenario: Scenario, seed: number, options: MeasurementUpdateOptions = {}): { scenario: Scenario; result: MeasurementUpdateResult } | null {
+  const { scenario: updated, summary } = updateScenarioWithEvidence(scenario, seed, options);
+  if (summary === null) return null;
+  const { measurements: _unused, ...prior } = scenario;
+  const before = countEvaluations(() => scenarioForm(prior));
+  const after = countEvaluations(() => scenarioForm(updated));
+  return {
+    scenario: updated,
+    result: { summary, betaPrior: before.result.beta, betaPosterior: after.result.beta, formCalls: before.calls + after.calls },
+  };
+}
+
+/** `evidence_update` of result.json (docs/json-output.md); SI. */
+export function measurementUpdateJson(r: MeasurementUpdateResult): unknown {
+  const s = r.summary;
+  const moments = (m: Moments) => ({ mean: m.mean, sd: m.sd, fractile_05: m.q05, fractile_95: m.q95 });
+  return {
+    method: s.method,
+    seed: s.seed,
+    beta_prior: r.betaPrior,
+    beta_posterior: r.betaPosterior,
+    beta_method: 'FORM (series system of design points) on the scenario before and after the update',
+    measurements: s.measurements.map((m) => ({
+      item: m.index,
+      type: m.type,
+      unit: m.unit,
+      measured: m.measured,
+      predicted_prior_means: m.predictedPrior,
+      predicted_posterior_means: m.predictedPosterior,
+      measurement_cov: m.measurementCov,
+      source: m.source ?? null,
+    })),
+    variables: s.variables.map((v) => ({
+      variable: v.path,
+      prior: { dist: v.prior.distribution, ...moments(v.prior) },
+      posterior: moments(v.posterior),
+      fitted: v.fitted,
+      rhat: v.rhat,
+      ess: v.ess,
+    })),
+    correlations: s.correlations.map((c) => ({ a: c.a, b: c.b, rho: c.rho })),
+    diagnostics: {
+      chains: s.chains,
+      warmup: s.warmup,
+      draws_per_chain: s.draws,
+      likelihood_calls: s.calls,
+      acceptance: s.acceptance,
+      max_rhat: s.maxRhat,
+      min_ess: s.minEss,
+      converged: s.converged,
+    },
+    approximation: s.approximation,
+    notes: s.notes,
+  };
 }

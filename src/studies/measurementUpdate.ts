@@ -109,6 +109,8 @@ export interface MeasurementUpdate {
   summary: MeasurementUpdateSummary;
 }
 
+/** A reading farther than this many measurement sds (ln scale) from the model at the posterior means is refused. */
+const CONFLICT_SIGMAS = 4;
 /** Posterior correlations smaller than this are not carried. */
 const CORRELATION_FLOOR = 0.05;
 /** A correlation the prior did not have is carried only beyond this many sds of sampling noise. */
@@ -347,6 +349,19 @@ export function updateScenarioWithEvidence(
     measurementCov: m.measurementCov,
     ...(m.source !== undefined ? { source: m.source } : {}),
   }));
+  // a reading the posterior still cannot come near is a conflict with the scenario, not evidence;
+  // the worst one is named (the others may only have been dragged along by it)
+  const misfit = rows.map((r, i) => Math.abs(Math.log(r.measured / r.predictedPosterior) / logSd[i]));
+  const worst = misfit.reduce((w, z, i) => (!(z <= misfit[w]) ? i : w), 0);
+  if (!(misfit[worst] <= CONFLICT_SIGMAS)) {
+    const m = measurements[worst];
+    const r = rows[worst];
+    const show = (v: number) => (m.type === 'rotation_test' ? `${(v * 1e3).toPrecision(4)} mrad` : `${v.toPrecision(4)} Hz`);
+    throw new InputError(
+      `${fieldOf(m)}.${m.type === 'rotation_test' ? 'rotation' : 'value'}`,
+      `the reading ${show(r.measured)} is in conflict with the scenario: even after updating, the model gives ${show(r.predictedPosterior)} (${misfit[worst].toFixed(0)} measurement sds away); check the reading, its units${m.type === 'frequency' ? ', the axial load and the mass per length' : ' and the moment'}, and the distributions of the column's values`,
+    );
+  }
   const maxRhat = Math.max(...variables.map((v) => v.rhat));
   const minEss = Math.min(...variables.map((v) => v.ess));
   const converged = maxRhat < RHAT_LIMIT && minEss >= ESS_MINIMUM;

@@ -26,11 +26,11 @@ export interface RestraintOptions {
 export async function runRestraint(file: string, opts: RestraintOptions): Promise<void> {
   const { text, fileName } = readScenarioText(file);
   const loaded = loadScenario(text, fileName);
+  if (opts.out) checkOutFolder(opts.out, { force: opts.force ?? false, inputFiles: [file] }); // before the study; checked again when written
   const seed = loaded.analysis.seed ?? DEFAULT_SEED;
   // measurements on the structure update the variables before the study (docs/evidence.md §5)
   const scenario = updateScenarioWithEvidence(loaded, seed).scenario;
   if (loaded.measurements?.length) process.stderr.write(`stanchion: the scenario's ${loaded.measurements.length} measurement(s) updated its variables before the study (assess shows the update)\n`);
-  if (opts.out) checkOutFolder(opts.out, { force: opts.force ?? false, inputFiles: [file] }); // before the study; checked again when written
   const system = opts.units ?? scenario.displayUnits;
   const r = await columnRestraint(scenario, { end: opts.end, units: system, method: opts.method, designAlpha: opts.designAlpha, governing: governingAssessor(seed) });
   const writeReport = async (): Promise<void> => {

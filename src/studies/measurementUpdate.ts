@@ -299,6 +299,10 @@ export function updateScenarioWithEvidence(
       ess: diag.ess,
     });
     next = withScalar(next, path, { kind: 'random', spec: fitted });
+    // the source note follows the variable: it is now the posterior, not what was written
+    const written = scenario.sources?.[path];
+    const items = measurements.map(fieldOf).join(', ');
+    next = { ...next, sources: { ...next.sources, [path]: `updated by the measurements ${items} (posterior fit)${written ? `; before: ${written}` : ''}` } };
     const tests = next.evidence?.[path];
     // the test results' own update stays on record (the report shows it) while the Scalar moves on
     if (tests) next = { ...next, evidence: { ...next.evidence, [path]: { ...tests, result: spec } } };

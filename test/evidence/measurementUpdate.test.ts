@@ -127,3 +127,23 @@ describe('bad measurements get one message naming the field', () => {
     expect(json.evidence_update.variables.map((v) => v.variable)).toContain('column.ends.top.rotation');
   });
 });
+
+describe('a rotation test of an end given as a fixity factor', () => {
+  it('updates the fixity factor as a beta on [0, 1] and moves it toward the reading', () => {
+    // common practice: k = R·EI/L with R = 3X/(1 − X) (docs/scenario-format.md); the reading implies X_read, and the
+    // posterior mean must lie between the prior mean and X_read, inside [0, 1]
+    const text = scenarioWith(ROTATION_TEST, '    bottom: {fixity: {dist: beta, min: 0, max: 1, mean: 0.3, sd: 0.15}}');
+    const s = loadScenario(text, 'measured.yaml');
+    const { scenario, summary } = updateScenarioWithEvidence(s, 9);
+    const v = summary!.variables.find((r) => r.path === 'column.ends.bottom.fixity')!;
+    expect(v.fitted.dist).toBe('beta');
+    const EI = 200e9 * 15.4e-6;
+    const R = (20e3 / 12e-3) * 5.6 / EI;
+    const xRead = R / (R + 3);
+    expect(v.posterior.mean).toBeGreaterThan(Math.min(0.3, xRead));
+    expect(v.posterior.mean).toBeLessThan(Math.max(0.3, xRead));
+    expect(v.posterior.q05).toBeGreaterThanOrEqual(0);
+    expect(v.posterior.q95).toBeLessThan(1);
+    expect(scenario.sources?.['column.ends.bottom.fixity']).toMatch(/updated by the measurements evidence\[0\]/);
+  });
+});

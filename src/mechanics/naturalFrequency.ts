@@ -114,7 +114,7 @@ export function frequencyDeterminant(lambda: number, p: Float64Array): number {
 const SCAN: Float64Array = (() => {
   const t: number[] = [];
   for (let k = 12; k >= 2; k--) t.push(LAMBDA_MAX * Math.pow(10, -k));
-  for (let i = 1; i <= 256; i++) t.push((LAMBDA_MAX * i) / 256);
+  for (let i = 1; i <= 64; i++) t.push((LAMBDA_MAX * i) / 64);
   return Float64Array.from(t);
 })();
 

@@ -9,7 +9,8 @@ const rel = (a: number, b: number): number => Math.abs(a - b) / Math.abs(b);
 describe('first natural frequency of the restrained column: ideal ends', () => {
   // source: Blevins, Formulas for Natural Frequency and Mode Shape, 1979, Table 8-1 (λ₁ of the
   // uniform beam: pinned–pinned π, clamped–clamped 4.73004074, clamped–free 1.87510407,
-  // clamped–pinned 3.92660231, clamped–guided 2.36502037); also Timoshenko, Young & Weaver 1974 §5.3–5.4
+  // clamped–pinned 3.92660231, clamped–guided 2.36502037), from memory; the digits computed two ways [V],
+  // docs/verification.md §M4c
   it.each([
     ['braced', { bottom: 0, top: 0 }, Math.PI],
     ['braced', { bottom: Infinity, top: Infinity }, 4.73004074],
@@ -30,7 +31,8 @@ describe('first natural frequency of the restrained column: ideal ends', () => {
   });
 
   it('pinned ends under axial load: ω²(P) = ω₀²(1 − P/Pcr)', () => {
-    // source: Timoshenko, Young & Weaver, Vibration Problems in Engineering, 4th ed., 1974, §5.12 (beam with axial force)
+    // source: Timoshenko, Young & Weaver, Vibration Problems in Engineering, 4th ed., 1974, §5.12 (beam with axial force), from memory;
+    // docs/verification.md §M4c
     const EI = 1e7;
     const L = 5;
     const m = 80;

@@ -14,7 +14,7 @@
  *    the scenario (Nataf). This keeps the posterior's first two moments and its linear dependence,
  *    not its full shape: the approximation is stated in the summary.
  */
-import { samplePosterior } from '../evidence/adaptiveMetropolis.js';
+import { samplePosterior, type PosteriorDraws } from '../evidence/adaptiveMetropolis.js';
 import { chainDiagnostics } from '../evidence/chainDiagnostics.js';
 import { EvidenceError } from '../evidence/evidenceError.js';
 import { drawMoments, fitPosteriorMarginal } from '../evidence/posteriorMarginal.js';
@@ -247,7 +247,7 @@ export function updateScenarioWithEvidence(
     transform.toPhysical(u, x);
     return logLikelihoodAt(x);
   };
-  let posterior;
+  let posterior: PosteriorDraws;
   try {
     posterior = samplePosterior(active.length, logLikelihood, { seed, chains, warmup, draws });
   } catch (e) {

@@ -3,6 +3,7 @@
  * floor measured in the same run (ratios, because the machines are shared and noisy).
  * `npm run bench -- valid [COUNT] [SEED]` instead runs generated valid scenarios through every
  * method and study and counts results, input errors and internal errors (bench/validBench.ts).
+ * `npm run bench -- measurements`: frequency solves and the posterior of a scenario with measurements.
  */
 import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
@@ -12,6 +13,7 @@ import { runReliabilityBench } from './reliabilityBench.js';
 import { runSweepBench } from './sweepBench.js';
 import { runValidBench } from './validBench.js';
 import { runKernelBench } from './kernelBench.js';
+import { runMeasurementBench } from './measurementBench.js';
 import { runSweepCostBench } from './sweepCostBench.js';
 import { runFormCallsBench, runStartupBench } from './startupBench.js';
 import { loadRecipe } from '../src/reliability/loadRecipe.js';
@@ -38,6 +40,12 @@ async function main(): Promise<void> {
     const seed = Number(process.argv[4] ?? 1);
     console.log(`\n## valid scenarios (bench/validScenarios.ts)`);
     for (const line of await runValidBench(count, seed)) console.log(line);
+    return;
+  }
+  if (process.argv[2] === 'measurements') {
+    // `node dist/bench/run.js measurements`: frequency solves and the posterior of the demo with measurements
+    console.log('\n## measurements on the structure (docs/evidence.md §5)');
+    for (const line of runMeasurementBench(join(root, 'scenarios', 'measured-shed-column.yaml'))) console.log(line);
     return;
   }
   if (process.argv[2] === 'cost') {

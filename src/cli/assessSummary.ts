@@ -1,4 +1,5 @@
 /** The human summary of `stanchion assess` for the terminal. */
+import { measurementLines } from './measurementLines.js';
 import { STUDY_NAMES } from '../studies/studyNames.js';
 import type { Assessment } from '../studies/columnAssessment.js';
 import { formatBeta, formatProbability, formatQuantity, type UnitSystem } from '../report/displayUnits.js';
@@ -133,6 +134,7 @@ export function formatAssessment(a: Assessment, system: UnitSystem): string {
   lines.push(targetLine(a));
   lines.push(`  ${modelFactorLine(a)}`);
   if (a.scenario.evidence) lines.push(...evidenceLines(evidenceRows(a.scenario), system));
+  if (a.measurementUpdate) lines.push(...measurementLines(a.measurementUpdate, system));
   lines.push('');
   const combos = a.combinations;
   if (combos) lines.push(...combinationLines(a));

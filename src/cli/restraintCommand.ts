@@ -4,6 +4,7 @@ import type { DesignAlphaChoice } from '../studies/restraintRequirement.js';
 import { formatBeta, formatQuantity, type UnitSystem } from '../report/displayUnits.js';
 import { readScenarioText } from './readScenarioText.js';
 import { assessColumn, DEFAULT_SEED, governingAssessor } from '../studies/columnAssessment.js';
+import { updateScenarioWithEvidence } from '../studies/measurementUpdate.js';
 import { assessmentJson } from '../studies/assessmentJson.js';
 import { assessmentReportInput } from '../studies/assessmentReport.js';
 import { checkOutFolder } from '../report/outputFolder.js';
@@ -24,10 +25,13 @@ export interface RestraintOptions {
 
 export async function runRestraint(file: string, opts: RestraintOptions): Promise<void> {
   const { text, fileName } = readScenarioText(file);
-  const scenario = loadScenario(text, fileName);
+  const loaded = loadScenario(text, fileName);
   if (opts.out) checkOutFolder(opts.out, { force: opts.force ?? false, inputFiles: [file] }); // before the study; checked again when written
+  const seed = loaded.analysis.seed ?? DEFAULT_SEED;
+  // measurements on the structure update the variables before the study (docs/evidence.md §5)
+  const scenario = updateScenarioWithEvidence(loaded, seed).scenario;
+  if (loaded.measurements?.length) process.stderr.write(`stanchion: the scenario's ${loaded.measurements.length} measurement(s) updated its variables before the study (assess shows the update)\n`);
   const system = opts.units ?? scenario.displayUnits;
-  const seed = scenario.analysis.seed ?? DEFAULT_SEED;
   const r = await columnRestraint(scenario, { end: opts.end, units: system, method: opts.method, designAlpha: opts.designAlpha, governing: governingAssessor(seed) });
   const writeReport = async (): Promise<void> => {
     if (!opts.out) return;

@@ -1,4 +1,4 @@
-import { elasticStiffness, geometricStiffness } from './hermiteBeamElement.js';
+import { consistentMass, elasticStiffness, geometricStiffness } from './hermiteBeamElement.js';
 
 export type FeFrame = 'braced' | 'sway';
 
@@ -16,6 +16,8 @@ export interface ColumnMatrices {
   K: Float64Array;
   /** geometric stiffness per unit P L²/EI, reduced likewise */
   Kg: Float64Array;
+  /** consistent mass per unit mass per length (m = 1), reduced likewise */
+  M: Float64Array;
   /** the full-model DOF (2·node + 0 for w, + 1 for θ) of each reduced row */
   keep: number[];
 }
@@ -34,14 +36,17 @@ export function assembleColumn(frame: FeFrame, r: FeRestraint, elements: number)
   const h = 1 / elements;
   const ke = elasticStiffness(h);
   const kg = geometricStiffness(h);
+  const me = consistentMass(h);
   const Kf = new Float64Array(N * N);
   const Gf = new Float64Array(N * N);
+  const Mf = new Float64Array(N * N);
   for (let el = 0; el < elements; el++) {
     const o = 2 * el;
     for (let i = 0; i < 4; i++) {
       for (let j = 0; j < 4; j++) {
         Kf[(o + i) * N + o + j] += ke[i * 4 + j];
         Gf[(o + i) * N + o + j] += kg[i * 4 + j];
+        Mf[(o + i) * N + o + j] += me[i * 4 + j];
       }
     }
   }
@@ -60,11 +65,13 @@ export function assembleColumn(frame: FeFrame, r: FeRestraint, elements: number)
   const n = keep.length;
   const K = new Float64Array(n * n);
   const Kg = new Float64Array(n * n);
+  const M = new Float64Array(n * n);
   for (let i = 0; i < n; i++) {
     for (let j = 0; j < n; j++) {
       K[i * n + j] = Kf[keep[i] * N + keep[j]];
       Kg[i * n + j] = Gf[keep[i] * N + keep[j]];
+      M[i * n + j] = Mf[keep[i] * N + keep[j]];
     }
   }
-  return { n, K, Kg, keep };
+  return { n, K, Kg, M, keep };
 }

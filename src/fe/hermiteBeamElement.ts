@@ -23,3 +23,18 @@ export function geometricStiffness(h: number): Float64Array {
     3 * h, -h * h, -3 * h, 4 * h * h,
   ].map((v) => v * a));
 }
+
+/**
+ * Consistent mass matrix per unit mass per length: (h/420)[156, 22h, 54, −13h; 22h, 4h², 13h, −3h²;
+ * 54, 13h, 156, −22h; −13h, −3h², −22h, 4h²] (the standard form from the same Hermite shape
+ * functions, e.g. Przemieniecki 1968, ch. 11; from memory).
+ */
+export function consistentMass(h: number): Float64Array {
+  const a = h / 420;
+  return Float64Array.from([
+    156, 22 * h, 54, -13 * h,
+    22 * h, 4 * h * h, 13 * h, -3 * h * h,
+    54, 13 * h, 156, -22 * h,
+    -13 * h, -3 * h * h, -22 * h, 4 * h * h,
+  ].map((v) => v * a));
+}

@@ -17,6 +17,9 @@ export const ACCEPTED_UNITS: Readonly<Record<QuantityKind, readonly string[]>> =
   rotationalStiffness: ['kN·m/rad', 'kNm/rad', 'kN-m/rad', 'kN m/rad', 'MN·m/rad', 'N·m/rad', 'kip·in/rad', 'kip-ft/rad', 'kN·m/deg'],
   translationalStiffness: ['N/m', 'kN/m', 'kN/mm', 'MN/m', 'kip/in', 'lbf/in'],
   moment: ['kN·m', 'kNm', 'kN-m', 'N·m', 'MN·m', 'kip·ft', 'kip-in', 'lbf·in'],
+  angle: ['rad', 'mrad', 'deg'],
+  frequency: ['Hz'],
+  massPerLength: ['kg/m', 'lb/ft'],
 };
 
 /** Single unit names a structural scenario uses, in their correct case. */

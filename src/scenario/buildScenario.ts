@@ -4,6 +4,7 @@
  */
 import { readCorrelation } from './readCorrelation.js';
 import { readEnds, type RawEnds } from './readEnds.js';
+import { readMeasurements } from './readMeasurements.js';
 import { fail, readScalar, type ReadContext } from './readScalar.js';
 import { PURE_NUMBER_UNIT, readQuantity, type DisplayUnit } from './quantity.js';
 import { ExpressionError } from './quantityExpression.js';
@@ -213,5 +214,6 @@ export function buildScenario(shape: ScenarioShape, lines: ReadonlyMap<string, n
     ...(Object.keys(evidence).length > 0 ? { evidence } : {}),
   };
   const correlation = readCorrelation(shape.correlation as [string, string, number][] | undefined, listScalars(partial), ctx);
-  return { ...partial, correlation };
+  const measurements = readMeasurements(shape.evidence, ends, ctx);
+  return { ...partial, correlation, ...(measurements !== undefined ? { measurements } : {}) };
 }

@@ -21,7 +21,10 @@ export type QuantityKind =
   | 'force'
   | 'rotationalStiffness'
   | 'translationalStiffness'
-  | 'moment';
+  | 'moment'
+  | 'angle'
+  | 'frequency'
+  | 'massPerLength';
 
 export interface KindInfo {
   /** "a stress": used in "expected a stress (e.g. 200 GPa)". */
@@ -44,6 +47,10 @@ export const KINDS: Readonly<Record<QuantityKind, KindInfo>> = {
   translationalStiffness: { noun: 'a translational stiffness', dimensions: dims(1, 0, -2), siUnit: 'N/m', example: '500 kN/m', defaultDisplay: { unit: 'kN/m', factor: 1e3 } },
   // no scenario field is a moment yet; reports print moments, so they must read back
   moment: { noun: 'a moment', dimensions: dims(1, 2, -2), siUnit: 'N m', example: '35 kN·m', defaultDisplay: { unit: 'kN·m', factor: 1e3 } },
+  // measurements on the structure (scenario-level evidence, docs/evidence.md §5)
+  angle: { noun: 'an angle', dimensions: dims(0, 0, 0, 1), siUnit: 'rad', example: '4.5 mrad', defaultDisplay: { unit: 'mrad', factor: 1e-3 } },
+  frequency: { noun: 'a frequency', dimensions: dims(0, 0, -1), siUnit: 'Hz', example: '4.1 Hz', defaultDisplay: { unit: 'Hz', factor: 1 } },
+  massPerLength: { noun: 'a mass per length', dimensions: dims(1, -1, 0), siUnit: 'kg/m', example: '60 kg/m', defaultDisplay: { unit: 'kg/m', factor: 1 } },
 };
 
 export function sameDimensions(a: Dimensions, b: Dimensions): boolean {

@@ -318,6 +318,52 @@ const correlationEntry = z
   })
   .meta({ description: '[path of a random variable, path of another, Pearson correlation rho with |rho| < 1]' });
 
+export const MEASUREMENT_TYPES = ['rotation_test', 'frequency'] as const;
+export const MEASURED_ENDS = ['bottom', 'top'] as const;
+
+const measurementCov = pureNumberSchema('the CoV of the measurement error, e.g. 0.05').meta({ description: 'CoV of the measurement error (lognormal), e.g. 0.05' });
+
+/**
+ * Measurements on this structure that inform the column's variables through a model
+ * (docs/evidence.md §5): a static rotation test of an end's spring, the first natural frequency.
+ */
+const measurementSchema = z
+  .discriminatedUnion(
+    'type',
+    [
+      strict(
+        {
+          type: z.literal('rotation_test'),
+          end: choice(MEASURED_ENDS, 'the tested end'),
+          moment: quantitySchema('moment').meta({ description: 'the moment applied to the connection, e.g. 20 kN m' }),
+          rotation: quantitySchema('angle').meta({ description: 'the rotation of the connection measured under that moment, e.g. 4.5 mrad' }),
+          measurement_cov: measurementCov,
+          source: sourceSchema,
+        },
+        'a rotation test {type: rotation_test, end, moment, rotation, measurement_cov, source}',
+      ),
+      strict(
+        {
+          type: z.literal('frequency'),
+          value: quantitySchema('frequency').meta({ description: 'the measured first natural frequency of lateral vibration, e.g. 4.1 Hz' }),
+          axial_load: quantitySchema('force').meta({ description: 'the axial compression in the column while it was measured' }),
+          mass_per_length: quantitySchema('massPerLength').meta({ description: 'the vibrating mass per length of the column (self-weight and anything attached)' }),
+          measurement_cov: measurementCov,
+          source: sourceSchema,
+        },
+        'a frequency measurement {type: frequency, value, axial_load, mass_per_length, measurement_cov, source}',
+      ),
+    ],
+    {
+      error: (iss) => {
+        const type = (iss.input as { type?: unknown } | undefined)?.type;
+        if (typeof type === 'string') return `unknown measurement type '${type}'${didYouMean(type, MEASUREMENT_TYPES)}: use one of ${MEASUREMENT_TYPES.join(', ')}`;
+        return `expected a measurement {type: ${MEASUREMENT_TYPES.join(' | ')}, ...}, got ${describeInput(iss.input)}`;
+      },
+    },
+  )
+  .meta({ description: `a measurement on this structure: {type: ${MEASUREMENT_TYPES.join(' | ')}, ...}` });
+
 export const scenarioShape = strict(
   {
     $schema: z.string().optional().meta({ description: 'ignored: lets an editor find this schema' }),
@@ -399,6 +445,11 @@ export const scenarioShape = strict(
       'the analysis options (seed, methods, mc_samples, is_samples, subset_samples, workers)',
     ).optional(),
     display_units: choice(DISPLAY_UNITS, 'a unit system for reports').optional(),
+    evidence: z
+      .array(measurementSchema, { error: (iss) => `expected a list of measurements [{type: ${MEASUREMENT_TYPES.join(' | ')}, ...}], got ${describeInput(iss.input)}` })
+      .min(1, { error: () => 'is empty: give at least one measurement or leave the key out' })
+      .optional()
+      .meta({ description: 'measurements on this structure that update the column’s variables through a model (docs/evidence.md)' }),
   },
   'a scenario',
 );

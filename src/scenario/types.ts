@@ -163,7 +163,39 @@ export interface Scenario {
   readonly sources?: Readonly<Record<string, string>>;
   /** Variables updated by test results, by path (absent: none). */
   readonly evidence?: Readonly<Record<string, EvidenceRecord>>;
+  /** Measurements on this structure through a model (scenario-level `evidence:`, in file order; absent: none). */
+  readonly measurements?: readonly Measurement[];
 }
+
+/**
+ * A measurement on this structure that informs the column's variables through a model
+ * (docs/evidence.md §5). SI; `measurementCov` is the CoV of a lognormal reading error.
+ * `index` is the item's position in the file's `evidence:` list (for messages: `evidence[index]`).
+ */
+export type Measurement =
+  | {
+      readonly type: 'rotation_test';
+      readonly index: number;
+      readonly end: 'bottom' | 'top';
+      /** N·m */
+      readonly moment: number;
+      /** rad */
+      readonly rotation: number;
+      readonly measurementCov: number;
+      readonly source?: string;
+    }
+  | {
+      readonly type: 'frequency';
+      readonly index: number;
+      /** Hz */
+      readonly value: number;
+      /** N, compression while measured */
+      readonly axialLoad: number;
+      /** kg/m */
+      readonly massPerLength: number;
+      readonly measurementCov: number;
+      readonly source?: string;
+    };
 
 /** Test results that updated a variable (docs/evidence.md); the variable's Scalar holds the updated spec. */
 export interface EvidenceRecord {
@@ -181,6 +213,8 @@ export interface EvidenceRecord {
   readonly prior: DistSpec;
   /** one line: which update was made */
   readonly method: string;
+  /** the distribution these tests gave, when a later update (measurements on the structure) replaced it in the Scalar */
+  readonly result?: DistSpec;
 }
 
 export interface RandomVariable {

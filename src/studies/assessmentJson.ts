@@ -3,6 +3,7 @@
  * JSON has no Infinity: a non-finite number is written as null.
  */
 import { evidenceRows } from './evidenceSummary.js';
+import { measurementUpdateJson } from './measurementUpdate.js';
 import type { EvidenceMoments } from '../report/reportInput.js';
 import { SAMPLER_VERSION } from '../probability/blockRng.js';
 import type { SobolResult } from '../sensitivity/sobol.js';
@@ -256,6 +257,7 @@ export function assessmentJson(a: Assessment, meta: RunMeta): unknown {
   };
   if (a.restraint) doc.restraint = restraintJson(a.restraint);
   if (a.scenario.evidence) doc.evidence = evidenceJson(a.scenario);
+  if (a.measurementUpdate) doc.evidence_update = measurementUpdateJson(a.measurementUpdate);
   doc.warnings = a.warnings;
   return jsonSafe(doc);
 }

@@ -37,6 +37,7 @@ import { loadTimeNotes } from '../loads/loadTimeNotes.js';
 import { combinationStudy, type CombinationStudy } from './combinationStudy.js';
 import { countEvaluations, evaluationsSoFar } from '../limitState/evaluationCount.js';
 import { STUDY_NAMES, type StudyName } from './studyNames.js';
+import { measurementUpdate, type MeasurementUpdateResult } from './measurementUpdate.js';
 
 export const DEFAULT_METHODS: readonly Method[] = ['form', 'sorm', 'is', 'mc'];
 export const DEFAULT_SEED = 1;
@@ -123,6 +124,8 @@ export interface Assessment {
   studies: StudyName[];
   /** every limit-state evaluation of the run, by method and study (`meta.calls`) */
   calls: Record<string, number>;
+  /** the scenario's measurements (scenario-level `evidence:`): posterior, diagnostics, β before and after; `scenario` is then the updated one */
+  measurementUpdate?: MeasurementUpdateResult;
 }
 
 function momentsOf(model: ColumnModel): Moments[] {
@@ -278,6 +281,12 @@ export function governingAssessor(seed: number): GoverningAssessor {
 }
 
 export async function assessColumn(given: Scenario, opts: AssessOptions = {}): Promise<Assessment> {
+  // measurements on the structure update the variables first; everything below assesses the updated scenario
+  const update = given.measurements?.length ? measurementUpdate(given, opts.seed ?? given.analysis.seed ?? DEFAULT_SEED) : null;
+  if (update) {
+    const a = await assessColumn(update.scenario, opts);
+    return { ...a, calls: { ...a.calls, 'measurement-update': update.result.formCalls }, measurementUpdate: update.result };
+  }
   // the scenario as its strength model sees it; `given` is kept for the comparison of models
   const resolved = resolveStrengthModel(given);
   const s = resolved.scenario;

@@ -36,7 +36,7 @@ export function evidenceRows(s: Scenario): EvidenceRow[] {
       ...(e.measurementCov !== undefined ? { measurementCov: e.measurementCov } : {}),
       ...(e.source !== undefined ? { source: e.source } : {}),
       prior: momentsOf(e.prior),
-      posterior: momentsOf(scalar.spec),
+      posterior: momentsOf(e.result ?? scalar.spec),
     };
   });
 }

@@ -37,6 +37,8 @@ import { loadTimeNotes } from '../loads/loadTimeNotes.js';
 import { combinationStudy, type CombinationStudy } from './combinationStudy.js';
 import { countEvaluations, evaluationsSoFar } from '../limitState/evaluationCount.js';
 import { STUDY_NAMES, type StudyName } from './studyNames.js';
+import { axesReliability, axesSentence, type AxesReliability } from './axisReliability.js';
+import { axisCautions } from '../limitState/axisCautions.js';
 
 export const DEFAULT_METHODS: readonly Method[] = ['form', 'sorm', 'is', 'mc'];
 export const DEFAULT_SEED = 1;
@@ -110,6 +112,8 @@ export interface Assessment {
   combinations?: CombinationStudy;
   sensitivity?: SensitivityStudy;
   restraint?: ColumnRestraintResult;
+  /** two principal axes: FORM about each alone (absent: one axis) */
+  axes?: AxesReliability;
   samples: SamplesSummary;
   warnings: string[];
   interrupted: boolean;
@@ -431,7 +435,16 @@ export async function assessColumn(given: Scenario, opts: AssessOptions = {}): P
   const other = inThread - named - simulatedHere;
   if (other > 0) calls.other = other;
   const studies = STUDY_NAMES.filter((n) => asked.has(n));
+  // two principal axes: each axis' own β, which governs, and what the check leaves out
+  const axesCounted = countEvaluations(() => (check.axes !== null ? axesReliability(lead ? lead.model : model, check.axes.governing) : null));
+  const axes = axesCounted.result;
+  if (axes !== null) {
+    calls.axes = axesCounted.calls;
+    warnings.unshift(axesSentence(axes));
+  }
+  warnings.push(...axisCautions(s));
   return {
+    ...(axes !== null ? { axes } : {}),
     scenario: s,
     model: lead ? lead.model : model,
     modelFactor: model.modelFactorUsed,

@@ -49,6 +49,7 @@ function axisLines(s: Scenario, c: CheckResult, system: UnitSystem): string[] {
   const p = c.sectionProperties;
   if (p !== null) {
     const m = p.at_mean_loss;
+    lines.push('');
     lines.push(`  section from its dimensions (${p.shape}): A = ${q(m.A, 'area')}, Iy = ${q(m.Iy, 'inertia')}, Iz = ${q(m.Iz, 'inertia')}, Wel,y = ${q(m.Wel_y, 'sectionModulus')}, Wel,z = ${q(m.Wel_z, 'sectionModulus')}`);
     if (p.corrosion !== null) {
       const k = p.corrosion;

@@ -29,7 +29,7 @@ import type { DistSpec } from '../probability/distribution.js';
 import { scenarioForm } from './columnForm.js';
 import type { UnitSystem } from '../report/displayUnits.js';
 import { columnRestraint, studiedEnds, type ColumnRestraintResult, type EndChoice, type GoverningAssessor } from './columnRestraint.js';
-import { BOW_PATH, resolveStrengthModel, type ModelFactorUsed } from '../limitState/strengthChoice.js';
+import { BOW_PATH, BOW_Z_PATH, resolveStrengthModel, type ModelFactorUsed } from '../limitState/strengthChoice.js';
 import { betaByStrengthModel, type StrengthModelBeta } from './strengthComparison.js';
 import { characteristicValues, type CharacteristicSummary } from './characteristicValues.js';
 import { combinationModels, combinationSystemProblem } from '../limitState/combinationSystem.js';
@@ -304,7 +304,10 @@ export async function assessColumn(given: Scenario, opts: AssessOptions = {}): P
   let problem = problemFromModel(model);
   let recipe = columnRecipe(s);
   if (resolved.bowDropped) {
-    warnings.push(`${BOW_PATH}: strength model ${s.strength} does not use the bow, so it was taken out of the random variables (fixed at its mean; no effect on β)`);
+    const zDropped = given.column.axisZ?.bow.kind === 'random' && s.column.axisZ?.bow.kind === 'fixed';
+    const bowY = given.column.bow.kind === 'random' ? BOW_PATH : null;
+    const paths = [bowY, zDropped ? BOW_Z_PATH : null].filter((p) => p !== null).join(' and ');
+    warnings.push(`${paths}: strength model ${s.strength} does not use the bow, so it was taken out of the random variables (fixed at its mean; no effect on β)`);
   }
   let interrupted = false;
 

@@ -54,6 +54,8 @@ describe('bad sections and axes: one message naming the field, exit 2', () => {
     ['a curve with a model that has none', (d) => { d.strength = 'first-yield'; }, /column\.axis_z\.curve/, /applies with strength en1993/],
     ['inertia_z without axis z', (d) => { d.column.section = { area: '5000 mm^2', inertia: '30e6 mm^4', section_modulus: '300e3 mm^3', inertia_z: '10e6 mm^4' }; delete d.column.axis_z; }, /column\.section\.inertia_z/, /axis_z/],
     ['axis z without inertia_z', (d) => { d.column.section = { area: '5000 mm^2', inertia: '30e6 mm^4', section_modulus: '300e3 mm^3' }; }, /column\.section\.inertia_z/, /is missing/],
+    ['a per-plate loss on a hollow section', (d) => { d.column.section = { shape: 'rhs', h: '200 mm', b: '100 mm', t: '8 mm', corrosion: { flange: '1 mm' } }; }, /column\.section\.corrosion\.flange/, /I\/H section only/],
+    ['a random loss that may be negative', (d) => { d.column.section.corrosion.web = { dist: 'normal', mean: '0.6 mm', sd: '0.3 mm' }; }, /column\.section\.corrosion\.web/, /negative|>= 0|below/],
     ['an unknown end about z', (d) => { d.column.axis_z.ends.top = 'hinged'; }, /column\.axis_z\.ends\.top/, /unknown end condition/],
   ];
   for (const [name, edit, field, message] of cases) {

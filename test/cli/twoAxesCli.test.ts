@@ -33,6 +33,13 @@ describe('the facade demo: an H section by its dimensions, two axes, a corroded 
     expect(c.cautions.join(' ')).toMatch(/reduced section is used over the whole length/);
   });
 
+  it('restraint runs and says that it studies the ends about y', async () => {
+    const r = await runCli(['restraint', DEMO]);
+    expect(r.status).toBe(0);
+    expect(r.stdout).toMatch(/The restraint studied is about y/);
+    expect(r.stdout).toMatch(/^result: .* stiffness about y must be/m);
+  }, 60_000);
+
   it('the terminal says which axis governs and carries the cautions', async () => {
     const r = await runCli(['check', DEMO]);
     expect(r.status).toBe(0);

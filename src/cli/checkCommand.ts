@@ -1,4 +1,5 @@
-import { deterministicCheck, checkJson, type CheckResult } from '../limitState/deterministicCheck.js';
+import { deterministicCheck, checkJson, type AxisCheck, type CheckResult } from '../limitState/deterministicCheck.js';
+import { axisCautions } from '../limitState/axisCautions.js';
 import { buildColumnModel } from '../limitState/columnModel.js';
 import { loadScenario } from '../scenario/loadScenario.js';
 import { makeDistribution } from '../probability/makeDistribution.js';
@@ -41,10 +42,49 @@ function kText(K: number): string {
   return Number.isFinite(K) && K < 1e6 ? K.toFixed(3) : num(K);
 }
 
+/** The section from its dimensions and both axes at the means (nothing for a one-axis section by properties). */
+function axisLines(s: Scenario, c: CheckResult, system: UnitSystem): string[] {
+  const q = (v: number, kind: Parameters<typeof formatQuantity>[1]) => formatQuantity(v, kind, system);
+  const lines: string[] = [];
+  const p = c.sectionProperties;
+  if (p !== null) {
+    const m = p.at_mean_loss;
+    lines.push('');
+    lines.push(`  section from its dimensions (${p.shape}): A = ${q(m.A, 'area')}, Iy = ${q(m.Iy, 'inertia')}, Iz = ${q(m.Iz, 'inertia')}, Wel,y = ${q(m.Wel_y, 'sectionModulus')}, Wel,z = ${q(m.Wel_z, 'sectionModulus')}`);
+    if (p.corrosion !== null) {
+      const k = p.corrosion;
+      const loss = k.per_plate ? `flanges ${q(k.loss_per_face.primary, 'length')}, web ${q(k.loss_per_face.secondary, 'length')}` : q(k.loss_per_face.primary, 'length');
+      lines.push(`    at the mean corrosion loss per face (${loss}${k.zone_height !== null ? `, zone up to ${q(k.zone_height, 'length')} above the base` : ''}); sound section A = ${q(p.gross.A, 'area')}, Iy = ${q(p.gross.Iy, 'inertia')}, Iz = ${q(p.gross.Iz, 'inertia')}`);
+    }
+  }
+  const a = c.axes;
+  const z = s.column.axisZ;
+  if (a === null || z === undefined) return lines;
+  lines.push('');
+  lines.push('  buckling about each principal axis (the capacity is the smaller):');
+  const row = (x: AxisCheck, ends: string): string[] => [
+    x.axis === a.governing ? `${x.axis} (governs)` : x.axis, ends, x.strength, num(x.restraint_ratio.bottom), num(x.restraint_ratio.top), q(x.critical_load, 'force'), kText(x.effective_length_factor), q(x.capacity, 'force'), x.utilization.toFixed(3),
+  ];
+  lines.push(
+    textTable(
+      [
+        ['axis', 'ends (bottom / top)', 'strength', 'R bottom', 'R top', 'Pcr', 'K', 'capacity', 'ratio'],
+        row(a.y, `${endLabel(s.column.ends.bottom, system)} / ${endLabel(s.column.ends.top, system)}`),
+        row(a.z, `${endLabel(z.ends.bottom, system)} / ${endLabel(z.ends.top, system)}`),
+      ],
+      '    ',
+    ),
+  );
+  lines.push('  the end table above and the connection moments below are about y');
+  return lines;
+}
+
 export function formatCheck(s: Scenario, c: CheckResult, system: UnitSystem): string {
   const q = (v: number, kind: Parameters<typeof formatQuantity>[1]) => formatQuantity(v, kind, system);
   const L = s.column.length;
   const lines: string[] = [];
+  // the end table is about y; with two axes the top-level values are the governing axis'
+  const yEnds = c.axes !== null ? c.axes.y : c;
   lines.push(`stanchion check: ${s.title}`);
   lines.push(
     `  ${s.column.frame} column, L = ${q(L, 'length')}, strength model ${s.strength}; every random variable at its mean`,
@@ -53,8 +93,8 @@ export function formatCheck(s: Scenario, c: CheckResult, system: UnitSystem): st
   lines.push(
     textTable([
       ['end', 'restraint', 'R = kL/EI', 'fixity X = R/(R+3)'],
-      ['bottom', endLabel(s.column.ends.bottom, system), num(c.restraint_ratio.bottom), c.fixity_factor.bottom.toFixed(3)],
-      ['top', endLabel(s.column.ends.top, system), num(c.restraint_ratio.top), c.fixity_factor.top.toFixed(3)],
+      ['bottom', endLabel(s.column.ends.bottom, system), num(yEnds.restraint_ratio.bottom), yEnds.fixity_factor.bottom.toFixed(3)],
+      ['top', endLabel(s.column.ends.top, system), num(yEnds.restraint_ratio.top), yEnds.fixity_factor.top.toFixed(3)],
     ]),
   );
   for (const key of ['bottom', 'top'] as const) {
@@ -64,6 +104,7 @@ export function formatCheck(s: Scenario, c: CheckResult, system: UnitSystem): st
     lines.push(`  ${key} end, springs in series (1/k = Σ 1/k_i): ${parts.join(' + ')} → effective k = ${q(series.effective_stiffness, 'rotationalStiffness')}`);
   }
   if (c.lateral_ratio !== null) lines.push(`  lateral spring at the top: T = kT L³/EI = ${num(c.lateral_ratio)}`);
+  lines.push(...axisLines(s, c, system));
   lines.push('');
   const m1 = c.modes[0];
   const rows: string[][] = [
@@ -79,6 +120,7 @@ export function formatCheck(s: Scenario, c: CheckResult, system: UnitSystem): st
     ]);
   }
   rows.push(['curvature factor c', c.curvature_factor.toFixed(3)]);
+  if (c.axes !== null) rows.unshift(['governing axis', `${c.axes.governing} (the values below are about ${c.axes.governing})`]);
   rows.push(['capacity', q(c.capacity, 'force')]);
   rows.push(['demand (sum of loads)', q(c.demand, 'force')]);
   rows.push(['mean-value ratio', `${c.utilization.toFixed(3)}  = demand / (model factor ${c.model_factor.toPrecision(3)} × capacity), every value at its mean`]);
@@ -99,6 +141,7 @@ export function formatCheck(s: Scenario, c: CheckResult, system: UnitSystem): st
     );
   }
   lines.push('');
+  for (const caution of axisCautions(s)) lines.push(`Caution: ${caution}`);
   lines.push(CAUTION);
   lines.push('');
   // every value at its mean, no partial factor: this is not a design check, and the line says so
@@ -112,7 +155,8 @@ export function runCheck(file: string, opts: CheckOptions): void {
   const model = buildColumnModel(scenario);
   const result = deterministicCheck(model);
   if (opts.json) {
-    process.stdout.write(JSON.stringify({ check: checkJson(result) }, null, 2) + '\n');
+    const cautions = axisCautions(scenario);
+    process.stdout.write(JSON.stringify({ check: { ...checkJson(result), ...(cautions.length > 0 ? { cautions } : {}) } }, null, 2) + '\n');
     return;
   }
   process.stdout.write(formatCheck(scenario, result, opts.units ?? scenario.displayUnits));

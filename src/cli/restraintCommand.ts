@@ -84,17 +84,18 @@ export async function runRestraint(file: string, opts: RestraintOptions): Promis
     '',
     CAUTION,
     '',
-    restraintResultLine(r, system),
+    restraintResultLine(r, system, scenario.column.axisZ !== undefined),
   ];
   process.stdout.write(out.join('\n') + '\n');
   await writeReport();
 }
 
 /** The last line: the stiffness each studied end needs for the target, or why none will do. */
-function restraintResultLine(r: ColumnRestraintResult, system: UnitSystem): string {
+function restraintResultLine(r: ColumnRestraintResult, system: UnitSystem, twoAxes: boolean): string {
   const parts = r.study.ends.map((e) => {
     const k = r.study.required[e];
     return k === null || k === undefined || !Number.isFinite(k) ? `${e}: not reachable, even with a rigid ${e} connection` : `${e} at least ${formatQuantity(k, 'rotationalStiffness', system)}`;
   });
-  return `result: for the target β = ${formatBeta(r.study.target)} the mean rotational stiffness must be ${parts.join('; ')}`;
+  // with two axes the study varies the ends about y (docs/sections.md)
+  return `result: for the target β = ${formatBeta(r.study.target)} the mean rotational stiffness${twoAxes ? ' about y' : ''} must be ${parts.join('; ')}`;
 }

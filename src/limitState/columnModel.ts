@@ -10,8 +10,10 @@ import type { LoadCombination } from '../loads/loadCombinations.js';
 import { columnCapacity } from '../mechanics/columnCapacity.js';
 import { makeFastCapacityFromRatio } from '../mechanics/fastColumn.js';
 import type { ColumnState } from '../mechanics/types.js';
-import type { End, Scenario } from '../scenario/types.js';
-import { randomVariables } from '../scenario/variables.js';
+import type { End, Scalar, Scenario, StrengthModel } from '../scenario/types.js';
+import { AXIS_Z, corrosionScalars, randomVariables } from '../scenario/variables.js';
+import { AREA, ELASTIC_MODULUS_Y, ELASTIC_MODULUS_Z, INERTIA_Y, INERTIA_Z, PROPERTY_COUNT } from '../sections/sectionProperties.js';
+import { sectionWriter } from '../sections/sectionDimensions.js';
 import { restraintRatio } from '../scenario/restraintRatio.js';
 import { flexibleComponents, seriesComponentPath, seriesStiffness } from '../scenario/seriesEnd.js';
 import { resolveStrengthModel, type ModelFactorUsed } from './strengthChoice.js';
@@ -43,8 +45,83 @@ export interface ColumnModel {
   readonly gBlock: ColumnBlockG | null;
   /** demand / (θ·capacity), as in `check` when x is the mean */
   utilization(x: Float64Array): number;
-  /** everything the mechanics needs at x (allocates: not for hot loops) */
+  /** everything the mechanics needs at x, about the axis y (allocates: not for hot loops) */
   state(x: Float64Array): ColumnState;
+  /** the principal axes checked: y alone, or y and z (capacity is the smaller) */
+  readonly axes: readonly AxisModel[];
+}
+
+export type AxisName = 'y' | 'z';
+
+/** One principal axis of the column (docs/sections.md). */
+export interface AxisModel {
+  readonly name: AxisName;
+  /** the strength model about this axis (about z its EN 1993-1-1 curve may differ) */
+  readonly strength: StrengthModel;
+  capacity(x: Float64Array): number;
+  /** allocates: not for hot loops */
+  state(x: Float64Array): ColumnState;
+  /** capacity when the section is already written for x (the hot path) */
+  capacityAfterWrite(x: Float64Array): number;
+}
+
+interface AxisParts {
+  readonly I: (x: Float64Array) => number;
+  readonly S: (x: Float64Array) => number;
+  readonly bow: Slot;
+  readonly bottom: EndRatio;
+  readonly top: EndRatio;
+  readonly lateral: Slot | null;
+  readonly strength: StrengthModel;
+  /** the load eccentricities bend about this axis */
+  readonly eccentric: boolean;
+}
+
+/**
+ * Where A, I and S come from at x: the scenario's slots (properties given), or a section recomputed
+ * from its dimensions less the sampled corrosion loss (`write` fills a buffer once per call).
+ */
+interface SectionSource {
+  write(x: Float64Array): void;
+  A(x: Float64Array): number;
+  Iy(x: Float64Array): number;
+  Sy(x: Float64Array): number;
+  Iz(x: Float64Array): number;
+  Sz(x: Float64Array): number;
+}
+
+function sectionSource(s: Scenario, names: readonly string[]): SectionSource {
+  const section = s.column.section;
+  const geometry = section.geometry;
+  if (geometry === undefined) {
+    const A = slotOf(section.area, 'column.section.area', names);
+    const I = slotOf(section.inertia, 'column.section.inertia', names);
+    const S = slotOf(section.sectionModulus, 'column.section.section_modulus', names);
+    const Iz = section.inertiaZ === undefined ? I : slotOf(section.inertiaZ, 'column.section.inertia_z', names);
+    const Sz = section.sectionModulusZ === undefined ? S : slotOf(section.sectionModulusZ, 'column.section.section_modulus_z', names);
+    return {
+      write: () => {},
+      A: (x) => read(A, x),
+      Iy: (x) => read(I, x),
+      Sy: (x) => read(S, x),
+      Iz: (x) => read(Iz, x),
+      Sz: (x) => read(Sz, x),
+    };
+  }
+  // reduced dimensions → properties, a few dozen operations and no allocation per sample
+  const writer = sectionWriter(geometry.dimensions);
+  const props = new Float64Array(PROPERTY_COUNT);
+  const corrosion = corrosionScalars(geometry);
+  const primary = corrosion.length === 0 ? null : slotOf(corrosion[0]!.scalar, corrosion[0]!.path, names);
+  const secondary = corrosion.length === 0 ? null : corrosion.length === 1 ? primary : slotOf(corrosion[1]!.scalar, corrosion[1]!.path, names);
+  return {
+    write: (x) => writer(props, primary === null ? 0 : read(primary, x), secondary === null ? 0 : read(secondary, x)),
+    A: () => props[AREA],
+    Iy: () => props[INERTIA_Y],
+    Sy: () => props[ELASTIC_MODULUS_Y],
+    Iz: () => props[INERTIA_Z],
+    Sz: () => props[ELASTIC_MODULUS_Z],
+  };
 }
 
 /** An end as a function of (x, EI) → R = kL/EI. */
@@ -109,7 +186,11 @@ function finiteMargin(g: number): number {
 }
 
 /** `combination` (default: defaultCombination) sets each load's period; see loads/. */
-export function buildColumnModel(given: Scenario, combination: LoadCombination = defaultCombination(given)): ColumnModel {
+/**
+ * `onlyAxis`: the capacity (and g) about that axis alone, for the failure probability of each axis;
+ * default the smaller of the two.
+ */
+export function buildColumnModel(given: Scenario, combination: LoadCombination = defaultCombination(given), onlyAxis?: AxisName): ColumnModel {
   const resolved = resolveStrengthModel(given);
   const s = resolved.scenario;
   const vars = randomVariables(s);
@@ -118,12 +199,8 @@ export function buildColumnModel(given: Scenario, combination: LoadCombination =
   const mean = Float64Array.from(dists, (d) => d.mean);
   const c = s.column;
   const L = c.length;
-  const A = slotOf(c.section.area, 'column.section.area', names);
-  const I = slotOf(c.section.inertia, 'column.section.inertia', names);
-  const S = slotOf(c.section.sectionModulus, 'column.section.section_modulus', names);
   const E = slotOf(c.material.E, 'column.material.E', names);
   const fy = slotOf(c.material.fy, 'column.material.fy', names);
-  const bow = slotOf(c.bow, 'column.imperfection.bow', names);
   const theta = slotOf(s.modelFactor, 'model_factor', names);
   const loads = s.loads.map((l) => slotOf(l.value, l.path, names));
   // end eccentricities per load (docs/beam-column.md); a load without any reads fixed 0
@@ -145,54 +222,121 @@ export function buildColumnModel(given: Scenario, combination: LoadCombination =
     ecc[0] = sum > 0 ? mB / sum : 0;
     ecc[1] = sum > 0 ? mT / sum : 0;
   };
-  const lateral = c.ends.lateral === null ? null : slotOf(c.ends.lateral, 'column.ends.lateral', names);
-  const bottom = endRatio(c.ends.bottom, 'column.ends.bottom', names, s);
-  const top = endRatio(c.ends.top, 'column.ends.top', names, s);
+  const section = sectionSource(s, names);
   const frame = c.frame;
-  const strength = s.strength;
-  const fast = makeFastCapacityFromRatio(frame, strength);
-  // A lateral spring that is zero everywhere lets the tabulated fast path serve every sample.
-  const lateralAlwaysZero = lateral === null || (lateral.index < 0 && lateral.value === 0);
 
-  const state = (x: Float64Array): ColumnState => {
-    const EI = read(E, x) * read(I, x);
-    if (eccentric) effectiveEccentricity(x);
+  /** One principal axis: its stiffness, modulus, bow, ends and strength model. */
+  const makeAxis = (name: AxisName, parts: AxisParts): AxisModel => {
+    const { I, S, bow, bottom, top, lateral, strength } = parts;
+    const A = section.A;
+    const axisEccentric = parts.eccentric && eccentric;
+    const fast = makeFastCapacityFromRatio(frame, strength);
+    // A lateral spring that is zero everywhere lets the tabulated fast path serve every sample.
+    const lateralAlwaysZero = lateral === null || (lateral.index < 0 && lateral.value === 0);
+    const state = (x: Float64Array): ColumnState => {
+      const EI = read(E, x) * I(x);
+      if (axisEccentric) effectiveEccentricity(x);
+      return {
+        ...(axisEccentric ? { eccentricity: { bottom: ecc[0], top: ecc[1] } } : {}),
+        E: read(E, x),
+        fy: read(fy, x),
+        A: A(x),
+        I: I(x),
+        S: S(x),
+        L,
+        bow: read(bow, x),
+        frame,
+        r: {
+          bottom: bottom(x, EI),
+          top: top(x, EI),
+          lateral: lateral === null ? 0 : (read(lateral, x) * L * L * L) / EI,
+        },
+      };
+    };
+    /** the section must already be written for x (section.write) */
+    const capacity = (x: Float64Array): number => {
+      const e = read(E, x);
+      const i = I(x);
+      const EI = e * i;
+      // A sample on the zero bound of a stiffness or strength (uniform or truncnormal with min 0, a
+      // far tail that underflows) carries no load: capacity 0 is the answer, not an error.
+      if (!(EI > 0) || !(A(x) * read(fy, x) > 0)) return 0;
+      if (axisEccentric) {
+        effectiveEccentricity(x);
+        // the tabulated path knows only the concentric column: an eccentric sample takes the exact one
+        if (ecc[0] !== 0 || ecc[1] !== 0) return columnCapacity(strength, state(x)).capacity;
+      }
+      if (lateralAlwaysZero) {
+        return fast(e, read(fy, x), A(x), i, S(x), L, read(bow, x), bottom(x, EI), top(x, EI));
+      }
+      return columnCapacity(strength, state(x)).capacity;
+    };
     return {
-      ...(eccentric ? { eccentricity: { bottom: ecc[0], top: ecc[1] } } : {}),
-      E: read(E, x),
-      fy: read(fy, x),
-      A: read(A, x),
-      I: read(I, x),
-      S: read(S, x),
-      L,
-      bow: read(bow, x),
-      frame,
-      r: {
-        bottom: bottom(x, EI),
-        top: top(x, EI),
-        lateral: lateral === null ? 0 : (read(lateral, x) * L * L * L) / EI,
+      name,
+      strength,
+      capacity: (x) => {
+        section.write(x);
+        return capacity(x);
       },
+      state: (x) => {
+        section.write(x);
+        return state(x);
+      },
+      capacityAfterWrite: capacity,
     };
   };
 
-  const capacity = (x: Float64Array): number => {
-    noteEvaluation();
-    const e = read(E, x);
-    const i = read(I, x);
-    const EI = e * i;
-    // A sample on the zero bound of a stiffness or strength (uniform or truncnormal with min 0, a
-    // far tail that underflows) carries no load: capacity 0 is the answer, not an error.
-    if (!(EI > 0) || !(read(A, x) * read(fy, x) > 0)) return 0;
-    if (eccentric) {
-      effectiveEccentricity(x);
-      // the tabulated path knows only the concentric column: an eccentric sample takes the exact one
-      if (ecc[0] !== 0 || ecc[1] !== 0) return columnCapacity(strength, state(x)).capacity;
-    }
-    if (lateralAlwaysZero) {
-      return fast(e, read(fy, x), read(A, x), i, read(S, x), L, read(bow, x), bottom(x, EI), top(x, EI));
-    }
-    return columnCapacity(strength, state(x)).capacity;
-  };
+  const axisY = makeAxis('y', {
+    I: section.Iy,
+    S: section.Sy,
+    bow: slotOf(c.bow, 'column.imperfection.bow', names),
+    bottom: endRatio(c.ends.bottom, 'column.ends.bottom', names, s),
+    top: endRatio(c.ends.top, 'column.ends.top', names, s),
+    lateral: c.ends.lateral === null ? null : slotOf(c.ends.lateral, 'column.ends.lateral', names),
+    strength: s.strength,
+    eccentric: true,
+  });
+  const z = c.axisZ;
+  const axisZ =
+    z === undefined
+      ? null
+      : makeAxis('z', {
+          I: section.Iz,
+          S: section.Sz,
+          bow: slotOf(z.bow, `${AXIS_Z}.imperfection.bow`, names),
+          bottom: endRatio(z.ends.bottom, `${AXIS_Z}.ends.bottom`, names, s),
+          top: endRatio(z.ends.top, `${AXIS_Z}.ends.top`, names, s),
+          lateral: z.ends.lateral === null ? null : slotOf(z.ends.lateral, `${AXIS_Z}.ends.lateral`, names),
+          strength: z.strength,
+          // eccentricities act in the plane of bending about y (docs/beam-column.md)
+          eccentric: false,
+        });
+  const axes: AxisModel[] = axisZ === null ? [axisY] : [axisY, axisZ];
+  const only = onlyAxis === undefined ? null : onlyAxis === 'z' ? axisZ : axisY;
+  if (onlyAxis === 'z' && only === null) throw new Error('the scenario has no axis z');
+  const yCapacity = axisY.capacityAfterWrite;
+  const zCapacity = axisZ?.capacityAfterWrite;
+
+  const capacity =
+    only !== null
+      ? (x: Float64Array): number => {
+          noteEvaluation();
+          return only.capacity(x);
+        }
+      : zCapacity === undefined
+        ? (x: Float64Array): number => {
+            noteEvaluation();
+            section.write(x);
+            return yCapacity(x);
+          }
+        : (x: Float64Array): number => {
+            noteEvaluation();
+            section.write(x);
+            const cy = yCapacity(x);
+            const cz = zCapacity(x);
+            return cz < cy ? cz : cy;
+          };
+  const state = axisY.state;
   const demand = (x: Float64Array): number => {
     let sum = 0;
     for (let k = 0; k < loads.length; k++) sum += read(loads[k], x);
@@ -201,8 +345,20 @@ export function buildColumnModel(given: Scenario, combination: LoadCombination =
   const modelFactor = (x: Float64Array): number => read(theta, x);
   // built on first use: most models (sweep cases, studies) never sample in blocks
   let block: ColumnBlockG | null = null;
-  const gBlock: ColumnBlockG | null = eccentric || !lateralAlwaysZero ? null : (columns, count, out) => {
-    block ??= makeColumnBlockG({ names, L, frame, strength, E, fy, A, I, S, bow, theta, loads, bottom: c.ends.bottom, top: c.ends.top, finiteMargin });
+  // The block form knows one axis with its properties given as values (no section recomputed from
+  // dimensions), concentric loads and no lateral spring: every other column keeps the one-sample g.
+  const yLateral = c.ends.lateral === null ? null : slotOf(c.ends.lateral, 'column.ends.lateral', names);
+  const lateralAlwaysZero = yLateral === null || (yLateral.index < 0 && yLateral.value === 0);
+  const blockable = !eccentric && lateralAlwaysZero && axisZ === null && onlyAxis !== 'z' && c.section.geometry === undefined;
+  const gBlock: ColumnBlockG | null = !blockable ? null : (columns, count, out) => {
+    block ??= makeColumnBlockG({
+      names, L, frame, strength: s.strength, E, fy,
+      A: slotOf(c.section.area, 'column.section.area', names),
+      I: slotOf(c.section.inertia, 'column.section.inertia', names),
+      S: slotOf(c.section.sectionModulus, 'column.section.section_modulus', names),
+      bow: slotOf(c.bow, 'column.imperfection.bow', names),
+      theta, loads, bottom: c.ends.bottom, top: c.ends.top, finiteMargin,
+    });
     block(columns, count, out);
   };
 
@@ -227,5 +383,6 @@ export function buildColumnModel(given: Scenario, combination: LoadCombination =
     gBlock,
     utilization: (x) => demand(x) / (modelFactor(x) * capacity(x)),
     state,
+    axes,
   };
 }

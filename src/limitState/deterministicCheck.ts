@@ -7,7 +7,10 @@ import { modeShape } from '../mechanics/modeShape.js';
 import { columnCapacity } from '../mechanics/columnCapacity.js';
 import { fixityFactor } from '../mechanics/restraint.js';
 import type { ColumnState } from '../mechanics/types.js';
-import type { ColumnModel } from './columnModel.js';
+import type { AxisModel, AxisName, ColumnModel } from './columnModel.js';
+import { meanOf } from '../scenario/readScalar.js';
+import { namedProperties, PROPERTY_COUNT, type SectionProperties } from '../sections/sectionProperties.js';
+import { sectionWriter } from '../sections/sectionDimensions.js';
 import { seriesSpringsAt, type SeriesSprings } from './seriesSprings.js';
 import type { EndSpringMoments } from '../mechanics/endSpringMoments.js';
 import { classificationJson, classifyEnds, connectionJson, connectionResponseAt, type ConnectionResponse, type EndClassification } from './connectionResponse.js';
@@ -47,6 +50,10 @@ export interface CheckResult {
   jointClasses: EndClassification[];
   /** the components of each end given as springs in series, at the means (null: not a series end) */
   seriesSprings: SeriesSprings;
+  /** two principal axes: each at the means and which governs (the keys above are the governing axis'); null: one axis */
+  axes: AxesCheck | null;
+  /** a section given by its dimensions (null: by its properties) */
+  sectionProperties: SectionPropertiesCheck | null;
 }
 
 const SHAPE_POINTS = 41;
@@ -75,11 +82,90 @@ function summariseMode(state: ColumnState, mode: number): ModeSummary | null {
   };
 }
 
+/** One principal axis at the means (two-axis scenarios). */
+export interface AxisCheck {
+  axis: AxisName;
+  strength: string;
+  critical_load: number;
+  effective_length_factor: number;
+  restraint_ratio: { bottom: number | null; top: number | null };
+  fixity_factor: { bottom: number; top: number };
+  curvature_factor: number;
+  capacity: number;
+  utilization: number;
+}
+
+/** The axes at the means and which one governs (the smaller capacity; y on a tie). */
+export interface AxesCheck {
+  y: AxisCheck;
+  z: AxisCheck;
+  governing: AxisName;
+}
+
+function axisCheck(axis: AxisModel, x: Float64Array, demand: number, theta: number): { check: AxisCheck; state: ColumnState } {
+  const state = axis.state(x);
+  const cap = columnCapacity(axis.strength, state);
+  return {
+    state,
+    check: {
+      axis: axis.name,
+      strength: axis.strength,
+      critical_load: cap.Pcr,
+      effective_length_factor: cap.K,
+      restraint_ratio: { bottom: finiteOrNull(state.r.bottom), top: finiteOrNull(state.r.top) },
+      fixity_factor: { bottom: fixityFactor(state.r.bottom), top: fixityFactor(state.r.top) },
+      curvature_factor: cap.c,
+      capacity: cap.capacity,
+      utilization: demand / (theta * cap.capacity),
+    },
+  };
+}
+
+/** The section given by its dimensions: properties of the sound section and at the mean loss. */
+export interface SectionPropertiesCheck {
+  shape: string;
+  gross: SectionProperties;
+  at_mean_loss: SectionProperties;
+  corrosion: { loss_per_face: { primary: number; secondary: number }; per_plate: boolean; zone_height: number | null } | null;
+}
+
+function sectionPropertiesAt(model: ColumnModel): SectionPropertiesCheck | null {
+  const g = model.scenario.column.section.geometry;
+  if (g === undefined) return null;
+  const write = sectionWriter(g.dimensions);
+  const p = new Float64Array(PROPERTY_COUNT);
+  write(p, 0, 0);
+  const gross = namedProperties(p);
+  const k = g.corrosion;
+  const primary = k ? meanOf(k.primary) : 0;
+  const secondary = k ? meanOf(k.secondary) : 0;
+  write(p, primary, secondary);
+  return {
+    shape: g.dimensions.shape,
+    gross,
+    at_mean_loss: namedProperties(p),
+    corrosion: k ? { loss_per_face: { primary, secondary }, per_plate: k.perPlate, zone_height: k.zoneHeight ?? null } : null,
+  };
+}
+
 export function deterministicCheck(model: ColumnModel, modes = 3): CheckResult {
   const x = model.mean;
-  const state = model.state(x);
-  const cap = columnCapacity(model.scenario.strength, state);
   const theta = model.modelFactor(x);
+  let state: ColumnState;
+  let strength = model.scenario.strength;
+  let axes: AxesCheck | null = null;
+  if (model.axes.length === 2) {
+    const d = model.demand(x);
+    const y = axisCheck(model.axes[0]!, x, d, theta);
+    const z = axisCheck(model.axes[1]!, x, d, theta);
+    const governing = z.check.capacity < y.check.capacity ? z : y;
+    axes = { y: y.check, z: z.check, governing: governing.check.axis };
+    state = governing.state;
+    strength = governing.check.strength as typeof strength;
+  } else {
+    state = model.state(x);
+  }
+  const cap = columnCapacity(strength, state);
   const demand = model.demand(x);
   const summaries: ModeSummary[] = [];
   for (let m = 1; m <= modes; m++) {
@@ -96,9 +182,11 @@ export function deterministicCheck(model: ColumnModel, modes = 3): CheckResult {
     fixity_factor: { bottom: fixityFactor(state.r.bottom), top: fixityFactor(state.r.top) },
     lateral_ratio: state.frame === 'sway' ? (state.r.lateral ?? 0) : null,
     curvature_factor: cap.c,
-    strength: model.scenario.strength,
+    strength,
     model_factor: theta,
     modes: summaries,
+    axes,
+    sectionProperties: sectionPropertiesAt(model),
     connections: connectionResponseAt(model, x),
     jointClasses: classifyEnds(model),
     seriesSprings: seriesSpringsAt(model, x),
@@ -129,5 +217,7 @@ export function checkJson(c: CheckResult): Record<string, unknown> {
     ...connectionJson(c.connections, 'means'),
     joint_classification: classificationJson(c.jointClasses),
     ...(c.seriesSprings.bottom || c.seriesSprings.top ? { series_springs: c.seriesSprings } : {}),
+    ...(c.axes !== null ? { axes: c.axes, governing_axis: c.axes.governing } : {}),
+    ...(c.sectionProperties !== null ? { section_properties: c.sectionProperties } : {}),
   };
 }

@@ -42,9 +42,11 @@ function setEndScalar(end: Mutable<End>, leaf: string, scalar: Scalar, s: Scenar
 export function withScalar(s: Scenario, path: string, scalar: Scalar): Scenario {
   const out = clone(s);
   const c = out.column;
-  const endMatch = /^column\.ends\.(bottom|top)\.(rotation|fixity|alignment_g|series\.[A-Za-z][A-Za-z0-9_]*)$/.exec(path);
+  const endMatch = /^column\.(ends|axis_z\.ends)\.(bottom|top)\.(rotation|fixity|alignment_g|series\.[A-Za-z][A-Za-z0-9_]*)$/.exec(path);
   if (endMatch) {
-    setEndScalar(c.ends[endMatch[1] as 'bottom' | 'top'], endMatch[2], scalar, s, path);
+    const ends = endMatch[1] === 'ends' ? c.ends : c.axisZ?.ends;
+    if (ends === undefined) throw new Error(`${path} is not a value of this scenario`);
+    setEndScalar(ends[endMatch[2] as 'bottom' | 'top'], endMatch[3], scalar, s, path);
   } else if (path.startsWith('loads.')) {
     const load = out.loads.find((l) => l.path === path);
     if (!load) throw new Error(`${path} is not a load of this scenario`);
@@ -61,6 +63,29 @@ export function withScalar(s: Scenario, path: string, scalar: Scalar): Scenario 
         c.ends.lateral = scalar;
         break;
       case 'column.imperfection.bow': c.bow = scalar; break;
+      case 'column.section.inertia_z':
+      case 'column.section.section_modulus_z':
+        if (c.section.inertiaZ === undefined) throw new Error(`${path} is not a value of this scenario`);
+        if (path.endsWith('inertia_z')) c.section.inertiaZ = scalar;
+        else c.section.sectionModulusZ = scalar;
+        break;
+      case 'column.section.corrosion.loss':
+      case 'column.section.corrosion.flange':
+      case 'column.section.corrosion.web': {
+        const k = c.section.geometry?.corrosion;
+        if (k === undefined) throw new Error(`${path} is not a value of this scenario`);
+        if (!path.endsWith('.web')) k.primary = scalar;
+        if (!path.endsWith('.flange')) k.secondary = scalar;
+        break;
+      }
+      case 'column.axis_z.ends.lateral':
+        if (!c.axisZ || c.axisZ.ends.lateral === null) throw new Error(`${path}: no lateral spring about z`);
+        c.axisZ.ends.lateral = scalar;
+        break;
+      case 'column.axis_z.imperfection.bow':
+        if (!c.axisZ) throw new Error(`${path} is not a value of this scenario`);
+        c.axisZ.bow = scalar;
+        break;
       case 'model_factor': out.modelFactor = scalar; break;
       default:
         throw new Error(`${path} is not a value of this scenario`);

@@ -10,6 +10,7 @@ import type { Scenario, StrengthModel } from '../scenario/types.js';
 import { withScalar } from './scenarioEdits.js';
 
 export const BOW_PATH = 'column.imperfection.bow';
+export const BOW_Z_PATH = 'column.axis_z.imperfection.bow';
 
 export interface ModelFactorUsed {
   /** `scenario`: the file's own model_factor; `default`: the strength model's default */
@@ -46,6 +47,8 @@ function modelFactorOf(s: Scenario): ModelFactorUsed {
 /** The scenario as `strength` sees it (default: the scenario's own strength model). */
 export function resolveStrengthModel(s: Scenario, strength: StrengthModel = s.strength): ResolvedScenario {
   let t: Scenario = strength === s.strength ? s : { ...s, strength };
+  // the curve chosen about z belongs to the scenario's own model; another model applies about both axes
+  if (strength !== s.strength && t.column.axisZ !== undefined) t = { ...t, column: { ...t.column, axisZ: { ...t.column.axisZ, strength } } };
   if (t.modelFactorOmitted && (!t.modelFactorDefault || t.modelFactorDefault.strength !== strength)) {
     const d = defaultModelUncertainty(strength);
     t = {
@@ -57,6 +60,11 @@ export function resolveStrengthModel(s: Scenario, strength: StrengthModel = s.st
   let bowDropped = false;
   if (!strengthUsesBow(strength) && t.column.bow.kind === 'random') {
     t = withScalar(t, BOW_PATH, { kind: 'fixed', value: makeDistribution(t.column.bow.spec).mean });
+    bowDropped = true;
+  }
+  const z = t.column.axisZ;
+  if (z !== undefined && !strengthUsesBow(z.strength) && z.bow.kind === 'random') {
+    t = withScalar(t, BOW_Z_PATH, { kind: 'fixed', value: makeDistribution(z.bow.spec).mean });
     bowDropped = true;
   }
   return { scenario: t, modelFactor: modelFactorOf(t), bowDropped };

@@ -9,7 +9,8 @@ import { fail, readScalar, type ReadContext } from './readScalar.js';
 import { PURE_NUMBER_UNIT, readQuantity, type DisplayUnit } from './quantity.js';
 import { ExpressionError } from './quantityExpression.js';
 import type { RawScalar, ScenarioShape } from './scenarioShape.js';
-import type { EvidenceRecord, Load, LoadBasis, Method, Scalar, Scenario, Target } from './types.js';
+import type { AxisZ, EvidenceRecord, Load, LoadBasis, Method, Scalar, Scenario, StrengthModel, Target } from './types.js';
+import { readSection } from './readSection.js';
 import { parsePeriod } from './readPeriod.js';
 import { betaOverPeriods } from '../probability/logProbability.js';
 import type { PathSegment } from './rawTree.js';
@@ -63,6 +64,28 @@ function readLoadTime(raw: RawLoad, path: readonly PathSegment[], ctx: ReadConte
 }
 
 const ZERO: Scalar = { kind: 'fixed', value: 0 };
+
+function readBow(raw: Parameters<typeof readScalar>[0] | undefined, strength: string, length: number, path: PathSegment[], ctx: ReadContext): Scalar {
+  if (raw !== undefined) return readScalar(raw, { kind: 'length', domain: 'any', columnLength: length }, path, ctx);
+  if (strength === 'first-yield' || strength.endsWith('-plus-bow')) {
+    fail(ctx, path, `is required for strength ${strength}: give the bow amplitude of the initial shape, e.g. bow: L/1000`);
+  }
+  return ZERO;
+}
+
+/** `column.axis_z`: the ends, bow and (EN 1993-1-1) curve about the second principal axis. */
+function readAxisZ(raw: NonNullable<ScenarioShape['column']['axis_z']>, frame: Scenario['column']['frame'], strength: StrengthModel, length: number, ctx: ReadContext): AxisZ {
+  const ends = readEnds(raw.ends as RawEnds, frame, ctx, ['column', 'axis_z', 'ends']);
+  const bow = readBow(raw.imperfection?.bow, strength, length, ['column', 'axis_z', 'imperfection', 'bow'], ctx);
+  let strengthZ: StrengthModel = strength;
+  if (raw.curve !== undefined) {
+    if (!/^en1993-(a0|a|b|c|d)$/.test(strength)) {
+      fail(ctx, ['column', 'axis_z', 'curve'], `applies with strength en1993-a0 | a | b | c | d (EN 1993-1-1 buckling curves), not with ${strength}; remove it or change the strength model`);
+    }
+    strengthZ = `en1993-${raw.curve}` as StrengthModel;
+  }
+  return { ends, bow, strength: strengthZ };
+}
 
 /**
  * A load's end eccentricities (docs/beam-column.md), or undefined when the file gives none. first-yield,
@@ -135,27 +158,15 @@ export function buildScenario(shape: ScenarioShape, lines: ReadonlyMap<string, n
   if (!(length > 0)) fail(ctx, ['column', 'length'], `must be greater than zero, got ${c.length}`);
 
   const positive = (kind: Parameters<typeof readScalar>[1]['kind']) => ({ kind, domain: 'positive' as const });
-  const section = {
-    area: readScalar(c.section.area, positive('area'), ['column', 'section', 'area'], ctx),
-    inertia: readScalar(c.section.inertia, positive('inertia'), ['column', 'section', 'inertia'], ctx),
-    sectionModulus: readScalar(c.section.section_modulus, positive('sectionModulus'), ['column', 'section', 'section_modulus'], ctx),
-  };
+  const section = readSection(c.section, length, c.axis_z !== undefined, ctx);
   const material = {
     E: readScalar(c.material.E, positive('stress'), ['column', 'material', 'E'], ctx),
     fy: readScalar(c.material.fy, positive('stress'), ['column', 'material', 'fy'], ctx),
   };
   const ends = readEnds(c.ends as RawEnds, frame, ctx);
 
-  const rawBow = c.imperfection?.bow;
-  let bow: Scalar;
-  if (rawBow === undefined) {
-    if (shape.strength === 'first-yield' || shape.strength.endsWith('-plus-bow')) {
-      fail(ctx, ['column', 'imperfection', 'bow'], `is required for strength ${shape.strength}: give the bow amplitude of the initial shape, e.g. bow: L/1000`);
-    }
-    bow = { kind: 'fixed', value: 0 };
-  } else {
-    bow = readScalar(rawBow, { kind: 'length', domain: 'any', columnLength: length }, ['column', 'imperfection', 'bow'], ctx);
-  }
+  const bow = readBow(c.imperfection?.bow, shape.strength, length, ['column', 'imperfection', 'bow'], ctx);
+  const axisZ = c.axis_z === undefined ? undefined : readAxisZ(c.axis_z, frame, shape.strength, length, ctx);
 
   const loadNames = Object.keys(shape.loads);
   if (loadNames.length === 0) fail(ctx, ['loads'], 'needs at least one axial load, e.g. dead: 420 kN');
@@ -191,7 +202,7 @@ export function buildScenario(shape: ScenarioShape, lines: ReadonlyMap<string, n
     fileName: provenance.fileName,
     format: provenance.format,
     sha256: provenance.sha256,
-    column: { length, frame, section, material, ends, bow },
+    column: { length, frame, section, material, ends, bow, ...(axisZ !== undefined ? { axisZ } : {}) },
     loads,
     modelFactor,
     ...(shape.model_factor === undefined ? { modelFactorOmitted: true } : {}),

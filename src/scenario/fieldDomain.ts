@@ -9,7 +9,8 @@ export function fieldDomain(path: string): Domain {
   if (path.startsWith('loads.')) return 'load';
   if (path.endsWith('.fixity')) return 'fixity';
   if (path.endsWith('.alignment_g')) return 'alignment';
-  if (path.endsWith('.rotation') || /^column\.ends\.(bottom|top)\.series\./.test(path) || path === 'column.ends.lateral') return 'nonnegative';
-  if (path === 'column.imperfection.bow') return 'any';
+  if (path.endsWith('.rotation') || /^column\.(axis_z\.)?ends\.(bottom|top)\.series\./.test(path) || /^column\.(axis_z\.)?ends\.lateral$/.test(path)) return 'nonnegative';
+  if (path.startsWith('column.section.corrosion.')) return 'nonnegative';
+  if (path === 'column.imperfection.bow' || path === 'column.axis_z.imperfection.bow') return 'any';
   return 'positive'; // section, material, model_factor
 }

@@ -83,8 +83,7 @@ export interface RawEnds {
   lateral?: RawScalar | undefined;
 }
 
-export function readEnds(raw: RawEnds, frame: Frame, ctx: ReadContext): { bottom: End; top: End; lateral: Scalar | null } {
-  const base: PathSegment[] = ['column', 'ends'];
+export function readEnds(raw: RawEnds, frame: Frame, ctx: ReadContext, base: PathSegment[] = ['column', 'ends']): { bottom: End; top: End; lateral: Scalar | null } {
   const bottom = readEnd(raw.bottom, frame, [...base, 'bottom'], ctx);
   const top = readEnd(raw.top, frame, [...base, 'top'], ctx);
   if (frame === 'braced') {

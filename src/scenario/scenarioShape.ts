@@ -311,6 +311,104 @@ const loadSchema = z.union([quantitySchema('force'), fixedLoadWithKeys, randomVa
   error: (iss) => (iss.input === undefined ? quantityMessage('force', undefined, false) : `${quantityMessage('force', iss.input, false)}, {value: Q, eccentricity: {top: Q, bottom: Q}}, or a random variable {dist: NAME, ..., kind, maximum_over | point_in_time, eccentricity}`),
 });
 
+const imperfectionSchema = strict(
+  { bow: quantityScalar('length', true).optional().meta({ description: 'bow amplitude e0 of the initial shape (affine to the first mode), e.g. L/1000' }) },
+  'the imperfection (bow)',
+);
+
+export const SECTION_SHAPE_NAMES = ['properties', 'i', 'rhs', 'chs', 'rect'] as const;
+export const HOLLOW_FINISHES = ['hot', 'cold'] as const;
+export const EN1993_CURVES = ['a0', 'a', 'b', 'c', 'd'] as const;
+
+const dimension = (what: string) => quantitySchema('length').meta({ description: what });
+const lossScalar = (what: string) => quantityScalar('length').optional().meta({ description: what });
+
+/** Thickness lost to corrosion, per exposed face (docs/sections.md). */
+const corrosionSchema = strict(
+  {
+    loss: lossScalar('loss per exposed face, the same on every plate (fixed or random)'),
+    flange: lossScalar('I/H only: loss per face of the flanges (with web instead of loss)'),
+    web: lossScalar('I/H only: loss per face of the web (with flange instead of loss)'),
+    zone: strict({ height: quantitySchema('length').meta({ description: 'height of the corroded zone above the base' }) }, 'the corroded zone {height: Q}')
+      .optional()
+      .meta({ description: 'the loss is limited to this height above the base (see docs/sections.md for how it is taken)' }),
+  },
+  'a corrosion loss {loss: Q} or {flange: Q, web: Q}, and zone: {height: Q} (optional)',
+).meta({ description: 'thickness lost to corrosion per exposed face; every section property is recomputed from the reduced dimensions' });
+
+const propertySection = strict(
+  {
+    shape: z.literal('properties').optional().meta({ description: 'optional: the section is given by its properties' }),
+    area: quantityScalar('area'),
+    inertia: quantityScalar('inertia'),
+    section_modulus: quantityScalar('sectionModulus'),
+    inertia_z: quantityScalar('inertia').optional().meta({ description: 'second moment of area about the other principal axis z (with column.axis_z)' }),
+    section_modulus_z: quantityScalar('sectionModulus').optional().meta({ description: 'elastic section modulus about z (with inertia_z)' }),
+  },
+  'the section (area, inertia, section_modulus about the buckling axis y; inertia_z, section_modulus_z about z)',
+);
+
+const sectionSchema = z
+  .discriminatedUnion(
+    'shape',
+    [
+      propertySection,
+      strict(
+        {
+          shape: z.literal('i'),
+          h: dimension('overall depth'),
+          b: dimension('flange width'),
+          tw: dimension('web thickness'),
+          tf: dimension('flange thickness'),
+          r: dimension('root radius of the fillets (0 or omitted: a welded section)').optional(),
+          corrosion: corrosionSchema.optional(),
+        },
+        'an I or H section {shape: i, h, b, tw, tf, r, corrosion}',
+      ),
+      strict(
+        {
+          shape: z.literal('rhs'),
+          h: dimension('outer depth (bending about y)'),
+          b: dimension('outer width'),
+          t: dimension('wall thickness'),
+          finish: choice(HOLLOW_FINISHES, 'how the section was made').optional().meta({ description: 'hot (EN 10210, default) or cold (EN 10219): sets the default corner radii' }),
+          ro: dimension('outer corner radius (default by finish)').optional(),
+          ri: dimension('inner corner radius (default by finish)').optional(),
+          corrosion: corrosionSchema.optional(),
+        },
+        'a rectangular or square hollow section {shape: rhs, h, b, t, finish, ro, ri, corrosion}',
+      ),
+      strict({ shape: z.literal('chs'), D: dimension('outside diameter'), t: dimension('wall thickness'), corrosion: corrosionSchema.optional() }, 'a circular hollow section {shape: chs, D, t, corrosion}'),
+      strict({ shape: z.literal('rect'), b: dimension('width (bending about z)'), h: dimension('depth (bending about y)'), corrosion: corrosionSchema.optional() }, 'a solid rectangle {shape: rect, b, h, corrosion}'),
+    ],
+    {
+      error: (iss) => {
+        const shape = (iss.input as { shape?: unknown } | undefined)?.shape;
+        if (iss.input === undefined) return 'is missing: give the section by its properties {area, inertia, section_modulus} or by its shape {shape: i | rhs | chs | rect, ...dimensions}';
+        if (typeof shape === 'string') return `unknown section shape '${shape}'${didYouMean(shape, SECTION_SHAPE_NAMES)}: use one of ${SECTION_SHAPE_NAMES.join(', ')}`;
+        return `expected the section by its properties {area, inertia, section_modulus} or by its shape {shape: i | rhs | chs | rect, ...dimensions}, got ${describeInput(iss.input)}`;
+      },
+    },
+  )
+  .meta({ description: 'the section: its properties {area, inertia, section_modulus[, inertia_z, section_modulus_z]} or its shape and dimensions {shape: i | rhs | chs | rect, ...}' });
+
+/** The second principal axis: its own ends and bow (docs/scenario-format.md). */
+const axisZSchema = strict(
+  {
+    ends: strict(
+      {
+        bottom: endSchema,
+        top: endSchema,
+        lateral: quantityScalar('translationalStiffness').optional().meta({ description: 'sway frames only: translational spring at the top in the direction of bending about z (default 0)' }),
+      },
+      'the end conditions about z (bottom, top, and for sway frames lateral)',
+    ),
+    imperfection: imperfectionSchema.optional(),
+    curve: choice(EN1993_CURVES, 'an EN 1993-1-1 buckling curve').optional().meta({ description: 'with strength en1993-X: the buckling curve about z (EN 1993-1-1 Table 6.2); default the same as about y' }),
+  },
+  'the axis z {ends: {bottom, top}, imperfection: {bow}, curve}',
+).meta({ description: 'buckling about the second principal axis z: its own end restraint and bow; the capacity is the smaller of the two axes' });
+
 const correlationEntry = z
   .tuple([z.string(), z.string(), z.number()], {
     error: (iss) =>
@@ -381,14 +479,7 @@ export const scenarioShape = strict(
           .regex(NUMBER_AND_UNIT, { error: (iss) => quantityMessage('length', iss.input, false) })
           .meta({ description: 'column length L: a fixed quantity, e.g. 4.2 m (it defines the geometry and L in expressions)', examples: ['4.2 m'] }),
         frame: choice(FRAMES, 'a frame type').meta({ description: 'braced: the ends do not move sideways; sway: the top may move, resisted only by `lateral`' }),
-        section: strict(
-          {
-            area: quantityScalar('area'),
-            inertia: quantityScalar('inertia'),
-            section_modulus: quantityScalar('sectionModulus'),
-          },
-          'the section (area, inertia, section_modulus about the buckling axis)',
-        ),
+        section: sectionSchema,
         material: strict({ E: quantityScalar('stress'), fy: quantityScalar('stress') }, 'the material (E, fy)'),
         ends: strict(
           {
@@ -398,12 +489,10 @@ export const scenarioShape = strict(
           },
           'the end conditions (bottom, top, and for sway frames lateral)',
         ),
-        imperfection: strict(
-          { bow: quantityScalar('length', true).optional().meta({ description: 'bow amplitude e0 of the initial shape (affine to the first mode), e.g. L/1000' }) },
-          'the imperfection (bow)',
-        ).optional(),
+        imperfection: imperfectionSchema.optional(),
+        axis_z: axisZSchema.optional(),
       },
-      'the column (length, frame, section, material, ends, imperfection)',
+      'the column (length, frame, section, material, ends, imperfection, axis_z)',
     ),
     loads: z
       .record(z.string(), loadSchema, {

@@ -4,6 +4,7 @@
  */
 import type { DistSpec } from '../probability/distribution.js';
 import type { DisplayUnit } from './quantity.js';
+import type { SectionDimensions } from '../sections/sectionDimensions.js';
 
 export type { DisplayUnit } from './quantity.js';
 
@@ -78,6 +79,31 @@ export type LoadBasis =
   | { readonly type: 'maximum'; readonly years: number }
   | { readonly type: 'point-in-time'; readonly renewalYears?: number };
 
+/** A section by its shape and dimensions (SI), with its corrosion loss (docs/sections.md). */
+export interface SectionGeometry {
+  readonly dimensions: SectionDimensions;
+  /**
+   * Loss per exposed face. Uniform (`perPlate` false): `primary` is `column.section.corrosion.loss`
+   * and `secondary` the same scalar. Per plate (I/H): `primary` the flanges', `secondary` the web's
+   * (`column.section.corrosion.flange` / `.web`).
+   */
+  readonly corrosion?: {
+    readonly primary: Scalar;
+    readonly secondary: Scalar;
+    readonly perPlate: boolean;
+    /** m above the base; absent: the whole length */
+    readonly zoneHeight?: number;
+  };
+}
+
+/** The second principal axis: its own ends, bow and (EN 1993-1-1) strength curve. */
+export interface AxisZ {
+  readonly ends: { readonly bottom: End; readonly top: End; readonly lateral: Scalar | null };
+  readonly bow: Scalar;
+  /** the strength model about z (differs from `strength` only by its EN 1993-1-1 curve) */
+  readonly strength: StrengthModel;
+}
+
 export interface Load {
   readonly name: string;
   /** `loads.<name>` */
@@ -129,7 +155,21 @@ export interface Scenario {
     /** m; always fixed (it defines the geometry and the meaning of L in expressions). */
     readonly length: number;
     readonly frame: Frame;
-    readonly section: { readonly area: Scalar; readonly inertia: Scalar; readonly sectionModulus: Scalar };
+    /**
+     * About the axis y (the only one when `axisZ` is absent). `inertiaZ`/`sectionModulusZ` are
+     * there with `axisZ`. A section given by its dimensions (`geometry`) has every property fixed
+     * at the mean corrosion loss, for people; the limit state recomputes them from `geometry`.
+     */
+    readonly section: {
+      readonly area: Scalar;
+      readonly inertia: Scalar;
+      readonly sectionModulus: Scalar;
+      readonly inertiaZ?: Scalar;
+      readonly sectionModulusZ?: Scalar;
+      readonly geometry?: SectionGeometry;
+    };
+    /** Buckling about the second principal axis z (docs/scenario-format.md); absent: one axis. */
+    readonly axisZ?: AxisZ;
     readonly material: { readonly E: Scalar; readonly fy: Scalar };
     readonly ends: {
       readonly bottom: End;

@@ -4,7 +4,22 @@
  * eccentricities when it has any), model factor.
  */
 import { flexibleComponents, seriesComponentPath } from './seriesEnd.js';
-import type { End, RandomVariable, Scalar, Scenario } from './types.js';
+import type { End, RandomVariable, Scalar, Scenario, SectionGeometry } from './types.js';
+
+/** The path prefix of everything about the second principal axis. */
+export const AXIS_Z = 'column.axis_z';
+export const CORROSION = 'column.section.corrosion';
+
+/** The corrosion-loss scalars by path: one uniform loss, or the flanges' and the web's. */
+export function corrosionScalars(g: SectionGeometry | undefined): NamedScalar[] {
+  const c = g?.corrosion;
+  if (c === undefined) return [];
+  if (!c.perPlate) return [{ path: `${CORROSION}.loss`, scalar: c.primary }];
+  return [
+    { path: `${CORROSION}.flange`, scalar: c.primary },
+    { path: `${CORROSION}.web`, scalar: c.secondary },
+  ];
+}
 
 export interface NamedScalar {
   readonly path: string;
@@ -26,13 +41,24 @@ export function listScalars(s: Omit<Scenario, 'correlation'>): NamedScalar[] {
     { path: 'column.section.area', scalar: c.section.area },
     { path: 'column.section.inertia', scalar: c.section.inertia },
     { path: 'column.section.section_modulus', scalar: c.section.sectionModulus },
+  ];
+  if (c.section.inertiaZ !== undefined) list.push({ path: 'column.section.inertia_z', scalar: c.section.inertiaZ });
+  if (c.section.sectionModulusZ !== undefined) list.push({ path: 'column.section.section_modulus_z', scalar: c.section.sectionModulusZ });
+  list.push(...corrosionScalars(c.section.geometry));
+  list.push(
     { path: 'column.material.E', scalar: c.material.E },
     { path: 'column.material.fy', scalar: c.material.fy },
     ...endScalar(c.ends.bottom, 'column.ends.bottom'),
     ...endScalar(c.ends.top, 'column.ends.top'),
-  ];
+  );
   if (c.ends.lateral !== null) list.push({ path: 'column.ends.lateral', scalar: c.ends.lateral });
   list.push({ path: 'column.imperfection.bow', scalar: c.bow });
+  const z = c.axisZ;
+  if (z !== undefined) {
+    list.push(...endScalar(z.ends.bottom, `${AXIS_Z}.ends.bottom`), ...endScalar(z.ends.top, `${AXIS_Z}.ends.top`));
+    if (z.ends.lateral !== null) list.push({ path: `${AXIS_Z}.ends.lateral`, scalar: z.ends.lateral });
+    list.push({ path: `${AXIS_Z}.imperfection.bow`, scalar: z.bow });
+  }
   for (const load of s.loads) {
     list.push({ path: load.path, scalar: load.value });
     if (load.eccentricity !== undefined) {

@@ -255,6 +255,10 @@ export function assessmentJson(a: Assessment, meta: RunMeta): unknown {
       interrupted: a.interrupted,
     },
   };
+  if (a.axes) {
+    const axis = (r: NonNullable<typeof a.axes>['y']) => ({ beta: r.beta, pf: r.pf, method: r.method, converged: r.converged });
+    doc.axes = { y: axis(a.axes.y), z: axis(a.axes.z), governing: a.axes.governing, governing_at_means: a.axes.governingAtMeans };
+  }
   if (a.restraint) doc.restraint = restraintJson(a.restraint);
   if (a.scenario.evidence) doc.evidence = evidenceJson(a.scenario);
   if (a.measurementUpdate) doc.evidence_update = measurementUpdateJson(a.measurementUpdate);

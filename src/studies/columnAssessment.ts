@@ -29,7 +29,7 @@ import type { DistSpec } from '../probability/distribution.js';
 import { scenarioForm } from './columnForm.js';
 import type { UnitSystem } from '../report/displayUnits.js';
 import { columnRestraint, studiedEnds, type ColumnRestraintResult, type EndChoice, type GoverningAssessor } from './columnRestraint.js';
-import { BOW_PATH, resolveStrengthModel, type ModelFactorUsed } from '../limitState/strengthChoice.js';
+import { BOW_PATH, BOW_Z_PATH, resolveStrengthModel, type ModelFactorUsed } from '../limitState/strengthChoice.js';
 import { betaByStrengthModel, type StrengthModelBeta } from './strengthComparison.js';
 import { characteristicValues, type CharacteristicSummary } from './characteristicValues.js';
 import { combinationModels, combinationSystemProblem } from '../limitState/combinationSystem.js';
@@ -38,6 +38,8 @@ import { combinationStudy, type CombinationStudy } from './combinationStudy.js';
 import { countEvaluations, evaluationsSoFar } from '../limitState/evaluationCount.js';
 import { STUDY_NAMES, type StudyName } from './studyNames.js';
 import { measurementUpdate, type MeasurementUpdateResult } from './measurementUpdate.js';
+import { axesReliability, axesSentence, type AxesReliability } from './axisReliability.js';
+import { axisCautions } from '../limitState/axisCautions.js';
 
 export const DEFAULT_METHODS: readonly Method[] = ['form', 'sorm', 'is', 'mc'];
 export const DEFAULT_SEED = 1;
@@ -111,6 +113,8 @@ export interface Assessment {
   combinations?: CombinationStudy;
   sensitivity?: SensitivityStudy;
   restraint?: ColumnRestraintResult;
+  /** two principal axes: FORM about each alone (absent: one axis) */
+  axes?: AxesReliability;
   samples: SamplesSummary;
   warnings: string[];
   interrupted: boolean;
@@ -309,7 +313,10 @@ export async function assessColumn(given: Scenario, opts: AssessOptions = {}): P
   let problem = problemFromModel(model);
   let recipe = columnRecipe(s);
   if (resolved.bowDropped) {
-    warnings.push(`${BOW_PATH}: strength model ${s.strength} does not use the bow, so it was taken out of the random variables (fixed at its mean; no effect on β)`);
+    const zDropped = given.column.axisZ?.bow.kind === 'random' && s.column.axisZ?.bow.kind === 'fixed';
+    const bowY = given.column.bow.kind === 'random' ? BOW_PATH : null;
+    const paths = [bowY, zDropped ? BOW_Z_PATH : null].filter((p) => p !== null).join(' and ');
+    warnings.push(`${paths}: strength model ${s.strength} does not use the bow, so it was taken out of the random variables (fixed at its mean; no effect on β)`);
   }
   let interrupted = false;
 
@@ -440,7 +447,16 @@ export async function assessColumn(given: Scenario, opts: AssessOptions = {}): P
   const other = inThread - named - simulatedHere;
   if (other > 0) calls.other = other;
   const studies = STUDY_NAMES.filter((n) => asked.has(n));
+  // two principal axes: each axis' own β, which governs, and what the check leaves out
+  const axesCounted = countEvaluations(() => (check.axes !== null ? axesReliability(lead ? lead.model : model, check.axes.governing) : null));
+  const axes = axesCounted.result;
+  if (axes !== null) {
+    calls.axes = axesCounted.calls;
+    warnings.unshift(axesSentence(axes));
+  }
+  warnings.push(...axisCautions(s));
   return {
+    ...(axes !== null ? { axes } : {}),
     scenario: s,
     model: lead ? lead.model : model,
     modelFactor: model.modelFactorUsed,

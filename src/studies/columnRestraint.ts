@@ -283,6 +283,9 @@ export async function columnRestraint(s: Scenario, opts: ColumnRestraintOptions 
     );
   }
   const notes: string[] = [];
+  if (s.column.axisZ !== undefined) {
+    notes.push('The restraint studied is about y (column.ends); the ends about z (column.axis_z.ends) stay as given, so where axis z governs no stiffness about y can lift β above what axis z allows.');
+  }
   const base: Record<string, Scalar> = {};
   for (const e of ends) base[e] = baseScalar(s, e, notes);
   /** The scenario with every studied end at factor × its base stiffness (random or known exactly). */

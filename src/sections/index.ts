@@ -1,0 +1,3 @@
+export * from './sectionProperties.js';
+export * from './sectionDimensions.js';
+export { defaultCornerRadii, type HollowFinish } from './cornerRadii.js';

@@ -1,0 +1,79 @@
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { afterAll, describe, expect, it } from 'vitest';
+import YAML from 'yaml';
+import { ROOT, runCli } from './runCli.js';
+
+const folder = mkdtempSync(join(tmpdir(), 'stanchion-axes-'));
+afterAll(() => rmSync(folder, { recursive: true, force: true }));
+
+const DEMO = 'scenarios/facade-h-column.yaml';
+const demo = () => YAML.parse(readFileSync(join(ROOT, DEMO), 'utf8')) as Record<string, any>;
+
+async function checkEdited(name: string, edit: (d: Record<string, any>) => void) {
+  const d = demo();
+  edit(d);
+  const file = join(folder, `${name}.yaml`);
+  writeFileSync(file, YAML.stringify(d));
+  return runCli(['check', file, '--json']);
+}
+
+describe('the facade demo: an H section by its dimensions, two axes, a corroded base', () => {
+  it('check --json names the governing axis, both axes, the section at the mean loss and the cautions', async () => {
+    const r = await runCli(['check', DEMO, '--json']);
+    expect(r.status).toBe(0);
+    const c = JSON.parse(r.stdout).check;
+    expect(c.governing_axis).toBe('z');
+    expect(c.axes.z.capacity).toBeLessThan(c.axes.y.capacity);
+    expect(c.capacity).toBe(c.axes.z.capacity);
+    expect(c.axes.z.strength).toBe('en1993-c');
+    expect(c.section_properties.at_mean_loss.A).toBeLessThan(c.section_properties.gross.A);
+    expect(c.cautions.join(' ')).toMatch(/lateral-torsional buckling are not checked/);
+    expect(c.cautions.join(' ')).toMatch(/reduced section is used over the whole length/);
+  });
+
+  it('restraint runs and says that it studies the ends about y', async () => {
+    const r = await runCli(['restraint', DEMO]);
+    expect(r.status).toBe(0);
+    expect(r.stdout).toMatch(/The restraint studied is about y/);
+    expect(r.stdout).toMatch(/^result: .* stiffness about y must be/m);
+  }, 60_000);
+
+  it('the terminal says which axis governs and carries the cautions', async () => {
+    const r = await runCli(['check', DEMO]);
+    expect(r.status).toBe(0);
+    expect(r.stdout).toMatch(/z \(governs\)/);
+    expect(r.stdout).toMatch(/torsional/);
+    expect(r.stdout).toMatch(/licensed engineer/);
+  });
+});
+
+describe('bad sections and axes: one message naming the field, exit 2', () => {
+  const cases: [string, (d: Record<string, any>) => void, RegExp, RegExp][] = [
+    ['unknown shape', (d) => { d.column.section.shape = 'hollow'; }, /column\.section\.shape/, /unknown section shape 'hollow'/],
+    ['missing axis z', (d) => { delete d.column.axis_z; }, /column\.axis_z/, /two principal axes/],
+    ['flanges thicker than the depth', (d) => { d.column.section.tf = '100 mm'; }, /column\.section\.tf/, /thinner than the depth/],
+    ['a bare number as a dimension', (d) => { d.column.section.h = 190; }, /column\.section\.h/, /length/],
+    ['loss through the flange', (d) => { d.column.section.corrosion.flange = '6 mm'; }, /column\.section\.corrosion\.flange/, /leaves nothing of the flange/],
+    ['loss and flange together', (d) => { d.column.section.corrosion.loss = '1 mm'; }, /column\.section\.corrosion\.(flange|web)/, /either loss/],
+    ['a zone longer than the column', (d) => { d.column.section.corrosion.zone.height = '6 m'; }, /column\.section\.corrosion\.zone\.height/, /must not exceed the column length/],
+    ['a curve with a model that has none', (d) => { d.strength = 'first-yield'; }, /column\.axis_z\.curve/, /applies with strength en1993/],
+    ['inertia_z without axis z', (d) => { d.column.section = { area: '5000 mm^2', inertia: '30e6 mm^4', section_modulus: '300e3 mm^3', inertia_z: '10e6 mm^4' }; delete d.column.axis_z; }, /column\.section\.inertia_z/, /axis_z/],
+    ['axis z without inertia_z', (d) => { d.column.section = { area: '5000 mm^2', inertia: '30e6 mm^4', section_modulus: '300e3 mm^3' }; }, /column\.section\.inertia_z/, /is missing/],
+    ['a per-plate loss on a hollow section', (d) => { d.column.section = { shape: 'rhs', h: '200 mm', b: '100 mm', t: '8 mm', corrosion: { flange: '1 mm' } }; }, /column\.section\.corrosion\.flange/, /I\/H section only/],
+    ['a random loss that may be negative', (d) => { d.column.section.corrosion.web = { dist: 'normal', mean: '0.6 mm', sd: '0.3 mm' }; }, /column\.section\.corrosion\.web/, /negative|>= 0|below/],
+    ['an unknown end about z', (d) => { d.column.axis_z.ends.top = 'hinged'; }, /column\.axis_z\.ends\.top/, /unknown end condition/],
+  ];
+  for (const [name, edit, field, message] of cases) {
+    it(name, async () => {
+      const r = await checkEdited(name.replace(/\W+/g, '-'), edit);
+      expect(r.status).toBe(2);
+      expect(r.stdout).toBe('');
+      expect(r.stderr).toMatch(field);
+      expect(r.stderr).toMatch(message);
+      expect(r.stderr.trim().split('\n')).toHaveLength(1);
+      expect(r.stderr).not.toMatch(/\n\s+at /);
+    });
+  }
+});

@@ -1,8 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { feFirstMode, feSecondOrder, type FeNodalShape } from '../../src/fe/feSecondOrder.js';
 import { beamColumnResponse } from '../../src/mechanics/beamColumn.js';
+import { columnCapacity } from '../../src/mechanics/columnCapacity.js';
 import { criticalLoad } from '../../src/mechanics/criticalLoad.js';
-import type { EndRestraint, Frame } from '../../src/mechanics/types.js';
+import { enEquivalentMomentFactor, enEquivalentMomentFactorUniformLoad, enFirstOrderDiagram } from '../../src/mechanics/en1993Interaction.js';
+import type { ColumnState, EndRestraint, Frame } from '../../src/mechanics/types.js';
 
 const rel = (a: number, b: number): number => Math.abs(a - b) / Math.abs(b);
 const EI = 200e9 * 15.4e-6;
@@ -113,5 +115,124 @@ describe('closed form vs finite elements under line load, top force, end couples
       expect(Math.abs(fe.rotation[end] - exact.rotation[end]) / ((scale * L) / EI)).toBeLessThan(1e-4);
     }
     expect(rel(fe.memberMax, exact.memberMax)).toBeLessThan(1e-4);
+  });
+});
+
+/** Bisection on a function rising through 0 on [lo, hi]. */
+function bisect(f: (x: number) => number, lo: number, hi: number): number {
+  for (let i = 0; i < 200; i++) {
+    const mid = 0.5 * (lo + hi);
+    if (f(mid) < 0) lo = mid;
+    else hi = mid;
+  }
+  return 0.5 * (lo + hi);
+}
+
+const A = 4.5e-3;
+const S = 0.27e-3;
+const fy = 275e6;
+const E = 200e9;
+const I = EI / E;
+function state(frame: Frame, r: EndRestraint, transverse: { line: number; top: number }, bow = 0): ColumnState {
+  return { E, fy, A, I, S, L, bow, frame, r, transverse };
+}
+
+describe('strength under transverse actions growing with the axial load', () => {
+  const pinned = { bottom: 0, top: 0 };
+  const flagpole: EndRestraint = { bottom: Infinity, top: 0, lateral: 0 };
+  const rho = 0.02; // w/P (1/m)
+  const tau = 0.01; // H/P
+
+  // first yield: P/A + M_max/S = fy with M_max = (w EI/P)(sec u − 1), w = ρP (Timoshenko & Gere 1961, ch. 1,
+  // beam-column under a uniform lateral load; section number from memory), solved by bisection
+  it('first-yield, pinned ends, uniform load: the secant-type closed form', () => {
+    const Pcr = criticalLoad(EI, L, 'braced', pinned).Pcr;
+    const f = (P: number) => P / A + (rho * EI * (1 / Math.cos((L / 2) * Math.sqrt(P / EI)) - 1)) / S - fy;
+    const expected = bisect(f, 0, Pcr * (1 - 1e-12));
+    const got = columnCapacity('first-yield', state('braced', pinned, { line: rho, top: 0 })).capacity;
+    expect(rel(got, expected)).toBeLessThan(1e-9);
+  });
+
+  // first yield of a flagpole: P/A + τ P tan(kL)/(k S) = fy (Timoshenko & Gere 1961, ch. 1, cantilever with a lateral
+  // end load; section number from memory), solved by bisection; an out-of-plumb φ adds φ to τ (EN 1993-1-1 §5.3.2(7))
+  it('first-yield, flagpole with a top force: H tan(kL)/k', () => {
+    const Pcr = criticalLoad(EI, L, 'sway', flagpole).Pcr;
+    const f = (P: number) => P / A + (tau * P * Math.tan(L * Math.sqrt(P / EI))) / (Math.sqrt(P / EI) * S) - fy;
+    const expected = bisect(f, 0, Pcr * (1 - 1e-12));
+    const got = columnCapacity('first-yield', state('sway', flagpole, { line: 0, top: tau })).capacity;
+    expect(rel(got, expected)).toBeLessThan(1e-9);
+    // a braced column ignores the top force: the bracing takes it
+    const braced = columnCapacity('first-yield', state('braced', pinned, { line: 0, top: tau }, L / 1000)).capacity;
+    expect(braced).toBe(columnCapacity('first-yield', { ...state('braced', pinned, { line: 0, top: 0 }, L / 1000) }).capacity);
+  });
+
+  // AISC 360-16 §H1.1 Eqs. H1-1a/b and Eq. E3-2 (from memory), M_r the exact second-order moment (w EI/P)(sec u − 1)
+  // (Timoshenko & Gere 1961, ch. 1), M_c = Fy S; the load solving H1-1 by bisection
+  it('aisc360-e3, pinned ends, uniform load', () => {
+    const Pcr = criticalLoad(EI, L, 'braced', pinned).Pcr;
+    const Pc = Math.pow(0.658, (A * fy) / Pcr) * fy * A;
+    const h1 = (P: number) => {
+      const Mr = rho * EI * (1 / Math.cos((L / 2) * Math.sqrt(P / EI)) - 1);
+      return (P / Pc >= 0.2 ? P / Pc + (8 / 9) * (Mr / (fy * S)) : P / (2 * Pc) + Mr / (fy * S)) - 1;
+    };
+    const got = columnCapacity('aisc360-e3', state('braced', pinned, { line: rho, top: 0 })).capacity;
+    expect(rel(got, bisect(h1, 0, Pc))).toBeLessThan(1e-9);
+  });
+
+  // EN 1993-1-1:2005 Eq. (6.61), χ of Eq. (6.49), k_yy of Table B.1 class 3, C_my of Table B.3 (tables from memory):
+  // pinned ends under a uniform load have M_y = w L²/8 and C_my = 0.95 (α_h = 0); the load solving Eq. (6.61) by bisection
+  it('en1993-b, pinned ends, uniform load: Eq. (6.61) with C_my = 0.95', () => {
+    const Pcr = criticalLoad(EI, L, 'braced', pinned).Pcr;
+    const lb = Math.sqrt((A * fy) / Pcr);
+    const Phi = 0.5 * (1 + 0.34 * (lb - 0.2) + lb * lb);
+    const chi = Math.min(1, 1 / (Phi + Math.sqrt(Phi * Phi - lb * lb)));
+    const eq661 = (P: number) => {
+      const n = P / (chi * A * fy);
+      return n + 0.95 * (1 + 0.6 * Math.min(lb, 1) * n) * ((rho * P * L * L) / 8 / (fy * S)) - 1;
+    };
+    const got = columnCapacity('en1993-b', state('braced', pinned, { line: rho, top: 0 })).capacity;
+    expect(rel(got, bisect(eq661, 0, chi * A * fy))).toBeLessThan(1e-9);
+    expect(() => columnCapacity('en1993-b', state('sway', flagpole, { line: 0, top: tau }))).toThrow(/horizontal force/);
+  });
+
+  // EN 1993-1-1:2005 Annex B, Table B.3 (from memory): h = end moment, s = span moment
+  it('C_my of Table B.3 for a moment diagram with a uniform load', () => {
+    expect(enEquivalentMomentFactorUniformLoad(0, 0, 1, 'braced')).toBeCloseTo(0.95, 15); // simply supported
+    // fixed-ended beam, first order: M_h = −wL²/12, M_s = +wL²/24 → α_s = −0.5, ψ = 1: 0.1 + 0.4 = 0.5
+    expect(enEquivalentMomentFactorUniformLoad(-2, -2, 1, 'braced')).toBeCloseTo(0.5, 15);
+    // α_s = 0.5, any ψ: 0.2 + 0.4 = 0.6
+    expect(enEquivalentMomentFactorUniformLoad(2, -1, 1, 'braced')).toBeCloseTo(0.6, 15);
+    // α_s = −0.5, ψ = −0.5: 0.1·1.5 + 0.4 = 0.55
+    expect(enEquivalentMomentFactorUniformLoad(2, -1, -1, 'braced')).toBeCloseTo(0.55, 15);
+    // α_h = 0.5: 0.975; α_h = −0.5 with ψ = −0.5: 0.95 + 0.05·(−0.5)·0 = 0.95
+    expect(enEquivalentMomentFactorUniformLoad(1, 0, 2, 'braced')).toBeCloseTo(0.975, 15);
+    expect(enEquivalentMomentFactorUniformLoad(-1, 0.5, 2, 'braced')).toBeCloseTo(0.95, 15);
+    expect(enEquivalentMomentFactorUniformLoad(1, 1, 3, 'sway')).toBe(0.9);
+    // no transverse load: the linear row 0.6 + 0.4ψ
+    for (const [eB, eT] of [[0.05, 0.02], [0.03, -0.01], [-0.04, 0.04]]) {
+      const d = enFirstOrderDiagram(eB, eT, 0, 'braced');
+      expect(d.cmy).toBeCloseTo(enEquivalentMomentFactor(eB, eT, 'braced'), 14);
+    }
+    // common practice: the simply supported diagram, max = q/8 at mid-span
+    expect(enFirstOrderDiagram(0, 0, 0.8, 'braced').maxMoment).toBeCloseTo(0.1, 15);
+  });
+
+  it('zero transverse actions give the eccentric capacity bit for bit', () => {
+    for (const model of ['first-yield', 'aisc360-e3', 'en1993-c'] as const) {
+      const withZero = { ...state('braced', { bottom: 2, top: 0.4 }, { line: 0, top: 0 }, L / 900), eccentricity: { bottom: 0.01, top: 0.03 } };
+      const { transverse: _t, ...without } = withZero;
+      expect(columnCapacity(model, withZero).capacity).toBe(columnCapacity(model, without).capacity);
+    }
+  });
+
+  it('capacity falls as the line load grows (braced) and as the top force grows (sway)', () => {
+    for (const model of ['first-yield', 'aisc360-e3', 'en1993-a'] as const) {
+      const caps = [0, 0.005, 0.02, 0.08].map((line) => columnCapacity(model, state('braced', { bottom: 1, top: 3 }, { line, top: 0 }, L / 1000)).capacity);
+      for (let i = 1; i < caps.length; i++) expect(caps[i]).toBeLessThan(caps[i - 1]!);
+    }
+    for (const model of ['first-yield', 'aisc360-e3'] as const) {
+      const caps = [0, 0.002, 0.01, 0.04].map((top) => columnCapacity(model, state('sway', { bottom: 8, top: 2 }, { line: 0, top }, L / 1000)).capacity);
+      for (let i = 1; i < caps.length; i++) expect(caps[i]).toBeLessThan(caps[i - 1]!);
+    }
   });
 });

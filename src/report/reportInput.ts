@@ -18,6 +18,7 @@ export type QuantityKind =
   | 'force' // N
   | 'rotationalStiffness' // N·m/rad
   | 'translationalStiffness' // N/m
+  | 'lineLoad' // N/m (force per length along the height)
   | 'moment' // N·m
   | 'dimensionless';
 

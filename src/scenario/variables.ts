@@ -1,10 +1,10 @@
 /**
  * Every value of a scenario by its contract path (docs/scenario-format.md), in one stable order:
- * section, material, ends (bottom, top, lateral), bow, loads in file order (each followed by its
- * eccentricities when it has any), model factor.
+ * section, material, ends (bottom, top, lateral), bow, out-of-plumb (when given), loads in file order
+ * (each followed by its eccentricities, applied moments, line load and top force when it has any), model factor.
  */
 import { flexibleComponents, seriesComponentPath } from './seriesEnd.js';
-import type { End, RandomVariable, Scalar, Scenario } from './types.js';
+import type { End, Load, RandomVariable, Scalar, Scenario } from './types.js';
 
 export interface NamedScalar {
   readonly path: string;
@@ -16,6 +16,18 @@ function endScalar(end: End, path: string): NamedScalar[] {
   if (end.type === 'ratio') return [{ path: `${path}.${end.from}`, scalar: end.input }];
   if (end.type === 'series') return flexibleComponents(end.components).map((c) => ({ path: seriesComponentPath(path, c.name), scalar: c.k }));
   return [];
+}
+
+/** A load's applied moments, line load and top force by path (the actions converted in time with the load). */
+export function loadActionScalars(load: Load): NamedScalar[] {
+  const out: NamedScalar[] = [];
+  if (load.moments !== undefined) {
+    out.push({ path: `${load.path}.moments.top`, scalar: load.moments.top });
+    out.push({ path: `${load.path}.moments.bottom`, scalar: load.moments.bottom });
+  }
+  if (load.transverse !== undefined) out.push({ path: `${load.path}.transverse`, scalar: load.transverse });
+  if (load.horizontal !== undefined) out.push({ path: `${load.path}.horizontal`, scalar: load.horizontal });
+  return out;
 }
 
 /** Every scalar (fixed or random), column length included as a fixed value. */
@@ -33,12 +45,14 @@ export function listScalars(s: Omit<Scenario, 'correlation'>): NamedScalar[] {
   ];
   if (c.ends.lateral !== null) list.push({ path: 'column.ends.lateral', scalar: c.ends.lateral });
   list.push({ path: 'column.imperfection.bow', scalar: c.bow });
+  if (c.outOfPlumb !== undefined) list.push({ path: 'column.imperfection.out_of_plumb', scalar: c.outOfPlumb });
   for (const load of s.loads) {
     list.push({ path: load.path, scalar: load.value });
     if (load.eccentricity !== undefined) {
       list.push({ path: `${load.path}.eccentricity.top`, scalar: load.eccentricity.top });
       list.push({ path: `${load.path}.eccentricity.bottom`, scalar: load.eccentricity.bottom });
     }
+    for (const { path, scalar } of loadActionScalars(load)) list.push({ path, scalar });
   }
   list.push({ path: 'model_factor', scalar: s.modelFactor });
   return list;

@@ -11,6 +11,7 @@ import { columnCapacity } from '../../src/mechanics/columnCapacity.js';
 import { form } from '../../src/reliability/form.js';
 import { en1993OutOfPlumb } from '../../src/scenario/buildScenario.js';
 import { loadScenario } from '../../src/scenario/loadScenario.js';
+import { characteristicValues } from '../../src/studies/characteristicValues.js';
 import { betaByStrengthModel } from '../../src/studies/strengthComparison.js';
 import { runCli } from '../cli/runCli.js';
 
@@ -148,6 +149,16 @@ describe('a sway column with a top force and an out-of-plumb', () => {
     const rows = betaByStrengthModel(s, form(problemFromModel(model)));
     expect(rows.find((r) => r.strength === 'en1993-b')!.note).toMatch(/top force/);
     expect(rows.find((r) => r.strength === 'aisc360-e3')!.beta).not.toBeNull();
+  });
+  // EN 1990 4.1.2 (common practice): an adverse variable action is characterised by its 95 % fractile, a permanent one by its mean
+  it('the top force is an adverse action of its load in the characteristic-value table', () => {
+    const model = buildColumnModel(loadScenario(text, 'sway.yaml'));
+    const f = form(problemFromModel(model));
+    const row = characteristicValues(model, f).rows.find((r) => r.variable === 'loads.dead.horizontal')!;
+    expect(f.designPointX[model.names.indexOf('loads.dead.horizontal')]!).toBeGreaterThan(row.mean);
+    expect(row.side).toBe('load');
+    expect(row.fractile).toBeNull(); // the dead load is permanent: its actions too
+    expect(row.characteristic).toBe(row.mean);
   });
 });
 

@@ -78,6 +78,28 @@ describe('fixed-base flagpole with a horizontal force at the top', () => {
   });
 });
 
+// source: the finite-element model with the tilted initial shape w0 = φ x itself (no force at the top), Przemieniecki,
+// Theory of Matrix Structural Analysis, 1968 (from memory): confirms that the out-of-plumb is exactly the top force P·φ
+// of EN 1993-1-1 §5.3.2(7) in the linear elastic member
+describe('out-of-plumb: the tilted geometry in finite elements equals the top force P·φ', () => {
+  it.each([
+    [{ bottom: Infinity, top: 0, lateral: 0 }],
+    [{ bottom: 4, top: 1.5, lateral: 0 }],
+    [{ bottom: 2, top: 0, lateral: 3 }],
+  ] as [EndRestraint][])('sway %o', (r) => {
+    const phi = 1 / 300;
+    const P = 0.5 * criticalLoad(EI, L, 'sway', r).Pcr;
+    const n = 128;
+    const tilt: FeNodalShape = { w: Float64Array.from({ length: n + 1 }, (_, i) => (phi * L * i) / n), slope: new Float64Array(n + 1).fill(phi * L) };
+    const fe = feSecondOrder(EI, L, 'sway', r, P, tilt);
+    const exact = beamColumnResponse(EI, L, 'sway', r, 0, 0, 0, P, { line: 0, top: P * phi });
+    for (const end of ['bottom', 'top'] as const) {
+      expect(Math.abs(fe.springMoment[end] - exact.springMoment[end]) / exact.memberMax).toBeLessThan(1e-4);
+    }
+    expect(rel(fe.memberMax, exact.memberMax)).toBeLessThan(1e-4);
+  });
+});
+
 describe('no transverse action: the same numbers bit for bit', () => {
   it.each([
     ['braced', { bottom: 2, top: 0.5 }],

@@ -58,12 +58,8 @@ export function columnCapacity(model: StrengthModel, s: ColumnState): CapacityRe
       return { capacity, Pcr, K, c };
     }
     case 'en1993': {
-      // the first-order diagram of Eq. 6.61 here is the braced member's; a sway column's needs its sway moments
-      if (topRatio !== 0 || (s.frame === 'sway' && t.line !== 0)) {
-        throw new RangeError(`strength model '${model}' has no check for a horizontal force, out-of-plumb or line load on a sway column (first-yield and aisc360-e3 do)`);
-      }
       const capacity = enEccentricCapacity({
-        alpha: EN_IMPERFECTION[kind.curve!], A: s.A, S: s.S, fy: s.fy, Pcr, eB: e.bottom, eT: e.top, ...(t.line !== 0 ? { q: t.line * s.L * s.L } : {}), frame: s.frame,
+        alpha: EN_IMPERFECTION[kind.curve!], A: s.A, S: s.S, fy: s.fy, Pcr, eB: e.bottom, eT: e.top, ...actions, r: s.r, frame: s.frame,
       });
       return { capacity, Pcr, K, c };
     }

@@ -1,6 +1,7 @@
 import { brentRoot } from './brent.js';
 import { enReductionFactor } from './en1993.js';
-import type { Frame } from './types.js';
+import { firstOrderSwayMoment } from './firstOrderSway.js';
+import type { EndRestraint, Frame } from './types.js';
 
 /**
  * In-plane member check under axial force and end moments of EN 1993-1-1:2005 §6.3.3, Eq. (6.61),
@@ -83,9 +84,34 @@ export interface EnInteractionColumn {
   Pcr: number;
   eB: number;
   eT: number;
-  /** uniform line load per unit axial load as a length, q = (w/P) L² (m; absent = 0); braced members only */
+  /** uniform line load per unit axial load as a length, q = (w/P) L² (m; absent = 0) */
   q?: number;
+  /** sway only: top force per unit axial load as a length, h = (H/P) L (m; absent = 0) */
+  h?: number;
+  /** the end springs: needed for the first-order sway moments of q and h (firstOrderSway.ts) */
+  r?: EndRestraint;
   frame: Frame;
+}
+
+/** Largest |c0 + c1 ξ + c2 ξ²| over ξ ∈ [0, 1]. */
+function maxAbsQuadratic(c0: number, c1: number, c2: number): number {
+  let best = Math.max(Math.abs(c0), Math.abs(c0 + c1 + c2));
+  if (c2 !== 0) {
+    const v = -c1 / (2 * c2);
+    if (v > 0 && v < 1) best = Math.max(best, Math.abs(c0 + c1 * v + c2 * v * v));
+  }
+  return best;
+}
+
+/**
+ * A sway member's first-order diagram per unit axial load: the end couples as for a braced member
+ * (linear, the part the springs take not deducted), plus the line load's and top force's moments of
+ * the spring-restrained member at P = 0 (firstOrderSway.ts), which need the springs to exist at all.
+ * Returns max |m| (m); C_my is 0.9 for the sway mode (note to Table B.3).
+ */
+export function enFirstOrderSwayDiagram(eB: number, eT: number, q: number, h: number, r: EndRestraint): number {
+  const s = firstOrderSwayMoment(r, q, h);
+  return maxAbsQuadratic(eB + s.c0, eT - eB + s.c1, s.c2);
 }
 
 /** χ N_Rk evaluated as en1993.ts's enCapacity does, so that n = 1 exactly at the concentric capacity. */
@@ -95,7 +121,10 @@ function flexuralResistance(alpha: number, lambdaBar: number, A: number, fy: num
 
 /**
  * Left-hand side of Eq. (6.61) at the axial load P, with M_y = P·max(|e_B|, |e_T|), or with a line load
- * the largest first-order moment P·max|m(ξ)| and C_my of Table B.3 for that diagram (enFirstOrderDiagram).
+ * the largest first-order moment P·max|m(ξ)| and C_my of Table B.3 for that diagram (enFirstOrderDiagram);
+ * a sway member under a line load or top force takes its spring-restrained first-order diagram
+ * (enFirstOrderSwayDiagram) and C_my = 0.9. χ comes from the sway (restrained) critical load, so these
+ * first-order moments with the sway buckling length are the route of EN 1993-1-1 §5.2.2(8).
  */
 export function enInteractionRatio(col: EnInteractionColumn, P: number): number {
   const lambdaBar = Math.sqrt((col.A * col.fy) / col.Pcr);
@@ -103,11 +132,17 @@ export function enInteractionRatio(col: EnInteractionColumn, P: number): number 
   const n = P / Nb;
   let M: number;
   let cmy: number;
-  if (col.q === undefined || col.q === 0) {
+  const q = col.q ?? 0;
+  const h = col.h ?? 0;
+  if (q === 0 && h === 0) {
     M = P * Math.max(Math.abs(col.eB), Math.abs(col.eT));
     cmy = enEquivalentMomentFactor(col.eB, col.eT, col.frame);
+  } else if (col.frame === 'sway') {
+    if (col.r === undefined) throw new RangeError('the sway check under a line load or top force needs the end springs');
+    M = P * enFirstOrderSwayDiagram(col.eB, col.eT, q, h, col.r);
+    cmy = 0.9;
   } else {
-    const d = enFirstOrderDiagram(col.eB, col.eT, col.q, col.frame);
+    const d = enFirstOrderDiagram(col.eB, col.eT, q, col.frame);
     M = P * d.maxMoment;
     cmy = d.cmy;
   }

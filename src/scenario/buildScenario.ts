@@ -122,16 +122,12 @@ function readActions(raw: RawLoad, name: string, shape: ScenarioShape, ctx: Read
     const path = ['loads', name, 'transverse'];
     out.transverse = readScalar(raw.transverse, { kind: 'lineLoad', domain: 'any' }, path, ctx);
     refuse(path, out.transverse, 'a transverse load along the height');
-    if (nonZero(out.transverse) && shape.column.frame === 'sway' && strength.startsWith('en1993-')) {
-      fail(ctx, path, `strength model '${strength}' has no check for a transverse load on a sway column yet (EN 1993-1-1 Eq. 6.61 needs the first-order sway moments): use strength: first-yield or aisc360-e3, or frame: braced`);
-    }
   }
   if (raw.horizontal !== undefined) {
     const path = ['loads', name, 'horizontal'];
     out.horizontal = readScalar(raw.horizontal, { kind: 'force', domain: 'any' }, path, ctx);
     if (nonZero(out.horizontal)) {
       if (shape.column.frame !== 'sway') fail(ctx, path, 'a horizontal force at the top applies only to a sway frame (in a braced frame the bracing takes it); remove it or set frame: sway');
-      if (strength.startsWith('en1993-')) fail(ctx, path, `strength model '${strength}' has no check for a horizontal force at the top yet (EN 1993-1-1 Eq. 6.61 needs the first-order sway moments): use strength: first-yield or aisc360-e3`);
     }
     refuse(path, out.horizontal, 'a horizontal force at the top');
   }
@@ -152,8 +148,8 @@ function readOutOfPlumb(shape: ScenarioShape, length: number, ctx: ReadContext):
   if (raw === 'en1993') ctx.units['column.imperfection.out_of_plumb'] = PURE_NUMBER_UNIT;
   if (nonZero(scalar)) {
     if (shape.column.frame !== 'sway') fail(ctx, path, 'an out-of-plumb applies only to a sway frame (a braced column\'s ends do not move sideways relative to each other; its imperfection is the bow); remove it or set frame: sway');
-    if (shape.strength.startsWith('en1993-') || shape.strength.startsWith('first-yield-en1993-')) {
-      fail(ctx, path, `strength model '${shape.strength}' has no check for an out-of-plumb yet: use strength: first-yield or aisc360-e3`);
+    if (shape.strength.startsWith('first-yield-en1993-')) {
+      fail(ctx, path, `strength model '${shape.strength}' has no check for an out-of-plumb: use strength: first-yield, en1993-X (EN 1993-1-1 Eq. 6.61) or aisc360-e3 (AISC 360 H1-1), or drop it`);
     }
   }
   if (scalar.kind === 'fixed' && !(Math.abs(scalar.value) < 0.1)) fail(ctx, path, `must be a small angle in radians (|φ| < 0.1), got ${scalar.value}`);

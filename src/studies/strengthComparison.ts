@@ -11,18 +11,18 @@ import { scenarioForm } from './columnForm.js';
 
 const nonZero = (v: Scenario['modelFactor'] | undefined) => v !== undefined && !(v.kind === 'fixed' && v.value === 0);
 
-/** Some load has an end eccentricity, applied moment or line load that is not a fixed zero, or the column a top force or out-of-plumb. */
+/** Some load has an end eccentricity, applied moment, line load or top force that is not a fixed zero, or the column an out-of-plumb. */
 function hasEccentricity(s: Scenario): boolean {
   return (
-    s.loads.some((l) => (l.eccentricity !== undefined && (nonZero(l.eccentricity.top) || nonZero(l.eccentricity.bottom))) || (l.moments !== undefined && (nonZero(l.moments.top) || nonZero(l.moments.bottom)))) ||
-    hasSwayAction(s)
+    nonZero(s.column.outOfPlumb) ||
+    s.loads.some(
+      (l) =>
+        (l.eccentricity !== undefined && (nonZero(l.eccentricity.top) || nonZero(l.eccentricity.bottom))) ||
+        (l.moments !== undefined && (nonZero(l.moments.top) || nonZero(l.moments.bottom))) ||
+        nonZero(l.transverse) ||
+        nonZero(l.horizontal),
+    )
   );
-}
-
-/** Actions EN 1993-1-1 Eq. 6.61 is not set up for here: a top force, an out-of-plumb, or a line load on a sway column (columnCapacity.ts). */
-function hasSwayAction(s: Scenario): boolean {
-  if (s.column.frame !== 'sway') return s.loads.some((l) => nonZero(l.transverse));
-  return nonZero(s.column.outOfPlumb) || s.loads.some((l) => nonZero(l.horizontal) || nonZero(l.transverse));
 }
 
 /** The models every assessment compares (the equivalent-bow forms repeat their curve's β; they are added only when chosen). */
@@ -49,7 +49,6 @@ export function betaByStrengthModel(given: Scenario, chosenForm: FormResult): St
   const models = COMPARED_STRENGTH_MODELS.includes(given.strength) ? COMPARED_STRENGTH_MODELS : [...COMPARED_STRENGTH_MODELS, given.strength];
   const noBow = given.column.bow.kind === 'fixed' && given.column.bow.value === 0;
   const eccentric = hasEccentricity(given);
-  const swayActions = given.column.frame === 'sway' && hasSwayAction(given);
   return models.map((strength) => {
     const resolved = resolveStrengthModel(given, strength);
     const chosen = strength === given.strength;
@@ -58,9 +57,6 @@ export function betaByStrengthModel(given: Scenario, chosenForm: FormResult): St
     }
     if (eccentric && strengthModelKind(strength)?.family === 'equivalent-bow') {
       return { strength, beta: null, pf: null, converged: false, modelFactor: resolved.modelFactor, chosen, note: 'has no check for eccentric loads or transverse actions' };
-    }
-    if (swayActions && strengthModelKind(strength)?.family === 'en1993') {
-      return { strength, beta: null, pf: null, converged: false, modelFactor: resolved.modelFactor, chosen, note: 'has no check here for a top force, out-of-plumb or line load on a sway column' };
     }
     const r = chosen ? chosenForm : scenarioForm(resolved.scenario);
     return { strength, beta: r.beta, pf: r.pf, converged: r.converged, modelFactor: resolved.modelFactor, chosen };

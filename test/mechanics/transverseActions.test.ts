@@ -3,6 +3,7 @@ import { feFirstMode, feSecondOrder, type FeNodalShape } from '../../src/fe/feSe
 import { beamColumnResponse } from '../../src/mechanics/beamColumn.js';
 import { columnCapacity } from '../../src/mechanics/columnCapacity.js';
 import { criticalLoad } from '../../src/mechanics/criticalLoad.js';
+import { firstOrderSwayMoment } from '../../src/mechanics/firstOrderSway.js';
 import { enEquivalentMomentFactor, enEquivalentMomentFactorUniformLoad, enFirstOrderDiagram } from '../../src/mechanics/en1993Interaction.js';
 import type { ColumnState, EndRestraint, Frame } from '../../src/mechanics/types.js';
 
@@ -97,6 +98,35 @@ describe('out-of-plumb: the tilted geometry in finite elements equals the top fo
       expect(Math.abs(fe.springMoment[end] - exact.springMoment[end]) / exact.memberMax).toBeLessThan(1e-4);
     }
     expect(rel(fe.memberMax, exact.memberMax)).toBeLessThan(1e-4);
+  });
+});
+
+// common practice (first-order statics of a cantilever and of a sway member fixed at both ends), and the P → 0 limit
+// of the second-order closed form over a grid of springs
+describe('first-order moments of the spring-restrained sway member', () => {
+  it('flagpole: H·L and w L²/2 at the base; both ends fixed: H·L/2 at each end', () => {
+    const flag = firstOrderSwayMoment({ bottom: Infinity, top: 0, lateral: 0 }, 0, 1);
+    expect(flag.c0).toBeCloseTo(-1, 14);
+    expect(flag.c0 + flag.c1 + flag.c2).toBeCloseTo(0, 14);
+    const wind = firstOrderSwayMoment({ bottom: Infinity, top: 0, lateral: 0 }, 1, 0);
+    expect(Math.abs(wind.c0)).toBeCloseTo(0.5, 14);
+    const fixed = firstOrderSwayMoment({ bottom: Infinity, top: Infinity, lateral: 0 }, 0, 1);
+    expect(Math.abs(fixed.c0)).toBeCloseTo(0.5, 14);
+    expect(Math.abs(fixed.c0 + fixed.c1 + fixed.c2)).toBeCloseTo(0.5, 14);
+  });
+  it.each([
+    [{ bottom: 0.5, top: 3, lateral: 0 }],
+    [{ bottom: 6, top: 0, lateral: 2 }],
+    [{ bottom: Infinity, top: 1, lateral: 5 }],
+    [{ bottom: 0, top: 2, lateral: 4 }],
+  ] as [EndRestraint][])('%o: the closed form at P → 0', (r) => {
+    const P = 1e-5 * criticalLoad(EI, L, 'sway', r).Pcr;
+    const w = 2e3, H = 5e3;
+    const closed = beamColumnResponse(EI, L, 'sway', r, 0, 0, 0, P, { line: w, top: H });
+    const m = firstOrderSwayMoment(r, (w / P) * L * L, (H / P) * L);
+    for (const xi of [0, 0.3, 0.7, 1]) {
+      expect(Math.abs(P * (m.c0 + m.c1 * xi + m.c2 * xi * xi) - closed.moment(xi * L)) / closed.memberMax).toBeLessThan(1e-3);
+    }
   });
 });
 
@@ -214,7 +244,21 @@ describe('strength under transverse actions growing with the axial load', () => 
     };
     const got = columnCapacity('en1993-b', state('braced', pinned, { line: rho, top: 0 })).capacity;
     expect(rel(got, bisect(eq661, 0, chi * A * fy))).toBeLessThan(1e-9);
-    expect(() => columnCapacity('en1993-b', state('sway', flagpole, { line: 0, top: tau }))).toThrow(/horizontal force/);
+  });
+
+  // EN 1993-1-1:2005 §5.2.2(8) and Eq. (6.61) (from memory): first-order sway moments with χ from the sway critical
+  // load, C_my = 0.9 for a sway mode (note to Table B.3); the flagpole's first-order base moment H·L (common practice)
+  it('en1993-c, flagpole with a top force: M_y = H·L, C_my = 0.9', () => {
+    const Pcr = criticalLoad(EI, L, 'sway', flagpole).Pcr;
+    const lb = Math.sqrt((A * fy) / Pcr);
+    const Phi = 0.5 * (1 + 0.49 * (lb - 0.2) + lb * lb);
+    const chi = Math.min(1, 1 / (Phi + Math.sqrt(Phi * Phi - lb * lb)));
+    const eq661 = (P: number) => {
+      const n = P / (chi * A * fy);
+      return n + 0.9 * (1 + 0.6 * Math.min(lb, 1) * n) * ((tau * P * L) / (fy * S)) - 1;
+    };
+    const got = columnCapacity('en1993-c', state('sway', flagpole, { line: 0, top: tau })).capacity;
+    expect(rel(got, bisect(eq661, 0, chi * A * fy))).toBeLessThan(1e-9);
   });
 
   // EN 1993-1-1:2005 Annex B, Table B.3 (from memory): h = end moment, s = span moment

@@ -57,6 +57,10 @@ export async function runMechanicsBench(seconds = 0.5): Promise<string[]> {
     const fe = rate(seconds, 4, (i) => feEigenvalues(frame, { bottom: RA[i], top: RB[i] }, 32, 1)[0]);
     const fast = rate(seconds, 4096, (i) => fastPhi(frame, RA[i], RB[i]));
     const capExact = rate(seconds, 256, (i) => columnCapacity('first-yield', { E, fy, A, I, S, L, bow, frame, r: { bottom: RA[i], top: RB[i] } }).capacity);
+    // the beam-column path (docs/beam-column.md): an eccentric load, then with a line load and a top force as well
+    const capEccentric = rate(seconds, 64, (i) => columnCapacity('first-yield', { E, fy, A, I, S, L, bow, frame, r: { bottom: RA[i], top: RB[i] }, eccentricity: { bottom: 0, top: 0.02 } }).capacity);
+    const transverse = { line: 0.01, top: frame === 'sway' ? 0.005 : 0 };
+    const capActions = rate(seconds, 64, (i) => columnCapacity('first-yield', { E, fy, A, I, S, L, bow, frame, r: { bottom: RA[i], top: RB[i] }, eccentricity: { bottom: 0, top: 0.02 }, transverse }).capacity);
     const fastCap = makeFastCapacityFromRatio(frame, 'first-yield');
     const capFast = rate(seconds, 4096, (i) => fastCap(E, fy, A, I, S, L, bow, RA[i], RB[i]));
     const f = floor.perSecond;
@@ -69,8 +73,10 @@ export async function runMechanicsBench(seconds = 0.5): Promise<string[]> {
     lines.push(row('fast φ (bicubic fixity table)', fast));
     lines.push(row('exact first-yield capacity (columnCapacity)', capExact));
     lines.push(row('fast first-yield capacity (Pcr and c)', capFast));
+    lines.push(row('exact first-yield capacity, eccentric load', capEccentric));
+    lines.push(row('... with line load (and top force in sway)', capActions));
     // keep the sinks alive so nothing is optimised away
-    if (Number.isNaN(floor.sink + exactCore.sink + exactPublic.sink + fe.sink + fast.sink + capExact.sink + capFast.sink)) lines.push('  (NaN seen)');
+    if (Number.isNaN(floor.sink + exactCore.sink + exactPublic.sink + fe.sink + fast.sink + capExact.sink + capFast.sink + capEccentric.sink + capActions.sink)) lines.push('  (NaN seen)');
   }
   return lines;
 }

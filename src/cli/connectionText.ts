@@ -21,6 +21,16 @@ function classText(c: EndClassification, system: UnitSystem): string {
 export function connectionBasis(m: ConnectionResponse, where: string, system: UnitSystem): string {
   if (!m.stable) return `  at ${where} the load ${formatQuantity(m.load, 'force', system)} reaches Pcr: no equilibrium, the moments are unbounded.`;
   const e = m.eccentricity;
+  const t = m.transverse;
+  if (t !== undefined && (t.line !== 0 || t.top !== 0)) {
+    const parts = [`P = ${formatQuantity(m.load, 'force', system)}`];
+    if (e !== undefined && (e.bottom !== 0 || e.top !== 0)) {
+      parts.push(`end couples bottom ${formatQuantity(m.load * e.bottom, 'moment', system)}, top ${formatQuantity(m.load * e.top, 'moment', system)} (P·e and applied moments)`);
+    }
+    if (t.line !== 0) parts.push(`line load ${formatQuantity(t.line, 'lineLoad', system)} along the height`);
+    if (t.top !== 0) parts.push(`horizontal force ${formatQuantity(t.top, 'force', system)} at the top (with P·φ of any out-of-plumb)`);
+    return `  at ${where}: ${parts.join(', ')}, bow ${formatQuantity(m.bow, 'length', system)} on its unfavourable side`;
+  }
   if (e !== undefined && (e.bottom !== 0 || e.top !== 0)) {
     return `  at ${where}: P = ${formatQuantity(m.load, 'force', system)} at end eccentricities bottom ${formatQuantity(e.bottom, 'length', system)}, top ${formatQuantity(e.top, 'length', system)} (load-weighted; the moments include the end couples P·e), bow ${formatQuantity(m.bow, 'length', system)} on its unfavourable side`;
   }

@@ -124,7 +124,9 @@ export function feFirstMode(frame: FeFrame, r: FeRestraint, elements: number, it
 /**
  * The second-order response to the initial shape w0 (nodal values, m) under P (N), and to external
  * couples (N·m) applied to the end nodes, positive when they turn the node towards +w going up
- * (a load P at eccentricity e on the +w side gives +P·e at the bottom and −P·e at the top).
+ * (a load P at eccentricity e on the +w side gives +P·e at the bottom and −P·e at the top), to a
+ * uniform line load `line` (N/m, consistent nodal loads of the Hermite element) and to a horizontal
+ * force `top` (N) at the top node (acts only where the top may move: sway), both positive towards +w.
  */
 export function feSecondOrder(
   EI: number,
@@ -134,6 +136,7 @@ export function feSecondOrder(
   P: number,
   w0: FeNodalShape,
   endCouples: { bottom: number; top: number } = { bottom: 0, top: 0 },
+  actions: { line: number; top: number } = { line: 0, top: 0 },
 ): FeSecondOrderResult {
   const elements = w0.w.length - 1;
   const lambda = (P * L * L) / EI;
@@ -155,6 +158,11 @@ export function feSecondOrder(
   const fExt = new Float64Array(N);
   fExt[1] = (endCouples.bottom * L * L) / EI;
   fExt[N - 1] = (endCouples.top * L * L) / EI;
+  fExt[N - 2] += (actions.top * L * L * L) / EI;
+  // element load vector of the line load on the dimensionless element: W h/2, W h²/12, W h/2, −W h²/12
+  const W = (actions.line * L * L * L * L) / EI;
+  const fl = [(W * h) / 2, (W * h * h) / 12, (W * h) / 2, (-W * h * h) / 12];
+  for (let el = 0; el < elements; el++) for (let i = 0; i < 4; i++) fExt[2 * el + i] += fl[i];
   const rhs = Float64Array.from(keep, (d) => lambda * gw0[d] + fExt[d]);
   const vFree = solveCholesky(choleskyInPlace(A, n), n, rhs);
   const v = new Float64Array(N);
@@ -169,6 +177,7 @@ export function feSecondOrder(
     const fe = [0, 0, 0, 0];
     for (let i = 0; i < 4; i++) {
       for (let j = 0; j < 4; j++) fe[i] += (ke[i * 4 + j] - lambda * kg[i * 4 + j]) * v[o + j] - lambda * kg[i * 4 + j] * w0f[o + j];
+      fe[i] -= fl[i]; // the element's own load is not an end force
       fInt[o + i] += fe[i];
     }
     const share = (node: number) => (node === 0 || node === elements ? 1 : 0.5);
@@ -193,7 +202,7 @@ export function feSecondOrder(
     v: splitVector(v),
     rotation: { bottom: v[1] / L, top: v[N - 1] / L },
     // the spring (or support) supplies what the applied couple leaves over of the element end forces
-    springMoment: { bottom: (fExt[1] - fInt[1]) * toMoment, top: (fExt[N - 1] - fInt[N - 1]) * toMoment },
+    springMoment: { bottom: ((endCouples.bottom * L * L) / EI - fInt[1]) * toMoment, top: ((endCouples.top * L * L) / EI - fInt[N - 1]) * toMoment },
     memberMax,
     memberMaxAt,
   };

@@ -207,20 +207,39 @@ export function buildColumnModel(given: Scenario, combination: LoadCombination =
   const zero: Slot = { index: -1, value: 0 };
   const eccTop = s.loads.map((l) => (l.eccentricity ? slotOf(l.eccentricity.top, `${l.path}.eccentricity.top`, names) : zero));
   const eccBottom = s.loads.map((l) => (l.eccentricity ? slotOf(l.eccentricity.bottom, `${l.path}.eccentricity.bottom`, names) : zero));
-  const eccentric = [...eccTop, ...eccBottom].some((e) => e.index >= 0 || e.value !== 0);
-  // every load scaled together: the end couples are Σ P_i e_i, i.e. the total load at the
-  // load-weighted eccentricity; written to ecc[0] (bottom), ecc[1] (top). No column in tension is eccentric.
+  // applied end moments, line load and top force per load (docs/beam-column.md), and the out-of-plumb
+  const momTop = s.loads.map((l) => (l.moments ? slotOf(l.moments.top, `${l.path}.moments.top`, names) : zero));
+  const momBottom = s.loads.map((l) => (l.moments ? slotOf(l.moments.bottom, `${l.path}.moments.bottom`, names) : zero));
+  const line = s.loads.map((l) => (l.transverse ? slotOf(l.transverse, `${l.path}.transverse`, names) : zero));
+  const horizontal = s.loads.map((l) => (l.horizontal ? slotOf(l.horizontal, `${l.path}.horizontal`, names) : zero));
+  const plumb = c.outOfPlumb === undefined ? zero : slotOf(c.outOfPlumb, 'column.imperfection.out_of_plumb', names);
+  const live = (e: Slot) => e.index >= 0 || e.value !== 0;
+  const transverse = [...line, ...horizontal, plumb].some(live);
+  const eccentric = [...eccTop, ...eccBottom, ...momTop, ...momBottom].some(live) || transverse;
+  const side = new Float64Array(2);
+  // every load scaled together: the end couples are Σ P_i e_i + Σ M_i, i.e. the total load at the
+  // load-weighted eccentricity; written to ecc[0] (bottom), ecc[1] (top). The line load and the top force
+  // (with P·φ of the out-of-plumb) per unit of total axial load go to side[0] (1/m), side[1]. No column in
+  // tension carries any of them (as for eccentricities: the tool is for compression members).
   const ecc = new Float64Array(2);
   const effectiveEccentricity = (x: Float64Array): void => {
-    let sum = 0, mB = 0, mT = 0;
+    let sum = 0, mB = 0, mT = 0, w = 0, h = 0;
     for (let k = 0; k < loads.length; k++) {
       const p = read(loads[k], x);
       sum += p;
       mB += p * read(eccBottom[k], x);
       mT += p * read(eccTop[k], x);
     }
+    for (let k = 0; k < loads.length; k++) {
+      mB += read(momBottom[k], x);
+      mT += read(momTop[k], x);
+      w += read(line[k], x);
+      h += read(horizontal[k], x);
+    }
     ecc[0] = sum > 0 ? mB / sum : 0;
     ecc[1] = sum > 0 ? mT / sum : 0;
+    side[0] = sum > 0 ? w / sum : 0;
+    side[1] = sum > 0 ? h / sum + read(plumb, x) : 0;
   };
   const section = sectionSource(s, names);
   const frame = c.frame;
@@ -238,6 +257,7 @@ export function buildColumnModel(given: Scenario, combination: LoadCombination =
       if (axisEccentric) effectiveEccentricity(x);
       return {
         ...(axisEccentric ? { eccentricity: { bottom: ecc[0], top: ecc[1] } } : {}),
+        ...(axisEccentric && transverse ? { transverse: { line: side[0], top: side[1] } } : {}),
         E: read(E, x),
         fy: read(fy, x),
         A: A(x),
@@ -264,7 +284,7 @@ export function buildColumnModel(given: Scenario, combination: LoadCombination =
       if (axisEccentric) {
         effectiveEccentricity(x);
         // the tabulated path knows only the concentric column: an eccentric sample takes the exact one
-        if (ecc[0] !== 0 || ecc[1] !== 0) return columnCapacity(strength, state(x)).capacity;
+        if (ecc[0] !== 0 || ecc[1] !== 0 || side[0] !== 0 || side[1] !== 0) return columnCapacity(strength, state(x)).capacity;
       }
       if (lateralAlwaysZero) {
         return fast(e, read(fy, x), A(x), i, S(x), L, read(bow, x), bottom(x, EI), top(x, EI));

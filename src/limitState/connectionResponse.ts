@@ -17,8 +17,15 @@ import type { ColumnModel } from './columnModel.js';
 export type EndKey = 'bottom' | 'top';
 const END_KEYS: readonly EndKey[] = ['bottom', 'top'];
 
-/** What connectionResponseAt gives: the bowed column's response, with the load's end eccentricities when it has any. */
-export type ConnectionResponse = EndSpringMoments & { eccentricity?: { bottom: number; top: number } };
+/**
+ * What connectionResponseAt gives: the bowed column's response, with the load's end eccentricities when it
+ * has any (applied end moments folded in as M/P) and the transverse actions at that load (line load N/m,
+ * top force N including P·φ of the out-of-plumb) when it has any.
+ */
+export type ConnectionResponse = EndSpringMoments & {
+  eccentricity?: { bottom: number; top: number };
+  transverse?: { line: number; top: number };
+};
 
 /**
  * Second-order moments and rotations at x; the load is the demand (sum of loads) at x. An eccentric
@@ -30,8 +37,12 @@ export function connectionResponseAt(model: ColumnModel, x: Float64Array): Conne
   const bowed = endSpringMoments(st.E * st.I, st.L, st.frame, st.r, st.bow, P);
   const e = st.eccentricity;
   if (e === undefined) return bowed;
-  if (!bowed.stable || (e.bottom === 0 && e.top === 0)) return { ...bowed, eccentricity: e };
-  const b = beamColumnResponse(st.E * st.I, st.L, st.frame, st.r, st.bow, e.bottom, e.top, P);
+  // the actions at this load: every action scales with the axial load (columnModel.ts)
+  const t = st.transverse;
+  const actions = t === undefined ? undefined : { line: t.line * P, top: st.frame === 'sway' ? t.top * P : 0 };
+  const withActions = actions !== undefined && (actions.line !== 0 || actions.top !== 0);
+  if (!bowed.stable || (e.bottom === 0 && e.top === 0 && !withActions)) return { ...bowed, eccentricity: e, ...(actions ? { transverse: actions } : {}) };
+  const b = beamColumnResponse(st.E * st.I, st.L, st.frame, st.r, st.bow, e.bottom, e.top, P, actions);
   return {
     ...bowed,
     rotation: b.rotation,
@@ -40,6 +51,7 @@ export function connectionResponseAt(model: ColumnModel, x: Float64Array): Conne
     memberMaxAt: b.memberMaxAt,
     drift: b.drift,
     eccentricity: e,
+    ...(actions ? { transverse: actions } : {}),
   };
 }
 
@@ -68,6 +80,10 @@ export function connectionJson(m: ConnectionResponse, at: 'means' | 'form design
       amplification: nullIfInfinite(m.amplification),
       // the load-weighted end eccentricities (m) whose couples P·e the moments include
       ...(m.eccentricity ? { eccentricity: { bottom: m.eccentricity.bottom, top: m.eccentricity.top } } : {}),
+      // the end couples (N·m): P·e of the eccentric loads plus the applied end moments
+      ...(m.eccentricity ? { end_couples: { bottom: m.load * m.eccentricity.bottom, top: m.load * m.eccentricity.top } } : {}),
+      // the line load along the height (N/m) and the horizontal force at the top (N, with P·φ) the moments include
+      ...(m.transverse ? { line_load: m.transverse.line, top_force: m.transverse.top } : {}),
     },
   };
 }

@@ -2,7 +2,12 @@ import type { QuantityKind } from '../report/reportInput.js';
 
 /** What a scenario value measures, by its contract path, so it can be shown in display units. */
 export function quantityKindOf(path: string): QuantityKind {
-  if (path.startsWith('loads.')) return 'force';
+  if (path.startsWith('loads.')) {
+    if (path.includes('.eccentricity.')) return 'length';
+    if (path.endsWith('.transverse')) return 'lineLoad';
+    if (path.includes('.moments.')) return 'moment';
+    return 'force'; // the axial load and the horizontal force at the top
+  }
   if (/^column\.(axis_z\.)?ends\.(bottom|top)\.(rotation$|series\.)/.test(path)) return 'rotationalStiffness';
   if (path.startsWith('column.section.corrosion.')) return 'length';
   switch (path) {
@@ -10,6 +15,8 @@ export function quantityKindOf(path: string): QuantityKind {
     case 'column.imperfection.bow':
     case 'column.axis_z.imperfection.bow':
       return 'length';
+    case 'column.imperfection.out_of_plumb':
+      return 'dimensionless';
     case 'column.section.area':
       return 'area';
     case 'column.section.inertia':
@@ -32,6 +39,16 @@ export function quantityKindOf(path: string): QuantityKind {
 
 /** Plain words for a path, for tables people read. */
 export function describePath(path: string): string {
+  const action = /^loads\.([^.]+)\.(transverse|horizontal|moments\.(?:top|bottom))$/.exec(path);
+  if (action) {
+    const what: Record<string, string> = {
+      transverse: 'line load along the height',
+      horizontal: 'horizontal force at the top',
+      'moments.top': 'applied moment at the top',
+      'moments.bottom': 'applied moment at the bottom',
+    };
+    return `load: ${action[1]}, ${what[action[2]!]}`;
+  }
   if (path.startsWith('loads.')) return `load: ${path.slice(6)}`;
   if (path.startsWith('column.axis_z.')) return `${describePath(path.replace('column.axis_z.', 'column.'))} (about z)`;
   const series = /^column\.ends\.(bottom|top)\.series\.(.+)$/.exec(path);
@@ -56,6 +73,7 @@ export function describePath(path: string): string {
     'column.ends.top.alignment_g': 'top alignment-chart G',
     'column.ends.lateral': 'lateral spring at the top',
     'column.imperfection.bow': 'bow imperfection',
+    'column.imperfection.out_of_plumb': 'out-of-plumb angle',
     model_factor: 'model factor',
   };
   return words[path] ?? path;

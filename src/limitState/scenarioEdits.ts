@@ -48,9 +48,19 @@ export function withScalar(s: Scenario, path: string, scalar: Scalar): Scenario 
     if (ends === undefined) throw new Error(`${path} is not a value of this scenario`);
     setEndScalar(ends[endMatch[2] as 'bottom' | 'top'], endMatch[3], scalar, s, path);
   } else if (path.startsWith('loads.')) {
-    const load = out.loads.find((l) => l.path === path);
+    // a load's own actions: loads.<name>.eccentricity.top|bottom, .moments.top|bottom, .transverse, .horizontal
+    const action = /^(loads\.[^.]+)\.(eccentricity|moments)\.(top|bottom)$|^(loads\.[^.]+)\.(transverse|horizontal)$/.exec(path);
+    const load = out.loads.find((l) => l.path === (action ? (action[1] ?? action[4]) : path));
     if (!load) throw new Error(`${path} is not a load of this scenario`);
-    load.value = scalar;
+    if (!action) load.value = scalar;
+    else if (action[2] !== undefined) {
+      const pair = load[action[2] as 'eccentricity' | 'moments'];
+      if (!pair) throw new Error(`${path} is not a value of this scenario`);
+      pair[action[3] as 'top' | 'bottom'] = scalar;
+    } else {
+      if (load[action[5] as 'transverse' | 'horizontal'] === undefined) throw new Error(`${path} is not a value of this scenario`);
+      load[action[5] as 'transverse' | 'horizontal'] = scalar;
+    }
   } else {
     switch (path) {
       case 'column.section.area': c.section.area = scalar; break;
@@ -85,6 +95,10 @@ export function withScalar(s: Scenario, path: string, scalar: Scalar): Scenario 
       case 'column.axis_z.imperfection.bow':
         if (!c.axisZ) throw new Error(`${path} is not a value of this scenario`);
         c.axisZ.bow = scalar;
+        break;
+      case 'column.imperfection.out_of_plumb':
+        if (c.outOfPlumb === undefined) throw new Error(`${path} is not a value of this scenario`);
+        c.outOfPlumb = scalar;
         break;
       case 'model_factor': out.modelFactor = scalar; break;
       default:

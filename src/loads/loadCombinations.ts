@@ -16,6 +16,7 @@
  * a maximum, T_used/renewal for a point-in-time value that renews independently.
  */
 import type { Load, Scenario } from '../scenario/types.js';
+import { loadActionScalars } from '../scenario/variables.js';
 
 /** The companion period of a load given as a maximum, in years (JCSS Probabilistic Model Code Part 1, 2001). */
 export const COMPANION_PERIOD_YEARS = 1;
@@ -56,8 +57,10 @@ export function loadCombinations(s: Pick<Scenario, 'loads' | 'referencePeriodYea
   return leaders.map((leader) => {
     const exponents = new Map<string, number>();
     for (const load of s.loads) {
-      if (!isTimeVarying(load)) exponents.set(load.path, 1);
-      else exponents.set(load.path, load === leader ? exponentTo(load, T) : companionExponent(load, T));
+      const n = !isTimeVarying(load) ? 1 : load === leader ? exponentTo(load, T) : companionExponent(load, T);
+      exponents.set(load.path, n);
+      // a load's moments, line load and top force describe the same period as the load: converted with it
+      for (const { path } of loadActionScalars(load)) exponents.set(path, n);
     }
     return { leading: single ? null : leader!.name, exponents };
   });

@@ -13,7 +13,8 @@ import type { EccentricColumn } from './eccentricFirstYield.js';
  * P_c = P_n of §E3 from the exact restrained critical load (aisc360.ts). M_c = fy·S: the elastic
  * (first-yield) moment, S being the only modulus the scenario gives (no plastic modulus, no
  * lateral-torsional buckling: one axis). M_r is the tool's own exact second-order maximum member
- * moment of the spring-restrained column under the end couples P·e (beamColumn.ts), which takes the
+ * moment of the spring-restrained column under the end couples P·e (applied end moments included), the
+ * line load along the height and the force at the top of a sway column (beamColumn.ts), which takes the
  * place of the B1/B2 amplification of Appendix 8. No bow enters M_r: the member's out-of-straightness
  * is already inside P_n (common practice).
  */
@@ -25,12 +26,13 @@ export function aiscInteractionRatio(Pr: number, Pc: number, Mr: number, Mc: num
 /** Load-independent data of the H1-1 check of one column: the eccentric column without its bow (P_n holds the imperfection). */
 export type AiscInteractionColumn = Omit<EccentricColumn, 'bow' | 'mode'>;
 
-/** Largest |M(x)| (N·m) over the height at P (0 < P < Pcr) under the end couples alone. scratch: ECC_LENGTH + 1. */
+/** Largest |M(x)| (N·m) over the height at P (0 < P < Pcr) under the end couples, line load and top force (no bow). scratch: ECC_LENGTH + 1. */
 export function secondOrderEndCoupleMoment(col: AiscInteractionColumn, P: number, scratch: Float64Array): number {
   if (P <= 0) return 0;
   const phi = col.L * Math.sqrt(P / col.EI);
-  const k = eccentricCoefficientsInto(scratch, col.frame, col.r, phi, col.eB, col.eT);
-  return maxAbsTwoSinusoids(P, k[0], k[1], phi, 0, 0, 0, 0, scratch.subarray(ECC_LENGTH, ECC_LENGTH + 1));
+  const q = col.q ?? 0;
+  const k = eccentricCoefficientsInto(scratch, col.frame, col.r, phi, col.eB, col.eT, q, col.h ?? 0);
+  return maxAbsTwoSinusoids(P, k[0], k[1], phi, 0, 0, 0, 0, scratch.subarray(ECC_LENGTH, ECC_LENGTH + 1), (P * q) / (phi * phi));
 }
 
 const SCAN = 16;

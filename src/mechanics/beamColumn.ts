@@ -14,6 +14,11 @@ import type { EndRestraint, Frame } from './types.js';
  *   bottom:  b v'(0) − a v''(0) = a φ² e_B     (member moment M(0) = P e_B − k θ(0))
  *   top:     b v'(1) + a v''(1) = −a φ² e_T    (member moment M(L) = P e_T + k θ(L))
  * and the moment M = −EI v''/L² = P (A sin φξ + B cos φξ).
+ * Transverse actions (docs/beam-column.md, "Transverse actions"): a uniform line load w along the
+ * height adds the particular solution q ξ²/2, q = wL²/P, so M = P (A sin φξ + B cos φξ − q/φ²); a
+ * horizontal force H at the top of a sway column enters the shear condition as h = HL/P:
+ *   braced top: v(1) = 0 with the q ξ²/2 term;  sway: φ²(C + q) = T v(1) − φ² h.
+ * Applied end moments need no term of their own: they add to the couples P·e (eB, eT are couple/P).
  * Bow part (mechanics/endSpringMoments.ts): the whole first mode amplified by 1/(1 − P/Pcr).
  * Signs as in endSpringMoments.ts: w positive on the side of a positive eccentricity, θ = dv/dx,
  * M positive when it bends the member towards +w, spring moment k·θ.
@@ -26,9 +31,12 @@ export const ECC_LENGTH = 24;
 /**
  * Coefficients (A, B, C, D) in m of the eccentric part at φ = L√(P/EI) > 0, written to out[0..3]
  * (out needs ECC_LENGTH entries; the rest is scratch). Gaussian elimination with partial pivoting.
+ * q = wL²/P and h = HL/P (m) are the line load along the height and the horizontal force at the top
+ * per unit axial load (0: none; h acts only in sway). With q = h = 0 every row is the same number as
+ * without them (adding 0 is exact), so eccentric-only results do not change.
  */
 export function eccentricCoefficientsInto(
-  out: Float64Array, frame: Frame, r: EndRestraint, phi: number, eB: number, eT: number,
+  out: Float64Array, frame: Frame, r: EndRestraint, phi: number, eB: number, eT: number, q = 0, h = 0,
 ): Float64Array {
   const aB = 1 / (1 + r.bottom);
   const bB = r.bottom === Infinity ? 1 : r.bottom / (1 + r.bottom);
@@ -46,15 +54,17 @@ export function eccentricCoefficientsInto(
   };
   set(0, 0, 1, 0, 1, 0); // v(0) = 0
   if (frame === 'braced') {
-    set(1, s, c, 1, 1, 0); // v(1) = 0
+    set(1, s, c, 1, 1, -0.5 * q); // v(1) = 0, the particular part q/2 moved to the right
   } else {
     const T = r.lateral ?? 0;
     const aL = 1 / (1 + T);
     const bL = T === Infinity ? 1 : T / (1 + T);
-    set(1, -bL * s, -bL * c, aL * p2 - bL, -bL, 0); // a φ² C − b v(1) = 0
+    // a φ² (C + q) − b v(1) = −a φ² h
+    set(1, -bL * s, -bL * c, aL * p2 - bL, -bL, -aL * p2 * h - aL * p2 * q + bL * 0.5 * q);
   }
-  set(2, bB * phi, aB * p2, bB, 0, aB * p2 * eB);
-  set(3, bT * phi * c - aT * p2 * s, -bT * phi * s - aT * p2 * c, bT, 0, -aT * p2 * eT);
+  // v''(0) and v'(1), v''(1) carry the particular part q (slope qξ, curvature q)
+  set(2, bB * phi, aB * p2, bB, 0, aB * p2 * eB + aB * q);
+  set(3, bT * phi * c - aT * p2 * s, -bT * phi * s - aT * p2 * c, bT, 0, -aT * p2 * eT - q);
   for (let col = 0; col < 4; col++) {
     let piv = col;
     for (let row = col + 1; row < 4; row++) if (Math.abs(m[o + row * 5 + col]) > Math.abs(m[o + piv * 5 + col])) piv = row;
@@ -81,16 +91,17 @@ export function eccentricCoefficientsInto(
 }
 
 /**
- * Largest |P(Ae sin φξ + Be cos φξ) + Q(Am sin ψξ + Bm cos ψξ)| over ξ ∈ [0, 1] and where:
+ * Largest |P(Ae sin φξ + Be cos φξ) + Q(Am sin ψξ + Bm cos ψξ) − offset| over ξ ∈ [0, 1] and where:
  * a grid of 32 intervals brackets every sign change of the derivative (both frequencies are at most a
  * few π, so an interval is far shorter than half a period), each refined by bisection.
  * Returns the value; the place goes to at[0].
  */
 const GRID = 32;
 export function maxAbsTwoSinusoids(
-  P: number, Ae: number, Be: number, phi: number, Q: number, Am: number, Bm: number, psi: number, at: Float64Array,
+  P: number, Ae: number, Be: number, phi: number, Q: number, Am: number, Bm: number, psi: number, at: Float64Array, offset = 0,
 ): number {
-  const val = (x: number) => P * (Ae * Math.sin(phi * x) + Be * Math.cos(phi * x)) + Q * (Am * Math.sin(psi * x) + Bm * Math.cos(psi * x));
+  // offset: a constant moment (the line load's P q/φ²) subtracted; 0 leaves every value unchanged
+  const val = (x: number) => P * (Ae * Math.sin(phi * x) + Be * Math.cos(phi * x)) + Q * (Am * Math.sin(psi * x) + Bm * Math.cos(psi * x)) - offset;
   const der = (x: number) => P * phi * (Ae * Math.cos(phi * x) - Be * Math.sin(phi * x)) + Q * psi * (Am * Math.cos(psi * x) - Bm * Math.sin(psi * x));
   let best = Math.abs(val(0));
   let bestAt = 0;
@@ -139,16 +150,26 @@ export interface BeamColumnResponse {
   moment(x: number): number;
 }
 
+/** Transverse actions in the buckling plane: a uniform line load along the height (N/m) and a horizontal force at the top (N, sway only). */
+export interface TransverseActions {
+  line: number;
+  top: number;
+}
+
 /**
  * The full response at P (N, 0 < P). EI (N·m²), L (m), r as in criticalLoad, bow e0 (m, either sign),
- * eB/eT end eccentricities (m). P = 0 gives the zero response.
+ * eB/eT end eccentricities (m; an applied end moment M enters as M/P), `actions` the transverse load
+ * and top force (positive towards +v, the side of a positive eccentricity). P = 0 gives the zero
+ * response; transverse actions need P > 0.
  */
 export function beamColumnResponse(
   EI: number, L: number, frame: Frame, r: EndRestraint, bow: number, eB: number, eT: number, P: number,
+  actions: TransverseActions = { line: 0, top: 0 },
 ): BeamColumnResponse {
-  for (const [name, v] of [['axial load', P], ['bow', bow], ['bottom eccentricity', eB], ['top eccentricity', eT]] as const) {
+  for (const [name, v] of [['axial load', P], ['bow', bow], ['bottom eccentricity', eB], ['top eccentricity', eT], ['line load', actions.line], ['top force', actions.top]] as const) {
     if (!Number.isFinite(v)) throw new RangeError(`${name} must be finite (got ${v})`);
   }
+  if (P <= 0 && (actions.line !== 0 || actions.top !== 0)) throw new RangeError(`transverse actions need a positive axial load (got ${P})`);
   const { Pcr, phi: phiCr } = criticalLoad(EI, L, frame, r);
   if (!(Pcr > 0) || P >= Pcr) {
     return {
@@ -163,24 +184,27 @@ export function beamColumnResponse(
     };
   }
   const phi = L * Math.sqrt(P / EI);
-  const k = eccentricCoefficientsInto(new Float64Array(ECC_LENGTH), frame, r, phi, eB, eT);
+  const q = (actions.line * L * L) / P;
+  const h = frame === 'sway' ? (actions.top * L) / P : 0;
+  const k = eccentricCoefficientsInto(new Float64Array(ECC_LENGTH), frame, r, phi, eB, eT, q, h);
   const [A, B, C, D] = [k[0], k[1], k[2], k[3]];
+  const offset = (P * q) / (phi * phi);
   const mode = modeShape(frame, r, phiCr);
   // bow: added deflection a·ŵ, a = |e0| (P/Pcr)/(1 − P/Pcr); its moment Pcr·a·(Am sin ψξ + Bm cos ψξ)
   const ratio = P / Pcr;
   const a = (Math.abs(bow) * ratio) / (1 - ratio);
   const at = new Float64Array(1);
-  const up = maxAbsTwoSinusoids(P, A, B, phi, Pcr * a, mode.A, mode.B, phiCr, at);
+  const up = maxAbsTwoSinusoids(P, A, B, phi, Pcr * a, mode.A, mode.B, phiCr, at, offset);
   const upAt = at[0];
-  const down = maxAbsTwoSinusoids(P, A, B, phi, -Pcr * a, mode.A, mode.B, phiCr, at);
+  const down = maxAbsTwoSinusoids(P, A, B, phi, -Pcr * a, mode.A, mode.B, phiCr, at, offset);
   const side = down > up ? -1 : 1;
-  const slopeE = (xi: number) => A * phi * Math.cos(phi * xi) - B * phi * Math.sin(phi * xi) + C;
+  const slopeE = (xi: number) => A * phi * Math.cos(phi * xi) - B * phi * Math.sin(phi * xi) + C + q * xi;
   const slopeM = (xi: number) => mode.A * phiCr * Math.cos(phiCr * xi) - mode.B * phiCr * Math.sin(phiCr * xi) + mode.C;
   const thetaB = (slopeE(0) + side * a * slopeM(0)) / L;
   const thetaT = (slopeE(1) + side * a * slopeM(1)) / L;
   const moment = (x: number) => {
     const xi = x / L;
-    return P * (A * Math.sin(phi * xi) + B * Math.cos(phi * xi)) + side * Pcr * a * (mode.A * Math.sin(phiCr * xi) + mode.B * Math.cos(phiCr * xi));
+    return P * (A * Math.sin(phi * xi) + B * Math.cos(phi * xi)) + side * Pcr * a * (mode.A * Math.sin(phiCr * xi) + mode.B * Math.cos(phiCr * xi)) - offset;
   };
   // spring moment k·θ from the end conditions: P e_B − M(0) at the bottom, M(L) − P e_T at the top; 0 at a pinned end
   return {
@@ -194,7 +218,7 @@ export function beamColumnResponse(
     },
     memberMax: Math.max(up, down),
     memberMaxAt: (side === 1 ? upAt : at[0]) * L,
-    drift: frame === 'sway' ? A * Math.sin(phi) + B * Math.cos(phi) + C + D + side * a * mode.sample(1) : 0,
+    drift: frame === 'sway' ? A * Math.sin(phi) + B * Math.cos(phi) + C + D + 0.5 * q + side * a * mode.sample(1) : 0,
     bowSide: side,
     moment,
   };

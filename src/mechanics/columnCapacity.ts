@@ -39,32 +39,37 @@ export function columnCapacity(model: StrengthModel, s: ColumnState): CapacityRe
   const { Pcr, phi, K } = criticalLoad(s.E * s.I, s.L, s.frame, s.r);
   const mode = modeShape(s.frame, s.r, phi);
   const c = mode.curvatureFactor;
-  const e = s.eccentricity;
-  // zero eccentricity takes the concentric path untouched, so its results stay the same bit for bit
-  if (e === undefined || (e.bottom === 0 && e.top === 0)) {
+  const e = s.eccentricity ?? { bottom: 0, top: 0 };
+  const t = s.transverse ?? { line: 0, top: 0 };
+  // top force and out-of-plumb act only where the top may move
+  const topRatio = s.frame === 'sway' ? t.top : 0;
+  // no eccentricity and no transverse action take the concentric path untouched, so its results stay the same bit for bit
+  if (e.bottom === 0 && e.top === 0 && t.line === 0 && topRatio === 0) {
     return { capacity: capacityFromPcr(model, s.A, s.S, s.fy, s.bow, Pcr, c), Pcr, K, c };
   }
+  // per unit axial load as lengths (every action scaled with the axial load): q = (w/P) L², h = (H/P) L
+  const actions = t.line === 0 && topRatio === 0 ? {} : { q: t.line * s.L * s.L, h: topRatio * s.L };
   const kind = strengthModelKind(model)!;
   switch (kind.family) {
     case 'first-yield': {
       const capacity = eccentricFirstYieldCapacity({
-        A: s.A, S: s.S, fy: s.fy, EI: s.E * s.I, L: s.L, frame: s.frame, r: s.r, bow: s.bow, eB: e.bottom, eT: e.top, Pcr, mode,
+        A: s.A, S: s.S, fy: s.fy, EI: s.E * s.I, L: s.L, frame: s.frame, r: s.r, bow: s.bow, eB: e.bottom, eT: e.top, ...actions, Pcr, mode,
       });
       return { capacity, Pcr, K, c };
     }
     case 'en1993': {
       const capacity = enEccentricCapacity({
-        alpha: EN_IMPERFECTION[kind.curve!], A: s.A, S: s.S, fy: s.fy, Pcr, eB: e.bottom, eT: e.top, frame: s.frame,
+        alpha: EN_IMPERFECTION[kind.curve!], A: s.A, S: s.S, fy: s.fy, Pcr, eB: e.bottom, eT: e.top, ...actions, r: s.r, frame: s.frame,
       });
       return { capacity, Pcr, K, c };
     }
     case 'aisc360-e3': {
       const capacity = aiscEccentricCapacity({
-        A: s.A, S: s.S, fy: s.fy, EI: s.E * s.I, L: s.L, frame: s.frame, r: s.r, eB: e.bottom, eT: e.top, Pcr,
+        A: s.A, S: s.S, fy: s.fy, EI: s.E * s.I, L: s.L, frame: s.frame, r: s.r, eB: e.bottom, eT: e.top, ...actions, Pcr,
       });
       return { capacity, Pcr, K, c };
     }
     case 'equivalent-bow':
-      throw new RangeError(`strength model '${model}' takes no load eccentricity (first-yield, en1993-* and aisc360-e3 do)`);
+      throw new RangeError(`strength model '${model}' takes no load eccentricity or transverse action (first-yield, en1993-* and aisc360-e3 do)`);
   }
 }

@@ -14,6 +14,9 @@ export interface EccentricColumn {
   bow: number;
   eB: number;
   eT: number;
+  /** line load and top force per unit axial load as lengths: q = (w/P) L², h = (H/P) L (m; absent = 0) */
+  q?: number;
+  h?: number;
   Pcr: number;
   /** the first mode at Pcr (mechanics/modeShape.ts) */
   mode: ModeShape;
@@ -21,20 +24,23 @@ export interface EccentricColumn {
 
 /**
  * N/A + max_x |M(x)|/S − fy at the axial load P, M the second-order moment of mechanics/beamColumn.ts
- * (end couples P·e plus the amplified bow on its unfavourable side). scratch: ECC_LENGTH + 1 entries.
+ * (end couples P·e, line load and top force growing with P, plus the amplified bow on its unfavourable
+ * side). scratch: ECC_LENGTH + 1 entries.
  */
 export function firstYieldMargin(col: EccentricColumn, P: number, scratch: Float64Array): number {
   if (P <= 0) return -col.fy;
   const phi = col.L * Math.sqrt(P / col.EI);
-  const k = eccentricCoefficientsInto(scratch, col.frame, col.r, phi, col.eB, col.eT);
+  const q = col.q ?? 0;
+  const k = eccentricCoefficientsInto(scratch, col.frame, col.r, phi, col.eB, col.eT, q, col.h ?? 0);
+  const offset = (P * q) / (phi * phi);
   const ratio = P / col.Pcr;
-  const q = col.Pcr * ((Math.abs(col.bow) * ratio) / (1 - ratio));
+  const bowQ = col.Pcr * ((Math.abs(col.bow) * ratio) / (1 - ratio));
   const at = scratch.subarray(ECC_LENGTH, ECC_LENGTH + 1);
   const A = k[0];
   const B = k[1];
   const m = col.mode;
-  const up = maxAbsTwoSinusoids(P, A, B, phi, q, m.A, m.B, m.phi, at);
-  const down = q === 0 ? up : maxAbsTwoSinusoids(P, A, B, phi, -q, m.A, m.B, m.phi, at);
+  const up = maxAbsTwoSinusoids(P, A, B, phi, bowQ, m.A, m.B, m.phi, at, offset);
+  const down = bowQ === 0 ? up : maxAbsTwoSinusoids(P, A, B, phi, -bowQ, m.A, m.B, m.phi, at, offset);
   return P / col.A + Math.max(up, down) / col.S - col.fy;
 }
 

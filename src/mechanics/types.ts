@@ -110,6 +110,12 @@ export interface ColumnState {
   r: EndRestraint;
   /** end eccentricities of the axial load (m; same sign = single curvature); absent = concentric */
   eccentricity?: { bottom: number; top: number };
+  /**
+   * transverse actions per unit of axial load, all scaled together with it (docs/beam-column.md): a uniform
+   * line load along the height w/P (1/m) and a horizontal force at the top H/P (dimensionless; sway only; an
+   * out-of-plumb φ adds φ); absent = none. Applied end moments are in `eccentricity` (M/P).
+   */
+  transverse?: { line: number; top: number };
 }
 
 export interface CapacityResult {

@@ -31,6 +31,7 @@ const SI_UNITS: Record<QuantityKind, DisplayUnit> = {
   force: { label: 'kN', siPerUnit: 1e3 },
   rotationalStiffness: { label: 'kN·m/rad', siPerUnit: 1e3 },
   translationalStiffness: { label: 'kN/m', siPerUnit: 1e3 },
+  lineLoad: { label: 'kN/m', siPerUnit: 1e3 },
   moment: { label: 'kN·m', siPerUnit: 1e3 },
   dimensionless: { label: '', siPerUnit: 1 },
 };
@@ -45,6 +46,7 @@ const US_UNITS: Record<QuantityKind, DisplayUnit> = {
   force: { label: 'kip', siPerUnit: NEWTON_PER_KIP },
   rotationalStiffness: { label: 'kip·in/rad', siPerUnit: NEWTON_PER_KIP * IN },
   translationalStiffness: { label: 'kip/in', siPerUnit: NEWTON_PER_KIP / IN },
+  lineLoad: { label: 'kip/ft', siPerUnit: NEWTON_PER_KIP / METRE_PER_FOOT },
   moment: { label: 'kip·ft', siPerUnit: NEWTON_PER_KIP * METRE_PER_FOOT },
   dimensionless: { label: '', siPerUnit: 1 },
 };

@@ -18,6 +18,7 @@ export type QuantityKind =
   | 'force' // N
   | 'rotationalStiffness' // N·m/rad
   | 'translationalStiffness' // N/m
+  | 'lineLoad' // N/m (force per length along the height)
   | 'moment' // N·m
   | 'dimensionless';
 
@@ -363,6 +364,9 @@ export interface ConnectionValues {
   rotation: { bottom: number; top: number }; // rad
   memberMax: number; // N·m, largest |M| in the member
   memberMaxAt: number | null; // m above the base
+  endCouples?: { bottom: number; top: number }; // N·m, P·e plus applied end moments (signed; same sign = single curvature)
+  lineLoad?: number; // N/m, uniform line load along the height at this point
+  topForce?: number; // N, horizontal force at the top of a sway column, with P·φ of the out-of-plumb
 }
 
 /** An end's joint class by stiffness, EN 1993-1-8 §5.2.2.5. */

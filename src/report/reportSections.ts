@@ -136,7 +136,15 @@ function connectionBlocks(input: ReportInput, system: UnitSystem): Block[] {
   const basis = (v: ConnectionValues, where: string) =>
     !v.stable
       ? `at ${where} the load ${formatQuantity(v.load, 'force', system)} reaches Pcr, so the moments are unbounded`
-      : `at ${where} P = ${formatQuantity(v.load, 'force', system)}, bow ${formatQuantity(v.bow, 'length', system)}, amplification ${formatNumber(v.amplification, 3)}, largest member moment ${moment(v.memberMax)}${v.memberMaxAt === null ? '' : ` at ${formatQuantity(v.memberMaxAt, 'length', system)} above the base`}`;
+      : `at ${where} P = ${formatQuantity(v.load, 'force', system)}${actionText(v)}, bow ${formatQuantity(v.bow, 'length', system)}, amplification ${formatNumber(v.amplification, 3)}, largest member moment ${moment(v.memberMax)}${v.memberMaxAt === null ? '' : ` at ${formatQuantity(v.memberMaxAt, 'length', system)} above the base`}`;
+  // the actions beyond the axial load the moments include (beam-column; all scaled with the loads)
+  const actionText = (v: ConnectionValues): string => {
+    const parts: string[] = [];
+    if (v.endCouples) parts.push(`end couples ${formatQuantity(v.endCouples.bottom, 'moment', system)} (bottom) and ${formatQuantity(v.endCouples.top, 'moment', system)} (top)`);
+    if (v.lineLoad !== undefined) parts.push(`a line load ${formatQuantity(v.lineLoad, 'lineLoad', system)} along the height`);
+    if (v.topForce !== undefined) parts.push(`a horizontal force ${formatQuantity(v.topForce, 'force', system)} at the top`);
+    return parts.length ? ` with ${parts.join(', ')}` : '';
+  };
   const dp = j.atDesignPoint;
   const head = ['end', 'moment, mean loads', 'rotation, mean loads', ...(dp ? ['moment, design point', 'rotation, design point'] : []), 'class at mean k', 'class at 5 % k'];
   const rows = (['bottom', 'top'] as const).map((e) => {
@@ -152,6 +160,9 @@ function connectionBlocks(input: ReportInput, system: UnitSystem): Block[] {
   const text =
     'Second-order moments k·θ the end connections carry (zero at a pinned end, the fixed-end moment at a fixed end): these are the values with which each joint\'s moment resistance M_j,Rd is checked. ' +
     'The bow is affine to the first buckling mode, so the whole shape is amplified by 1/(1 − P/Pcr). ' +
+    (j.atMean.endCouples || j.atMean.lineLoad !== undefined || j.atMean.topForce !== undefined
+      ? 'End couples, line load and top force enter through the exact second-order solution of the spring-restrained member, each scaled with the axial load. '
+      : '') +
     `Mean loads: ${basis(j.atMean, 'the mean loads')}; a serviceability-level value, not the capacity. ` +
     (dp ? `FORM design point: ${basis(dp, 'the design point')}. ` : '') +
     (j.strengthUsesBow ? '' : 'The strength curve does not use the bow; the moments use the geometric bow of the scenario. ') +

@@ -16,6 +16,7 @@ export const ACCEPTED_UNITS: Readonly<Record<QuantityKind, readonly string[]>> =
   force: ['N', 'kN', 'MN', 'lbf', 'kip'],
   rotationalStiffness: ['kN·m/rad', 'kNm/rad', 'kN-m/rad', 'kN m/rad', 'MN·m/rad', 'N·m/rad', 'kip·in/rad', 'kip-ft/rad', 'kN·m/deg'],
   translationalStiffness: ['N/m', 'kN/m', 'kN/mm', 'MN/m', 'kip/in', 'lbf/in'],
+  lineLoad: ['N/m', 'kN/m', 'N/mm', 'kip/ft', 'lbf/ft'],
   moment: ['kN·m', 'kNm', 'kN-m', 'N·m', 'MN·m', 'kip·ft', 'kip-in', 'lbf·in'],
   angle: ['rad', 'mrad', 'deg'],
   frequency: ['Hz'],

@@ -33,13 +33,17 @@ function periodAt(ctx: ReadContext, path: readonly PathSegment[], text: unknown)
 /** The load's kind and time basis, and its value without those keys. */
 function readLoadTime(raw: RawLoad, path: readonly PathSegment[], ctx: ReadContext): { value: RawScalar; kind?: Load['kind']; basis: LoadBasis } {
   if (typeof raw === 'string') return { value: raw, basis: { type: 'unstated' } };
-  const { kind, maximum_over, point_in_time, renewal_period, eccentricity: _eccentricity, ...value } = raw;
-  if ('value' in value) {
+  const { kind, maximum_over, point_in_time, renewal_period, eccentricity: _eccentricity, moments, transverse, horizontal, ...value } = raw;
+  // a fixed axial force may still carry random actions (a wind load with no axial part): their distributions have a period
+  const isRandom = (v: unknown) => typeof v === 'object' && v !== null && 'dist' in v;
+  const randomAction = isRandom(transverse) || isRandom(horizontal) || isRandom(moments?.top) || isRandom(moments?.bottom);
+  if ('value' in value && !randomAction) {
     if (maximum_over !== undefined || point_in_time !== undefined) {
       fail(ctx, [...path, maximum_over !== undefined ? 'maximum_over' : 'point_in_time'], 'applies only to a random load {dist: ...}: a fixed value has no distribution to convert to another period');
     }
     return { value: value.value, ...(kind !== undefined ? { kind } : {}), basis: { type: 'unstated' } };
   }
+  const axial: RawScalar = 'value' in value ? value.value : (value as RawScalar);
   if (maximum_over !== undefined && point_in_time === true) {
     fail(ctx, [...path, 'point_in_time'], 'give either maximum_over or point_in_time: true, not both (one load has one time basis)');
   }
@@ -60,7 +64,7 @@ function readLoadTime(raw: RawLoad, path: readonly PathSegment[], ctx: ReadConte
   if (kind === 'permanent' && basis.type === 'maximum') {
     fail(ctx, [...path, 'maximum_over'], 'a permanent load has no maximum over a period: drop maximum_over, or give the load another kind');
   }
-  return { value: value as RawScalar, ...(kind !== undefined ? { kind } : {}), basis };
+  return { value: axial, ...(kind !== undefined ? { kind } : {}), basis };
 }
 
 const ZERO: Scalar = { kind: 'fixed', value: 0 };
@@ -105,6 +109,75 @@ function readEccentricity(raw: RawLoad, name: string, strength: string, columnLe
     return scalar;
   };
   return { top: read('top'), bottom: read('bottom') };
+}
+
+/** True when the value is given and is not a fixed zero. */
+function nonZero(s: Scalar | undefined): boolean {
+  return s !== undefined && !(s.kind === 'fixed' && s.value === 0);
+}
+
+/**
+ * A load's actions besides its axial force and eccentricities (docs/beam-column.md): applied end moments,
+ * a uniform line load along the height and a horizontal force at the top (sway frames only). Each is
+ * fixed or random, may take either sign, and is scaled together with every load.
+ */
+function readActions(raw: RawLoad, name: string, shape: ScenarioShape, ctx: ReadContext): Pick<Load, 'moments' | 'transverse' | 'horizontal'> {
+  if (typeof raw === 'string') return {};
+  const strength = shape.strength;
+  const refuse = (path: PathSegment[], scalar: Scalar, what: string): void => {
+    if (!nonZero(scalar)) return;
+    if (strength.startsWith('first-yield-en1993-')) {
+      fail(ctx, path, `strength model '${strength}' has no check for ${what}: use strength: first-yield, en1993-X (EN 1993-1-1 Eq. 6.61) or aisc360-e3 (AISC 360 H1-1), or drop it`);
+    }
+  };
+  const out: { moments?: Load['moments']; transverse?: Scalar; horizontal?: Scalar } = {};
+  if (raw.moments !== undefined) {
+    const read = (end: 'top' | 'bottom'): Scalar => {
+      const given = raw.moments![end];
+      if (given === undefined) return ZERO;
+      const path = ['loads', name, 'moments', end];
+      const scalar = readScalar(given, { kind: 'moment', domain: 'any' }, path, ctx);
+      refuse(path, scalar, 'applied end moments');
+      return scalar;
+    };
+    out.moments = { top: read('top'), bottom: read('bottom') };
+  }
+  if (raw.transverse !== undefined) {
+    const path = ['loads', name, 'transverse'];
+    out.transverse = readScalar(raw.transverse, { kind: 'lineLoad', domain: 'any' }, path, ctx);
+    refuse(path, out.transverse, 'a transverse load along the height');
+  }
+  if (raw.horizontal !== undefined) {
+    const path = ['loads', name, 'horizontal'];
+    out.horizontal = readScalar(raw.horizontal, { kind: 'force', domain: 'any' }, path, ctx);
+    if (nonZero(out.horizontal)) {
+      if (shape.column.frame !== 'sway') fail(ctx, path, 'a horizontal force at the top applies only to a sway frame (in a braced frame the bracing takes it); remove it or set frame: sway');
+    }
+    refuse(path, out.horizontal, 'a horizontal force at the top');
+  }
+  return out;
+}
+
+/** EN 1993-1-1 §5.3.2(3): φ = φ0 αh αm, φ0 = 1/200, αh = 2/√h (h in m) within [2/3, 1], αm = √(0.5(1 + 1/m)) with m = 1 column. */
+export function en1993OutOfPlumb(heightM: number): number {
+  const ah = Math.min(1, Math.max(2 / 3, 2 / Math.sqrt(heightM)));
+  return (1 / 200) * ah * 1;
+}
+
+function readOutOfPlumb(shape: ScenarioShape, length: number, ctx: ReadContext): Scalar | undefined {
+  const raw = shape.column.imperfection?.out_of_plumb;
+  if (raw === undefined) return undefined;
+  const path = ['column', 'imperfection', 'out_of_plumb'];
+  const scalar: Scalar = raw === 'en1993' ? { kind: 'fixed', value: en1993OutOfPlumb(length) } : readScalar(raw, { kind: 'number', domain: 'any' }, path, ctx);
+  if (raw === 'en1993') ctx.units['column.imperfection.out_of_plumb'] = PURE_NUMBER_UNIT;
+  if (nonZero(scalar)) {
+    if (shape.column.frame !== 'sway') fail(ctx, path, 'an out-of-plumb applies only to a sway frame (a braced column\'s ends do not move sideways relative to each other; its imperfection is the bow); remove it or set frame: sway');
+    if (shape.strength.startsWith('first-yield-en1993-')) {
+      fail(ctx, path, `strength model '${shape.strength}' has no check for an out-of-plumb: use strength: first-yield, en1993-X (EN 1993-1-1 Eq. 6.61) or aisc360-e3 (AISC 360 H1-1), or drop it`);
+    }
+  }
+  if (scalar.kind === 'fixed' && !(Math.abs(scalar.value) < 0.1)) fail(ctx, path, `must be a small angle in radians (|φ| < 0.1), got ${scalar.value}`);
+  return scalar;
 }
 
 function readTarget(shape: ScenarioShape, referenceYears: number, ctx: ReadContext): Target {
@@ -168,6 +241,8 @@ export function buildScenario(shape: ScenarioShape, lines: ReadonlyMap<string, n
   const bow = readBow(c.imperfection?.bow, shape.strength, length, ['column', 'imperfection', 'bow'], ctx);
   const axisZ = c.axis_z === undefined ? undefined : readAxisZ(c.axis_z, frame, shape.strength, length, ctx);
 
+  const outOfPlumb = readOutOfPlumb(shape, length, ctx);
+
   const loadNames = Object.keys(shape.loads);
   if (loadNames.length === 0) fail(ctx, ['loads'], 'needs at least one axial load, e.g. dead: 420 kN');
   const loads: Load[] = loadNames.map((name) => {
@@ -177,9 +252,11 @@ export function buildScenario(shape: ScenarioShape, lines: ReadonlyMap<string, n
     const time = readLoadTime(shape.loads[name]!, ['loads', name], ctx);
     const value = readScalar(time.value, { kind: 'force', domain: 'load' }, ['loads', name], ctx);
     const eccentricity = readEccentricity(shape.loads[name]!, name, shape.strength, length, ctx);
+    const actions = readActions(shape.loads[name]!, name, shape, ctx);
     return {
       name, path: `loads.${name}`, value, ...(time.kind !== undefined ? { kind: time.kind } : {}), basis: time.basis,
       ...(eccentricity !== undefined ? { eccentricity } : {}),
+      ...actions,
     };
   });
 
@@ -202,7 +279,7 @@ export function buildScenario(shape: ScenarioShape, lines: ReadonlyMap<string, n
     fileName: provenance.fileName,
     format: provenance.format,
     sha256: provenance.sha256,
-    column: { length, frame, section, material, ends, bow, ...(axisZ !== undefined ? { axisZ } : {}) },
+    column: { length, frame, section, material, ends, bow, ...(axisZ !== undefined ? { axisZ } : {}), ...(outOfPlumb !== undefined ? { outOfPlumb } : {}) },
     loads,
     modelFactor,
     ...(shape.model_factor === undefined ? { modelFactorOmitted: true } : {}),

@@ -21,6 +21,7 @@ export type QuantityKind =
   | 'force'
   | 'rotationalStiffness'
   | 'translationalStiffness'
+  | 'lineLoad'
   | 'moment'
   | 'angle'
   | 'frequency'
@@ -45,7 +46,9 @@ export const KINDS: Readonly<Record<QuantityKind, KindInfo>> = {
   force: { noun: 'a force', dimensions: dims(1, 1, -2), siUnit: 'N', example: '420 kN', defaultDisplay: { unit: 'kN', factor: 1e3 } },
   rotationalStiffness: { noun: 'a rotational stiffness', dimensions: dims(1, 2, -2, -1), siUnit: 'N m/rad', example: '2.5 MN m/rad', defaultDisplay: { unit: 'kN m/rad', factor: 1e3 } },
   translationalStiffness: { noun: 'a translational stiffness', dimensions: dims(1, 0, -2), siUnit: 'N/m', example: '500 kN/m', defaultDisplay: { unit: 'kN/m', factor: 1e3 } },
-  // no scenario field is a moment yet; reports print moments, so they must read back
+  // a force per length along the height (wind on a facade column); the same dimension as a translational stiffness
+  lineLoad: { noun: 'a line load (force per length)', dimensions: dims(1, 0, -2), siUnit: 'N/m', example: '1.8 kN/m', defaultDisplay: { unit: 'kN/m', factor: 1e3 } },
+  // applied end moments (loads.<name>.moments); reports print moments too
   moment: { noun: 'a moment', dimensions: dims(1, 2, -2), siUnit: 'N m', example: '35 kN·m', defaultDisplay: { unit: 'kN·m', factor: 1e3 } },
   // measurements on the structure (scenario-level evidence, docs/evidence.md §5)
   angle: { noun: 'an angle', dimensions: dims(0, 0, 0, 1), siUnit: 'rad', example: '4.5 mrad', defaultDisplay: { unit: 'mrad', factor: 1e-3 } },

@@ -6,6 +6,9 @@ import type { Domain } from './readScalar.js';
 
 export function fieldDomain(path: string): Domain {
   if (path.startsWith('loads.') && path.includes('.eccentricity.')) return 'any';
+  // transverse actions may act on either side (their sign is their direction)
+  if (/^loads\.[^.]+\.(transverse|horizontal|moments\.(top|bottom))$/.test(path)) return 'any';
+  if (path === 'column.imperfection.out_of_plumb') return 'any';
   if (path.startsWith('loads.')) return 'load';
   if (path.endsWith('.fixity')) return 'fixity';
   if (path.endsWith('.alignment_g')) return 'alignment';

@@ -302,13 +302,32 @@ const eccentricitySchema = strict(
   'end eccentricities {top: Q, bottom: Q} (lengths; either may be omitted)',
 ).meta({ description: 'end eccentricities of the load in the plane of the buckling axis; the same sign at both ends is single curvature' });
 
-const LOAD_KEYS = { ...LOAD_TIME_KEYS, eccentricity: eccentricitySchema.optional() };
+/** Moments applied at the ends of the column by a load (docs/beam-column.md); an omitted end is 0. */
+const momentsSchema = strict(
+  {
+    top: quantityScalar('moment').optional().meta({ description: 'moment applied at the top (fixed or random; default 0)' }),
+    bottom: quantityScalar('moment').optional().meta({ description: 'moment applied at the bottom; the same sign as top is single curvature (default 0)' }),
+  },
+  'applied end moments {top: Q, bottom: Q} (moments such as 12 kN m; either may be omitted)',
+).meta({ description: 'moments the load applies at the column ends in the plane of the buckling axis; the same sign at both ends is single curvature' });
+
+/**
+ * The actions a load entry may carry besides its axial force, all in the plane of the buckling axis and
+ * scaled together with every load (docs/beam-column.md).
+ */
+const LOAD_KEYS = {
+  ...LOAD_TIME_KEYS,
+  eccentricity: eccentricitySchema.optional(),
+  moments: momentsSchema.optional(),
+  transverse: quantityScalar('lineLoad').optional().meta({ description: 'uniform transverse line load along the height (force per length, e.g. wind on a facade column; fixed or random; positive on the side of a positive eccentricity)' }),
+  horizontal: quantityScalar('force').optional().meta({ description: 'sway frames only: horizontal force at the top (fixed or random; positive on the side of a positive eccentricity)' }),
+};
 
 /** A fixed load that carries keys besides its value: {value: Q, eccentricity: {...}, kind: ...}. */
 const fixedLoadWithKeys = strict({ value: quantitySchema('force'), ...LOAD_KEYS }, 'a fixed load {value: Q, eccentricity: {top: Q, bottom: Q}, kind: ...}');
 
 const loadSchema = z.union([quantitySchema('force'), fixedLoadWithKeys, randomVariableSchema(() => quantitySchema('force'), LOAD_KEYS)], {
-  error: (iss) => (iss.input === undefined ? quantityMessage('force', undefined, false) : `${quantityMessage('force', iss.input, false)}, {value: Q, eccentricity: {top: Q, bottom: Q}}, or a random variable {dist: NAME, ..., kind, maximum_over | point_in_time, eccentricity}`),
+  error: (iss) => (iss.input === undefined ? quantityMessage('force', undefined, false) : `${quantityMessage('force', iss.input, false)}, {value: Q, eccentricity: {top: Q, bottom: Q}, moments, transverse, horizontal}, or a random variable {dist: NAME, ..., kind, maximum_over | point_in_time, eccentricity, moments, transverse, horizontal}`),
 });
 
 const imperfectionSchema = strict(
@@ -489,7 +508,18 @@ export const scenarioShape = strict(
           },
           'the end conditions (bottom, top, and for sway frames lateral)',
         ),
-        imperfection: imperfectionSchema.optional(),
+        imperfection: strict(
+          {
+            bow: quantityScalar('length', true).optional().meta({ description: 'bow amplitude e0 of the initial shape (affine to the first mode), e.g. L/1000' }),
+            out_of_plumb: z
+              .union([z.literal('en1993'), numberScalar('an out-of-plumb angle in radians (plain number, e.g. 0.005)')], {
+                error: (iss) => `expected an out-of-plumb angle in radians (plain number, e.g. 0.005), a random variable {dist: NAME, ...}, or en1993 (φ0 αh αm of EN 1993-1-1 §5.3.2(3)); got ${describeInput(iss.input)}`,
+              })
+              .optional()
+              .meta({ description: 'sway frames only: out-of-plumb angle φ of the column (rad), positive on the side of a positive eccentricity; en1993 = (1/200) αh αm, EN 1993-1-1 §5.3.2(3)' }),
+          },
+          'the imperfection (bow, out_of_plumb)',
+        ).optional(),
         axis_z: axisZSchema.optional(),
       },
       'the column (length, frame, section, material, ends, imperfection, axis_z)',

@@ -55,6 +55,7 @@ ${ends}
     # A length or an expression of L (+ - * / ^ and brackets only), e.g. L/1000 + 2 mm.
     # Required for strength: first-yield; the code curves ignore it.
     bow: {dist: normal, mean: L/1200, sd: L/2400}
+    # sway frames may add an out-of-plumb angle (rad), e.g. out_of_plumb: en1993 (1/200 αh αm, EN 1993-1-1 5.3.2)
 
 reference_period: 50 years           # the period the verdict is for
 
@@ -62,6 +63,9 @@ loads:                               # axial compression; name them as you like
   # kind: permanent | imposed | snow | wind | other. A time-varying load states which period its
   # distribution describes: maximum_over: 1 year (annual maximum), maximum_over: 50 years, or
   # point_in_time: true with renewal_period. Two or more are combined by Turkstra's rule.
+  # A load may also act sideways, in the plane of the buckling axis and scaled with every load:
+  # eccentricity: {top: 60 mm}, moments: {top: 8 kN m}, transverse: 1.5 kN/m (along the height),
+  # horizontal: 3 kN (at the top; sway only), e.g. wind: {value: 0 kN, kind: wind, transverse: ...}.
   permanent: {dist: normal, mean: 280 kN, cov: 0.08, kind: permanent}
   variable: {dist: gumbel, mean: 110 kN, cov: 0.3, kind: imposed, maximum_over: 50 years}
 

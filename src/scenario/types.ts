@@ -113,6 +113,12 @@ export interface Load {
   readonly basis: LoadBasis;
   /** end eccentricities (m), paths `loads.<name>.eccentricity.top|bottom`; absent when the file gives none */
   readonly eccentricity?: { readonly top: Scalar; readonly bottom: Scalar };
+  /** applied end moments (N·m), paths `loads.<name>.moments.top|bottom`; same sign = single curvature; absent when none */
+  readonly moments?: { readonly top: Scalar; readonly bottom: Scalar };
+  /** uniform line load along the height (N/m), path `loads.<name>.transverse`; absent when none */
+  readonly transverse?: Scalar;
+  /** horizontal force at the top of a sway column (N), path `loads.<name>.horizontal`; absent when none */
+  readonly horizontal?: Scalar;
 }
 
 /** The target reliability as stated, and converted to the reference period. */
@@ -179,6 +185,8 @@ export interface Scenario {
     };
     /** m; fixed 0 when not given (allowed only for the code strength curves, which ignore it). */
     readonly bow: Scalar;
+    /** rad; out-of-plumb angle of a sway column, path `column.imperfection.out_of_plumb`; absent when not given (0) */
+    readonly outOfPlumb?: Scalar;
   };
   /** In file order. */
   readonly loads: readonly Load[];

@@ -1,10 +1,10 @@
 /**
  * Every value of a scenario by its contract path (docs/scenario-format.md), in one stable order:
- * section, material, ends (bottom, top, lateral), bow, loads in file order (each followed by its
- * eccentricities when it has any), model factor.
+ * section, material, ends (bottom, top, lateral), bow, out-of-plumb (when given), loads in file order
+ * (each followed by its eccentricities, applied moments, line load and top force when it has any), model factor.
  */
 import { flexibleComponents, seriesComponentPath } from './seriesEnd.js';
-import type { End, RandomVariable, Scalar, Scenario, SectionGeometry } from './types.js';
+import type { End, Load, RandomVariable, Scalar, Scenario, SectionGeometry } from './types.js';
 
 /** The path prefix of everything about the second principal axis. */
 export const AXIS_Z = 'column.axis_z';
@@ -33,6 +33,18 @@ function endScalar(end: End, path: string): NamedScalar[] {
   return [];
 }
 
+/** A load's applied moments, line load and top force by path (the actions converted in time with the load). */
+export function loadActionScalars(load: Load): NamedScalar[] {
+  const out: NamedScalar[] = [];
+  if (load.moments !== undefined) {
+    out.push({ path: `${load.path}.moments.top`, scalar: load.moments.top });
+    out.push({ path: `${load.path}.moments.bottom`, scalar: load.moments.bottom });
+  }
+  if (load.transverse !== undefined) out.push({ path: `${load.path}.transverse`, scalar: load.transverse });
+  if (load.horizontal !== undefined) out.push({ path: `${load.path}.horizontal`, scalar: load.horizontal });
+  return out;
+}
+
 /** Every scalar (fixed or random), column length included as a fixed value. */
 export function listScalars(s: Omit<Scenario, 'correlation'>): NamedScalar[] {
   const c = s.column;
@@ -53,6 +65,7 @@ export function listScalars(s: Omit<Scenario, 'correlation'>): NamedScalar[] {
   );
   if (c.ends.lateral !== null) list.push({ path: 'column.ends.lateral', scalar: c.ends.lateral });
   list.push({ path: 'column.imperfection.bow', scalar: c.bow });
+  if (c.outOfPlumb !== undefined) list.push({ path: 'column.imperfection.out_of_plumb', scalar: c.outOfPlumb });
   const z = c.axisZ;
   if (z !== undefined) {
     list.push(...endScalar(z.ends.bottom, `${AXIS_Z}.ends.bottom`), ...endScalar(z.ends.top, `${AXIS_Z}.ends.top`));
@@ -65,6 +78,7 @@ export function listScalars(s: Omit<Scenario, 'correlation'>): NamedScalar[] {
       list.push({ path: `${load.path}.eccentricity.top`, scalar: load.eccentricity.top });
       list.push({ path: `${load.path}.eccentricity.bottom`, scalar: load.eccentricity.bottom });
     }
+    for (const { path, scalar } of loadActionScalars(load)) list.push({ path, scalar });
   }
   list.push({ path: 'model_factor', scalar: s.modelFactor });
   return list;

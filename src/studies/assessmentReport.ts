@@ -18,7 +18,7 @@ import type {
 import { fixityFactor } from '../mechanics/restraint.js';
 import type { Assessment } from './columnAssessment.js';
 import { formatBeta } from '../report/displayUnits.js';
-import type { EndSpringMoments } from '../mechanics/endSpringMoments.js';
+import type { ConnectionResponse } from '../limitState/connectionResponse.js';
 import type { ConnectionValues } from '../report/reportInput.js';
 import { designPointConnections } from './designPointConnections.js';
 import { evidenceRows } from './evidenceSummary.js';
@@ -26,8 +26,13 @@ import { strengthUsesBow } from '../mechanics/strengthModelKind.js';
 import { makeDistribution } from '../probability/makeDistribution.js';
 import { zeroFailureBound } from '../reliability/zeroFailureBound.js';
 
-function connectionValues(m: EndSpringMoments): ConnectionValues {
+function connectionValues(m: ConnectionResponse): ConnectionValues {
+  const e = m.eccentricity;
+  const t = m.transverse;
   return {
+    ...(e !== undefined && (e.bottom !== 0 || e.top !== 0) ? { endCouples: { bottom: m.load * e.bottom, top: m.load * e.top } } : {}),
+    ...(t !== undefined && t.line !== 0 ? { lineLoad: t.line } : {}),
+    ...(t !== undefined && t.top !== 0 ? { topForce: t.top } : {}),
     load: m.load,
     bow: m.bow,
     amplification: m.amplification,

@@ -107,7 +107,29 @@ export function characteristicValues(model: ColumnModel, f: FormResult): Charact
     const z = d.toStandardNormal(design);
     const base = { variable: path, design, mean, designToMean: design / mean };
     const favourable = (why: string): CharacteristicRow => ({ ...base, side: 'favourable', fractile: null, basis: why, characteristic: null, partialFactor: null });
-    if (path.startsWith('loads.')) {
+    // a load's moments, line load and top force: actions of that load, which may act on either side
+    const action = /^(loads\.[^.]+)\.(moments\.(?:top|bottom)|transverse|horizontal)$/.exec(path);
+    if (action) {
+      const load = model.scenario.loads.find((l) => l.path === action[1]);
+      if (!(Math.abs(design) > Math.abs(mean)) || !load) {
+        rows.push(favourable('design value no larger than the mean in size'));
+        return;
+      }
+      const { permanent, by } = isPermanentLoad(load);
+      const p = design >= mean ? 0.95 : 0.05;
+      const characteristic = permanent ? mean : d.quantile(p);
+      rows.push({
+        ...base,
+        side: 'load',
+        fractile: permanent ? null : p,
+        basis: permanent ? `mean, permanent action (${by}; EN 1990 4.1.2)` : `${p === 0.95 ? '95' : '5'} % fractile, variable action (${by}; EN 1990 4.1.2)`,
+        characteristic,
+        partialFactor: design / characteristic,
+        code: codes ? (permanent ? codes.permanent : codes.variable) : undefined,
+      });
+      return;
+    }
+    if (path.startsWith('loads.') && !path.includes('.eccentricity.')) {
       const load = model.scenario.loads.find((l) => l.path === path);
       if (!(z > 0) || !load) {
         rows.push(favourable('design value at or below the mean: the load helps here'));
@@ -126,9 +148,10 @@ export function characteristicValues(model: ColumnModel, f: FormResult): Charact
       });
       return;
     }
-    if (path === 'column.imperfection.bow') {
+    // geometric imperfections and eccentricities: their size hurts, whichever side
+    if (path === 'column.imperfection.bow' || path === 'column.imperfection.out_of_plumb' || path.includes('.eccentricity.')) {
       if (!(Math.abs(design) > Math.abs(mean))) {
-        rows.push(favourable('design bow no larger than the mean bow'));
+        rows.push(favourable(path === 'column.imperfection.bow' ? 'design bow no larger than the mean bow' : 'design value no larger than the mean in size'));
         return;
       }
       const p = design >= mean ? 0.95 : 0.05;

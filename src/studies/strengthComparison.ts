@@ -9,10 +9,20 @@ import type { FormResult } from '../reliability/types.js';
 import type { Scenario, StrengthModel } from '../scenario/types.js';
 import { scenarioForm } from './columnForm.js';
 
-/** Some load has an end eccentricity that is not a fixed zero. */
+const nonZero = (v: Scenario['modelFactor'] | undefined) => v !== undefined && !(v.kind === 'fixed' && v.value === 0);
+
+/** Some load has an end eccentricity, applied moment, line load or top force that is not a fixed zero, or the column an out-of-plumb. */
 function hasEccentricity(s: Scenario): boolean {
-  const nonZero = (v: Scenario['modelFactor']) => !(v.kind === 'fixed' && v.value === 0);
-  return s.loads.some((l) => l.eccentricity !== undefined && (nonZero(l.eccentricity.top) || nonZero(l.eccentricity.bottom)));
+  return (
+    nonZero(s.column.outOfPlumb) ||
+    s.loads.some(
+      (l) =>
+        (l.eccentricity !== undefined && (nonZero(l.eccentricity.top) || nonZero(l.eccentricity.bottom))) ||
+        (l.moments !== undefined && (nonZero(l.moments.top) || nonZero(l.moments.bottom))) ||
+        nonZero(l.transverse) ||
+        nonZero(l.horizontal),
+    )
+  );
 }
 
 /** The models every assessment compares (the equivalent-bow forms repeat their curve's β; they are added only when chosen). */
@@ -46,7 +56,7 @@ export function betaByStrengthModel(given: Scenario, chosenForm: FormResult): St
       return { strength, beta: null, pf: null, converged: false, modelFactor: resolved.modelFactor, chosen, note: 'needs a bow; the scenario gives none' };
     }
     if (eccentric && strengthModelKind(strength)?.family === 'equivalent-bow') {
-      return { strength, beta: null, pf: null, converged: false, modelFactor: resolved.modelFactor, chosen, note: 'has no check for eccentric loads' };
+      return { strength, beta: null, pf: null, converged: false, modelFactor: resolved.modelFactor, chosen, note: 'has no check for eccentric loads or transverse actions' };
     }
     const r = chosen ? chosenForm : scenarioForm(resolved.scenario);
     return { strength, beta: r.beta, pf: r.pf, converged: r.converged, modelFactor: resolved.modelFactor, chosen };

@@ -8,6 +8,8 @@ import { fail, readScalar, type ReadContext } from './readScalar.js';
 import { PURE_NUMBER_UNIT, readQuantity, type DisplayUnit } from './quantity.js';
 import { ExpressionError } from './quantityExpression.js';
 import type { RawScalar, ScenarioShape } from './scenarioShape.js';
+import { readStructureEvidence } from './readStructureEvidence.js';
+import { readTestPlans } from './readTestPlans.js';
 import type { EvidenceRecord, Load, LoadBasis, Method, Scalar, Scenario, Target } from './types.js';
 import { parsePeriod } from './readPeriod.js';
 import { betaOverPeriods } from '../probability/logProbability.js';
@@ -212,6 +214,13 @@ export function buildScenario(shape: ScenarioShape, lines: ReadonlyMap<string, n
     sources,
     ...(Object.keys(evidence).length > 0 ? { evidence } : {}),
   };
+  const { survivedLoads } = readStructureEvidence(shape.evidence, ctx);
+  const testPlans = readTestPlans(shape.test_plans, partial, lines);
+  const withEvidence = {
+    ...partial,
+    ...(survivedLoads.length > 0 ? { survivedLoads } : {}),
+    ...(testPlans !== undefined ? { testPlans } : {}),
+  };
   const correlation = readCorrelation(shape.correlation as [string, string, number][] | undefined, listScalars(partial), ctx);
-  return { ...partial, correlation };
+  return { ...withEvidence, correlation };
 }

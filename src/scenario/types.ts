@@ -163,6 +163,30 @@ export interface Scenario {
   readonly sources?: Readonly<Record<string, string>>;
   /** Variables updated by test results, by path (absent: none). */
   readonly evidence?: Readonly<Record<string, EvidenceRecord>>;
+  /** Loads the column is known to have carried without failure (absent: none); scenario/readStructureEvidence.ts. */
+  readonly survivedLoads?: readonly SurvivedLoad[];
+  /** Candidate tests to rank (absent: none given); scenario/readTestPlans.ts. */
+  readonly testPlans?: readonly TestPlan[];
+}
+
+/** `evidence: [{type: survived_load, load, date, notes}]` */
+export interface SurvivedLoad {
+  /** where it was written, e.g. evidence[0].load (also its variable name when random) */
+  readonly path: string;
+  /** N */
+  readonly load: Scalar;
+  readonly date?: string;
+  readonly notes?: string;
+}
+
+/** One candidate test plan (`test_plans:`). */
+export interface TestPlan {
+  readonly variable: string;
+  readonly tests: number;
+  readonly tested: 'similar' | 'this_one';
+  /** this_one only: CoV of each reading's error */
+  readonly measurementCov?: number;
+  readonly label?: string;
 }
 
 /** Test results that updated a variable (docs/evidence.md); the variable's Scalar holds the updated spec. */

@@ -24,6 +24,8 @@ import { InputError } from '../scenario/inputError.js';
 import { fieldDomain } from '../scenario/fieldDomain.js';
 import { supportInsideDomain } from '../scenario/readScalar.js';
 import type { Method, Scenario } from '../scenario/types.js';
+import { measurementEffect, type MeasurementEffect } from './measurementEffect.js';
+import { planTests, type TestPlanStudy } from './testPlanning.js';
 import { scalarAt } from '../scenario/variables.js';
 import type { DistSpec } from '../probability/distribution.js';
 import { scenarioForm } from './columnForm.js';
@@ -123,6 +125,10 @@ export interface Assessment {
   studies: StudyName[];
   /** every limit-state evaluation of the run, by method and study (`meta.calls`) */
   calls: Record<string, number>;
+  /** β before and after the test results and survived loads (present when the scenario has any) */
+  measurements?: MeasurementEffect;
+  /** the scenario's test plans ranked (present when it lists any) */
+  testPlans?: TestPlanStudy;
 }
 
 function momentsOf(model: ColumnModel): Moments[] {
@@ -430,8 +436,22 @@ export async function assessColumn(given: Scenario, opts: AssessOptions = {}): P
   const named = Object.entries(calls).reduce((a, [k, n]) => a + (k === 'is' || k === 'mc' || k === 'subset' ? 0 : n), 0);
   const other = inThread - named - simulatedHere;
   if (other > 0) calls.other = other;
+  let measurements: MeasurementEffect | undefined;
+  if (!interrupted && (s.evidence || s.survivedLoads)) {
+    const r = countEvaluations(() => measurementEffect(given, seed));
+    measurements = r.result;
+    calls.measurements = r.calls;
+  }
+  let testPlans: TestPlanStudy | undefined;
+  if (!interrupted && s.testPlans) {
+    const r = countEvaluations(() => planTests(given, { seed }));
+    testPlans = r.result;
+    calls['test-plans'] = r.calls;
+  }
   const studies = STUDY_NAMES.filter((n) => asked.has(n));
   return {
+    ...(measurements ? { measurements } : {}),
+    ...(testPlans ? { testPlans } : {}),
     scenario: s,
     model: lead ? lead.model : model,
     modelFactor: model.modelFactorUsed,

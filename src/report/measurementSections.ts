@@ -9,7 +9,7 @@ import { formatBeta, formatNumber, formatProbability, formatQuantity, type UnitS
 
 const verdictText = (b: BetaVerdictRow) => (b.meets ? 'meets the target' : 'falls short of the target');
 
-export function measurementsSection(input: ReportInput, system: UnitSystem, charts: ChartSpec[]): Section | null {
+export function measurementsSection(input: ReportInput, system: UnitSystem, charts: ChartSpec[], methodLabel: (m: ReportInput['reliability']['governing']['method']) => string): Section | null {
   const m = input.measurements;
   if (!m) return null;
   const blocks: Block[] = [];
@@ -60,7 +60,7 @@ export function measurementsSection(input: ReportInput, system: UnitSystem, char
     text:
       'The assessment methods of this report use the updated distributions; the survived load enters only here (FORM and its Monte Carlo check).' +
       (Math.abs(gap) >= 0.1
-        ? ` Note: the governing estimate (${g.method}, β = ${formatBeta(g.beta)}) differs from FORM with the same distributions (β = ${formatBeta(formAfterTests.beta)}); read the changes above as shifts of β and check the final verdict with a sampling method.`
+        ? ` Note: the governing estimate (${methodLabel(g.method)}, β = ${formatBeta(g.beta)}) differs from FORM with the same distributions (β = ${formatBeta(formAfterTests.beta)}); read the changes above as shifts of β and check the final verdict with a sampling method.`
         : ''),
   });
   return { id: 'measurements', title: SECTION_TITLES.measurements, blocks };

@@ -625,7 +625,7 @@ export function buildReportDocument(input: ReportInput, system: UnitSystem, char
     target: () => targetSection(input),
     sensitivity: () => sensitivitySection(input, charts),
     restraint: () => restraintSection(input, system, charts),
-    measurements: () => measurementsSection(input, system, charts),
+    measurements: () => measurementsSection(input, system, charts, (m) => METHOD_LABELS[m]),
     testPlans: () => testPlansSection(input, charts),
     partialFactors: () => partialFactorsSection(input, system),
     sweep: () => sweepSection(input, system, charts),

@@ -437,13 +437,13 @@ export async function assessColumn(given: Scenario, opts: AssessOptions = {}): P
   const other = inThread - named - simulatedHere;
   if (other > 0) calls.other = other;
   let measurements: MeasurementEffect | undefined;
-  if (!interrupted && (s.evidence || s.survivedLoads)) {
+  if (!interrupted && !opts.reliabilityOnly && (s.evidence || s.survivedLoads)) {
     const r = countEvaluations(() => measurementEffect(given, seed));
     measurements = r.result;
     calls.measurements = r.calls;
   }
   let testPlans: TestPlanStudy | undefined;
-  if (!interrupted && s.testPlans) {
+  if (!interrupted && !opts.reliabilityOnly && s.testPlans) {
     const r = countEvaluations(() => planTests(given, { seed }));
     testPlans = r.result;
     calls['test-plans'] = r.calls;

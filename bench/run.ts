@@ -44,7 +44,7 @@ async function main(): Promise<void> {
   }
   if (process.argv[2] === 'measurements') {
     // `node dist/bench/run.js measurements`: frequency solves and the posterior of the demo with measurements
-    console.log('\n## measurements on the structure (docs/evidence.md §5)');
+    console.log('\n## measurements on the structure (docs/evidence.md §7)');
     for (const line of runMeasurementBench(join(root, 'scenarios', 'measured-shed-column.yaml'))) console.log(line);
     return;
   }

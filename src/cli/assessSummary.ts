@@ -124,6 +124,19 @@ export function assessResultLine(a: Assessment): string {
   return `result: β ${g.beta} (${a.governing.basis ?? LABEL[a.governing.method]}) against β = ${formatBeta(s.targetBeta)} over ${years(s.referencePeriodYears)}${s.targetSource ? ` (${s.targetSource})` : ''}: ${verdict}`;
 }
 
+function measurementEffectLines(m: NonNullable<Assessment["measurements"]>): string[] {
+  const v = (b: { beta: number; meets: boolean }) => `β = ${formatBeta(b.beta)} (${b.meets ? 'meets' : 'short of'} the target)`;
+  const out = ['', '  what the measurements changed (FORM; report section of the same name):'];
+  out.push(`    as written, evidence ignored     ${v(m.before)}`);
+  if (m.afterTests) out.push(`    with the test results            ${v(m.afterTests)}`);
+  if (m.survival) {
+    out.push(`    given the survived load          ${v(m.after)}; P(survival) beforehand ${m.survival.pSurvival.toFixed(4)}`);
+    if (m.survival.mc) out.push(`      Monte Carlo check: β = ${formatBeta(m.survival.mc.beta)} (${m.survival.mc.failures} failures among ${m.survival.mc.survived} survivors)`);
+    out.push('    the methods below use the updated distributions; the survived load enters only in the line above');
+  }
+  return out;
+}
+
 export function formatAssessment(a: Assessment, system: UnitSystem): string {
   const s = a.scenario;
   const lines: string[] = [];
@@ -135,6 +148,7 @@ export function formatAssessment(a: Assessment, system: UnitSystem): string {
   lines.push(`  ${modelFactorLine(a)}`);
   if (a.scenario.evidence) lines.push(...evidenceLines(evidenceRows(a.scenario), system));
   if (a.measurementUpdate) lines.push(...measurementLines(a.measurementUpdate, system));
+  if (a.measurements) lines.push(...measurementEffectLines(a.measurements));
   lines.push('');
   const combos = a.combinations;
   if (combos) lines.push(...combinationLines(a));

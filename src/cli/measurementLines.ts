@@ -14,7 +14,7 @@ function cov(mean: number, sd: number): string {
 
 export function measurementLines(r: MeasurementUpdateResult, system: UnitSystem): string[] {
   const s = r.summary;
-  const lines = ['', '  measurements on this structure (the posterior replaces the prior in every method; docs/evidence.md §5):'];
+  const lines = ['', '  measurements on this structure (the posterior replaces the prior in every method; docs/evidence.md §7):'];
   for (const m of s.measurements) {
     lines.push(`    [${m.index}] ${m.description}, error CoV ${m.measurementCov}: the model gives ${reading(m.predictedPrior, m.unit)} at the prior means, ${reading(m.predictedPosterior, m.unit)} at the posterior means${m.source ? `; source: ${m.source}` : ''}`);
   }

@@ -90,3 +90,11 @@ export function parseDesignAlpha(value: string): 'form' | 'standard' {
   if (value !== 'form' && value !== 'standard') throw new InvalidArgumentError("expected 'form' or 'standard'.");
   return value;
 }
+
+/** Simulated outcomes per test plan: 10 … 2000. */
+export function parseOutcomeCount(value: string): number {
+  const v = value.trim();
+  const n = Number(v);
+  if (!/^\d+$/.test(v) || !Number.isSafeInteger(n) || n < 10 || n > 2000) throw new InvalidArgumentError('expected a whole number of outcomes from 10 to 2000 (e.g. 40).');
+  return n;
+}

@@ -10,10 +10,11 @@
 import { Command, CommanderError, Option } from 'commander';
 import { toolVersion } from './version.js';
 import { EXIT_INPUT, EXIT_OK, reportFailure } from './failure.js';
-import { parseDesignAlpha, parseEnd, parseRestraintMethod, parseUnits } from './optionParsers.js';
+import { parseDesignAlpha, parseEnd, parseNonNegativeInteger, parseOutcomeCount, parseRestraintMethod, parseUnits } from './optionParsers.js';
 import { refuseRepeatedOptions } from './repeatedOptions.js';
 import type { CheckOptions } from './checkCommand.js';
 import type { RestraintOptions } from './restraintCommand.js';
+import type { PlanTestsOptions } from './planTestsCommand.js';
 import { registerSweep } from './sweepDefinition.js';
 import { registerNew } from './newCommand.js';
 import { registerAssess } from './assessDefinition.js';
@@ -68,6 +69,20 @@ export function buildProgram(argv: string[]): Command {
       `\nExamples:\n  stanchion restraint scenarios/braced-base-plate.yaml\n  stanchion restraint scenarios/sway-canopy-post.yaml --end bottom --json\n  stanchion restraint scenarios/braced-base-plate.yaml --out reports/c3-restraint\n\nEach option by example:\n  --json                            one JSON document on stdout (SI units)\n  --end top                         study the top connection only (bottom, top or both)\n  --method is                       solve the requirement with importance sampling (form, sorm or is)\n  --design-alpha standard           design stiffness with the standard α = 0.8 / 0.4 × 0.8 (or form)\n  --out reports/c3-restraint --force  report folder; --force replaces one stanchion wrote\n  --units us                        kip·in/rad, ft, ksi for people\n\n${CAUTION}\n`,
     )
     .action(async (file: string, opts: RestraintOptions) => (await import('./restraintCommand.js')).runRestraint(file, opts));
+
+  program
+    .command('plan-tests')
+    .description('which test on the structure buys most: rank candidate tests by the reliability index the assessment would have after them (pre-posterior analysis)')
+    .argument('<FILE>', 'scenario (.yaml, .yml, .json, or - for stdin)')
+    .option('--json', 'print one JSON document on stdout')
+    .addOption(new Option('--seed <N>', 'seed of the simulated test outcomes (default: analysis.seed, else 20261201)').argParser(parseNonNegativeInteger))
+    .addOption(new Option('--outcomes <N>', 'simulated outcomes per plan, 10 to 2000 (default 40)').argParser(parseOutcomeCount))
+    .addOption(unitsOption())
+    .addHelpText(
+      'after',
+      `\nPlans come from the scenario's test_plans: list ({variable, tests, tested, measurement_cov}); without one,\n1, 3 and 5 tests on each of the three most important variables that can be tested.\n\nExamples:\n  stanchion plan-tests scenarios/tested-base-plate.yaml\n  stanchion plan-tests scenarios/tested-base-plate.yaml --outcomes 100 --json\n\nEach option by example:\n  --json          one JSON document on stdout\n  --seed 7        another set of simulated outcomes\n  --outcomes 100  more outcomes per plan (finer probabilities, longer run)\n\n${CAUTION}\n`,
+    )
+    .action(async (file: string, opts: PlanTestsOptions) => (await import('./planTestsCommand.js')).runPlanTests(file, opts));
 
   registerSweep(program, unitsOption);
   registerNew(program);

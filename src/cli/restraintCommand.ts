@@ -28,7 +28,7 @@ export async function runRestraint(file: string, opts: RestraintOptions): Promis
   const loaded = loadScenario(text, fileName);
   if (opts.out) checkOutFolder(opts.out, { force: opts.force ?? false, inputFiles: [file] }); // before the study; checked again when written
   const seed = loaded.analysis.seed ?? DEFAULT_SEED;
-  // measurements on the structure update the variables before the study (docs/evidence.md §5)
+  // measurements on the structure update the variables before the study (docs/evidence.md §7)
   const scenario = updateScenarioWithEvidence(loaded, seed).scenario;
   if (loaded.measurements?.length) process.stderr.write(`stanchion: the scenario's ${loaded.measurements.length} measurement(s) updated its variables before the study (assess shows the update)\n`);
   const system = opts.units ?? scenario.displayUnits;

@@ -1,6 +1,6 @@
 /**
  * What the column model predicts for each measurement on the structure at a point x of the
- * scenario's random variables (docs/evidence.md §5):
+ * scenario's random variables (docs/evidence.md §7):
  *
  * - rotation test of an end's spring: θ = M / k, with k = R·EI/L the end's rotational stiffness
  *   at x (whatever form the end is written in: rotation, series, fixity, alignment G);

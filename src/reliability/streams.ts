@@ -10,3 +10,7 @@ export const SUBSET_STREAM_BASE = 2 ** 33;
 export const SERIES_STREAM_BASE = 3 * 2 ** 32;
 /** FORM's self-check (formCheck.ts). */
 export const FORM_CHECK_STREAM_BASE = 4 * 2 ** 32;
+/** Monte Carlo of a failure given a survived proof load (conditionalFailure.ts). */
+export const CONDITIONAL_STREAM_BASE = 5 * 2 ** 32;
+/** Simulated outcomes of planned tests (studies/testPlanning.ts): stream base + plan index. */
+export const TEST_PLAN_STREAM_BASE = 6 * 2 ** 32;

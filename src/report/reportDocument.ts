@@ -38,6 +38,8 @@ export const SECTION_TITLES = {
   target: 'Reliability against the target',
   sensitivity: 'Sensitivity',
   restraint: 'Restraint justification',
+  measurements: 'What the measurements changed',
+  testPlans: 'Which test buys most',
   partialFactors: 'Characteristic values and implied partial factors',
   sweep: 'Parameter sweep',
   sweepCases: 'Appendix: sweep cases',
@@ -55,7 +57,7 @@ export function sectionOrder(subject: 'assessment' | 'restraint' | 'sweep'): Sec
   const details: SectionId[] = ['methods', 'sensitivity', 'partialFactors', 'job', 'column', 'model', 'cautions'];
   const appendix: SectionId[] = subject === 'sweep' ? ['inputs', 'sweepCases', 'reproducibility'] : ['inputs', 'reproducibility'];
   const subjectFirst: Record<typeof subject, SectionId[]> = {
-    assessment: ['target', 'restraint'],
+    assessment: ['target', 'measurements', 'testPlans', 'restraint'],
     restraint: ['restraint', 'target'],
     sweep: ['sweep', 'target', 'restraint'],
   };

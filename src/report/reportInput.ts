@@ -102,6 +102,65 @@ export interface EvidenceRow {
   posterior: EvidenceMoments;
 }
 
+/** Prior and posterior density of an updated variable, both scaled by the larger peak (SI x). */
+export interface MeasurementDensity {
+  path: string;
+  description: string;
+  kind: QuantityKind;
+  points: { x: number; prior: number; posterior: number }[];
+  tests: number[];
+}
+
+export interface BetaVerdictRow {
+  beta: number;
+  pf: number;
+  meets: boolean;
+}
+
+/** "What the measurements changed": β before and after, densities, the survival study. */
+export interface MeasurementsReport {
+  target: number;
+  before: BetaVerdictRow;
+  afterTests?: BetaVerdictRow;
+  after: BetaVerdictRow;
+  survival?: {
+    loads: { path: string; mean: number; random: boolean; date?: string; notes?: string }[];
+    beta: number;
+    pf: number;
+    pSurvival: number;
+    rho: number;
+    converged: boolean;
+    mc?: { pf: number; cov: number; samples: number; survived: number; failures: number; seed: number };
+  };
+  densities: MeasurementDensity[];
+}
+
+/** One ranked test plan (pre-posterior analysis; studies/testPlanning.ts). */
+export interface TestPlanRow {
+  label: string;
+  variable: string;
+  description: string;
+  tests: number;
+  tested: 'similar' | 'this_one';
+  measurementCov?: number;
+  betaMean: number;
+  beta05: number;
+  beta50: number;
+  beta95: number;
+  pMeet: number;
+  expectedGain: number;
+}
+
+export interface TestPlansReport {
+  betaNow: number;
+  target: number;
+  outcomes: number;
+  seed: number;
+  defaults: boolean;
+  survivalIncluded: boolean;
+  plans: TestPlanRow[];
+}
+
 export interface CorrelationEntry {
   a: string; // variable path
   b: string;
@@ -398,6 +457,10 @@ export interface ReportInput {
   inputs: InputRow[];
   /** variables updated by test results (absent or empty: none) */
   evidence?: EvidenceRow[];
+  /** what the test results and survived loads changed (absent: no evidence) */
+  measurements?: MeasurementsReport;
+  /** candidate tests ranked (absent: the scenario lists none) */
+  testPlans?: TestPlansReport;
   correlation: CorrelationEntry[];
   column: ColumnDescription;
   check: CheckResult;

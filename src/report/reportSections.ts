@@ -2,6 +2,7 @@
  * ReportInput → ReportDocument: the words and tables of every section. Numbers are only
  * formatted and compared here, never computed.
  */
+import { measurementsSection, testPlansSection } from './measurementSections.js';
 import type { ConnectionValues, EndDescription, EvidenceMoments, InputRow, JointClassRow, MethodName, ReportInput, StrengthModelName } from './reportInput.js';
 import { displayUnit, formatBeta, formatFixedColumn, formatNumber, formatProbability, formatProbabilityColumn, formatQuantity, type UnitSystem } from './displayUnits.js';
 import { SECTION_TITLES, sectionOrder, type Block, type ReportDocument, type Section, type SectionId } from './reportDocument.js';
@@ -635,6 +636,8 @@ export function buildReportDocument(input: ReportInput, system: UnitSystem, char
     target: () => targetSection(input),
     sensitivity: () => sensitivitySection(input, charts),
     restraint: () => restraintSection(input, system, charts),
+    measurements: () => measurementsSection(input, system, charts, (m) => METHOD_LABELS[m]),
+    testPlans: () => testPlansSection(input, charts),
     partialFactors: () => partialFactorsSection(input, system),
     sweep: () => sweepSection(input, system, charts),
     sweepCases: () => sweepCasesSection(input, system),

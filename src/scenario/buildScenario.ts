@@ -11,6 +11,8 @@ import { ExpressionError } from './quantityExpression.js';
 import type { RawScalar, ScenarioShape } from './scenarioShape.js';
 import type { AxisZ, EvidenceRecord, Load, LoadBasis, Method, Scalar, Scenario, StrengthModel, Target } from './types.js';
 import { readSection } from './readSection.js';
+import { readStructureEvidence } from './readStructureEvidence.js';
+import { readTestPlans } from './readTestPlans.js';
 import { parsePeriod } from './readPeriod.js';
 import { betaOverPeriods } from '../probability/logProbability.js';
 import type { PathSegment } from './rawTree.js';
@@ -301,7 +303,14 @@ export function buildScenario(shape: ScenarioShape, lines: ReadonlyMap<string, n
     sources,
     ...(Object.keys(evidence).length > 0 ? { evidence } : {}),
   };
+  const { survivedLoads } = readStructureEvidence(shape.evidence, ctx);
+  const testPlans = readTestPlans(shape.test_plans, partial, lines);
+  const withEvidence = {
+    ...partial,
+    ...(survivedLoads.length > 0 ? { survivedLoads } : {}),
+    ...(testPlans !== undefined ? { testPlans } : {}),
+  };
   const correlation = readCorrelation(shape.correlation as [string, string, number][] | undefined, listScalars(partial), ctx);
   const measurements = readMeasurements(shape.evidence, ends, ctx);
-  return { ...partial, correlation, ...(measurements !== undefined ? { measurements } : {}) };
+  return { ...withEvidence, correlation, ...(measurements !== undefined ? { measurements } : {}) };
 }

@@ -50,7 +50,7 @@ export const KINDS: Readonly<Record<QuantityKind, KindInfo>> = {
   lineLoad: { noun: 'a line load (force per length)', dimensions: dims(1, 0, -2), siUnit: 'N/m', example: '1.8 kN/m', defaultDisplay: { unit: 'kN/m', factor: 1e3 } },
   // applied end moments (loads.<name>.moments); reports print moments too
   moment: { noun: 'a moment', dimensions: dims(1, 2, -2), siUnit: 'N m', example: '35 kN·m', defaultDisplay: { unit: 'kN·m', factor: 1e3 } },
-  // measurements on the structure (scenario-level evidence, docs/evidence.md §5)
+  // measurements on the structure (scenario-level evidence, docs/evidence.md §7)
   angle: { noun: 'an angle', dimensions: dims(0, 0, 0, 1), siUnit: 'rad', example: '4.5 mrad', defaultDisplay: { unit: 'mrad', factor: 1e-3 } },
   frequency: { noun: 'a frequency', dimensions: dims(0, 0, -1), siUnit: 'Hz', example: '4.1 Hz', defaultDisplay: { unit: 'Hz', factor: 1 } },
   massPerLength: { noun: 'a mass per length', dimensions: dims(1, -1, 0), siUnit: 'kg/m', example: '60 kg/m', defaultDisplay: { unit: 'kg/m', factor: 1 } },

@@ -5,11 +5,8 @@
  * keys and names the field when something is wrong.
  */
 import { EvidenceError } from '../evidence/evidenceError.js';
-import { updateLognormalKnownVariance, updateLognormalUnknownVariance } from '../evidence/lognormalPopulation.js';
-import { updateNormalKnownVariance, updateNormalUnknownVariance } from '../evidence/normalPopulation.js';
-import { updateLognormalItem, updateNormalItem } from '../evidence/singleItemTest.js';
+import { updatedSpec } from '../evidence/updatedSpec.js';
 import type { DistSpec } from '../probability/distribution.js';
-import { makeDistribution } from '../probability/makeDistribution.js';
 import { readQuantity } from './quantity.js';
 import { ExpressionError } from './quantityExpression.js';
 import { formatPath, lineOf, type PathSegment } from './rawTree.js';
@@ -46,11 +43,6 @@ function readAmount(raw: string | number, kind: QuantityKind | 'number', path: r
     if (e instanceof ExpressionError) fail(path, e.message);
     throw e;
   }
-}
-
-function lognormalSpec(lambda: number, zeta: number): DistSpec {
-  const mean = Math.exp(lambda + 0.5 * zeta * zeta);
-  return { dist: 'lognormal', mean, sd: mean * Math.sqrt(Math.expm1(zeta * zeta)) };
 }
 
 /**
@@ -90,45 +82,10 @@ export function readEvidence(
     fail([...at, 'tests', i], `a lognormal variable's test results must all be greater than zero, got ${String(raw.tests[i])}`);
   }
 
-  const d = makeDistribution(prior);
-  const mean = d.mean;
-  const sd = d.sd;
-  const sampleMean = tests.reduce((a, b) => a + b, 0) / tests.length;
-  // the measurement error on the scale the update works on
-  const errorSd = measurementSd ?? (measurementCov ?? 0) * Math.abs(sampleMean);
-  const errorCov = measurementCov ?? (measurementSd ?? 0) / sampleMean;
   let spec: DistSpec;
   let method: string;
   try {
-    if (tested === 'this_one') {
-      if (prior.dist === 'normal') {
-        const post = updateNormalItem(mean, sd, tests, errorSd);
-        spec = { dist: 'normal', mean: post.mean, sd: post.sd };
-      } else {
-        const post = updateLognormalItem(mean, sd, tests, errorCov);
-        spec = lognormalSpec(post.lambda, post.zeta);
-      }
-      method = `test${tests.length === 1 ? '' : 's'} of this item: ${prior.dist} prior and reading${tests.length === 1 ? '' : 's'} with measurement error, conjugate update${prior.dist === 'lognormal' ? ' on ln X' : ''}`;
-    } else if (scatter === 'known') {
-      if (prior.dist === 'normal') {
-        const p = updateNormalKnownVariance(tests, sd, errorSd, mean, priorWeight);
-        spec = { dist: 'normal', mean: p.mean, sd: p.sd };
-      } else {
-        const p = updateLognormalKnownVariance(tests, sd / mean, errorCov, mean, priorWeight);
-        spec = lognormalSpec(p.mean, p.sd);
-      }
-      method = `population with known scatter, unknown mean${priorWeight > 0 ? ` (prior worth ${priorWeight} tests)` : ''}: ${prior.dist} predictive`;
-    } else {
-      const belief = priorWeight > 0 ? { mean, sd, tests: priorWeight } : undefined;
-      if (prior.dist === 'normal') {
-        const p = updateNormalUnknownVariance(tests, errorSd, belief).predictive;
-        spec = { dist: 'studentt', loc: p.loc, scale: p.scale, dof: p.dof };
-      } else {
-        const p = updateLognormalUnknownVariance(tests, errorCov, belief);
-        spec = { dist: 'logstudentt', loc: p.loc, scale: p.scale, dof: p.dof };
-      }
-      method = `population with unknown mean and scatter${priorWeight > 0 ? ` (prior worth ${priorWeight} tests)` : ' (non-informative prior)'}: ${spec.dist === 'studentt' ? 'Student-t' : 'log-Student-t'} predictive`;
-    }
+    ({ spec, method } = updatedSpec(prior, { tests, tested, scatter, priorWeight, ...(measurementSd !== undefined ? { measurementSd } : {}), ...(measurementCov !== undefined ? { measurementCov } : {}) }));
   } catch (e) {
     if (e instanceof EvidenceError) fail(at, e.message);
     throw e;

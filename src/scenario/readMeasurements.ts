@@ -1,5 +1,5 @@
 /**
- * The scenario-level `evidence:` list → Measurement records in SI (docs/evidence.md §5,
+ * The scenario-level `evidence:` list → Measurement records in SI (docs/evidence.md §7,
  * docs/scenario-format.md). The shape is checked by zod; this file converts the quantities and
  * checks what a schema cannot: signs, a tested end that has a spring, a load the column can carry.
  */
@@ -11,7 +11,8 @@ import type { PathSegment } from './rawTree.js';
 import type { ScenarioShape } from './scenarioShape.js';
 import type { End, Measurement } from './types.js';
 
-type RawMeasurement = NonNullable<ScenarioShape['evidence']>[number];
+type RawItem = NonNullable<ScenarioShape['evidence']>[number];
+type RawMeasurement = Extract<RawItem, { type: 'rotation_test' | 'frequency' }>;
 
 function amount(ctx: ReadContext, path: readonly PathSegment[], text: string, kind: QuantityKind): number {
   try {
@@ -40,12 +41,15 @@ function sourceOf(raw: { source?: string }): { source?: string } {
 }
 
 export function readMeasurements(
-  raw: readonly RawMeasurement[] | undefined,
+  raw: readonly RawItem[] | undefined,
   ends: { readonly bottom: End; readonly top: End },
   ctx: ReadContext,
 ): Measurement[] | undefined {
-  if (raw === undefined) return undefined;
-  return raw.map((m, index): Measurement => {
+  // the list also holds survived loads (scenario/readStructureEvidence.ts): only measurements here,
+  // each keeping its place in the list for messages
+  const items = (raw ?? []).flatMap((m, index) => (m.type === 'rotation_test' || m.type === 'frequency' ? [{ m, index }] : []));
+  if (items.length === 0) return undefined;
+  return items.map(({ m, index }: { m: RawMeasurement; index: number }): Measurement => {
     const at = ['evidence', index] as PathSegment[];
     if (m.type === 'rotation_test') {
       const end = ends[m.end];

@@ -442,44 +442,69 @@ const measurementCov = pureNumberSchema('the CoV of the measurement error, e.g. 
 
 /**
  * Measurements on this structure that inform the column's variables through a model
- * (docs/evidence.md §5): a static rotation test of an end's spring, the first natural frequency.
+ * (docs/evidence.md §7): a static rotation test of an end's spring, the first natural frequency.
  */
-const measurementSchema = z
-  .discriminatedUnion(
-    'type',
-    [
-      strict(
-        {
-          type: z.literal('rotation_test'),
-          end: choice(MEASURED_ENDS, 'the tested end'),
-          moment: quantitySchema('moment').meta({ description: 'the moment applied to the connection, e.g. 20 kN m' }),
-          rotation: quantitySchema('angle').meta({ description: 'the rotation of the connection measured under that moment, e.g. 4.5 mrad' }),
-          measurement_cov: measurementCov,
-          source: sourceSchema,
-        },
-        'a rotation test {type: rotation_test, end, moment, rotation, measurement_cov, source}',
-      ),
-      strict(
-        {
-          type: z.literal('frequency'),
-          value: quantitySchema('frequency').meta({ description: 'the measured first natural frequency of lateral vibration, e.g. 4.1 Hz' }),
-          axial_load: quantitySchema('force').meta({ description: 'the axial compression in the column while it was measured' }),
-          mass_per_length: quantitySchema('massPerLength').meta({ description: 'the vibrating mass per length of the column (self-weight and anything attached)' }),
-          measurement_cov: measurementCov,
-          source: sourceSchema,
-        },
-        'a frequency measurement {type: frequency, value, axial_load, mass_per_length, measurement_cov, source}',
-      ),
-    ],
+const measurementSchemas = [
+  strict(
     {
-      error: (iss) => {
-        const type = (iss.input as { type?: unknown } | undefined)?.type;
-        if (typeof type === 'string') return `unknown measurement type '${type}'${didYouMean(type, MEASUREMENT_TYPES)}: use one of ${MEASUREMENT_TYPES.join(', ')}`;
-        return `expected a measurement {type: ${MEASUREMENT_TYPES.join(' | ')}, ...}, got ${describeInput(iss.input)}`;
-      },
+      type: z.literal('rotation_test'),
+      end: choice(MEASURED_ENDS, 'the tested end'),
+      moment: quantitySchema('moment').meta({ description: 'the moment applied to the connection, e.g. 20 kN m' }),
+      rotation: quantitySchema('angle').meta({ description: 'the rotation of the connection measured under that moment, e.g. 4.5 mrad' }),
+      measurement_cov: measurementCov,
+      source: sourceSchema,
     },
-  )
-  .meta({ description: `a measurement on this structure: {type: ${MEASUREMENT_TYPES.join(' | ')}, ...}` });
+    'a rotation test {type: rotation_test, end, moment, rotation, measurement_cov, source}',
+  ),
+  strict(
+    {
+      type: z.literal('frequency'),
+      value: quantitySchema('frequency').meta({ description: 'the measured first natural frequency of lateral vibration, e.g. 4.1 Hz' }),
+      axial_load: quantitySchema('force').meta({ description: 'the axial compression in the column while it was measured' }),
+      mass_per_length: quantitySchema('massPerLength').meta({ description: 'the vibrating mass per length of the column (self-weight and anything attached)' }),
+      measurement_cov: measurementCov,
+      source: sourceSchema,
+    },
+    'a frequency measurement {type: frequency, value, axial_load, mass_per_length, measurement_cov, source}',
+  ),
+] as const;
+/**
+ * Evidence about the whole structure (a list; each item names its `type`). A survived load is
+ * read by scenario/readStructureEvidence.ts; further item types join the union here.
+ */
+const textNote = (what: string) => z.string({ error: (iss) => `expected a text, got ${describeInput(iss.input)}` }).optional().meta({ description: what });
+export const STRUCTURE_EVIDENCE_TYPES = [...MEASUREMENT_TYPES, 'survived_load'] as const;
+const survivedLoadSchema = strict(
+  {
+    type: z.literal('survived_load'),
+    load: quantityScalar('force').meta({ description: 'the axial load the column has carried without failure (fixed, or random when it is not known exactly), acting like the loads of the scenario' }),
+    date: textNote('when it was carried (free text)'),
+    notes: textNote('what it was and how it is known (free text)'),
+  },
+  'a survived load {type: survived_load, load: Q, date, notes}',
+).meta({ description: 'the column has carried this load without failure: its resistance is known to exceed it (docs/evidence.md)' });
+const structureEvidenceItem = z
+  .discriminatedUnion('type', [...measurementSchemas, survivedLoadSchema], {
+    error: (iss) => {
+      const type = (iss.input as { type?: unknown } | undefined)?.type;
+      if (typeof type === 'string') return `unknown evidence type '${type}'${didYouMean(type, STRUCTURE_EVIDENCE_TYPES)}: use one of ${STRUCTURE_EVIDENCE_TYPES.join(', ')}`;
+      return `expected an evidence item {type: ${STRUCTURE_EVIDENCE_TYPES.join(' | ')}, ...}, got ${describeInput(iss.input)}`;
+    },
+  })
+  .meta({ description: `one item of evidence about the structure: {type: ${STRUCTURE_EVIDENCE_TYPES.join(' | ')}, ...}` });
+
+/** A candidate test for `plan-tests` and the report (studies/testPlanning.ts). */
+const testPlanSchema = strict(
+  {
+    variable: z.string({ error: (iss) => `expected the path of a random variable, e.g. column.ends.bottom.rotation; got ${describeInput(iss.input)}` }).meta({ description: 'the path of the random variable the tests measure' }),
+    tests: integer('a number of tests', 1),
+    tested: z.enum(EVIDENCE_TESTED, { error: (iss) => `expected what would be tested, one of ${EVIDENCE_TESTED.join(', ')}; got ${describeInput(iss.input)}` }).optional()
+      .meta({ description: 'this_one: tests of this very item (default unless the variable already has tests of similar items); similar: more tests like those already entered' }),
+    measurement_cov: pureNumberSchema('the CoV of the measurement error of each planned test, e.g. 0.1').optional(),
+    label: textNote('a name for the plan in tables and charts'),
+  },
+  'a test plan {variable, tests, tested, measurement_cov, label}',
+).meta({ description: 'a candidate test: which variable, how many tests, how precise' });
 
 export const scenarioShape = strict(
   {
@@ -565,10 +590,15 @@ export const scenarioShape = strict(
     ).optional(),
     display_units: choice(DISPLAY_UNITS, 'a unit system for reports').optional(),
     evidence: z
-      .array(measurementSchema, { error: (iss) => `expected a list of measurements [{type: ${MEASUREMENT_TYPES.join(' | ')}, ...}], got ${describeInput(iss.input)}` })
-      .min(1, { error: () => 'is empty: give at least one measurement or leave the key out' })
+      .array(structureEvidenceItem, { error: (iss) => `expected a list of evidence items [{type: ${STRUCTURE_EVIDENCE_TYPES.join(' | ')}, ...}], got ${describeInput(iss.input)}` })
+      .min(1, { error: () => 'is empty: give at least one item or leave the key out' })
       .optional()
-      .meta({ description: 'measurements on this structure that update the column’s variables through a model (docs/evidence.md)' }),
+      .meta({ description: 'evidence about the structure as a whole: measurements that update the column’s variables through a model (rotation test, natural frequency) and survived loads (docs/evidence.md); test results of one variable go under that variable' }),
+    test_plans: z
+      .array(testPlanSchema, { error: (iss) => `expected a list of test plans [{variable, tests, measurement_cov}], got ${describeInput(iss.input)}` })
+      .min(1, { error: 'is empty: give at least one plan or leave test_plans out' })
+      .optional()
+      .meta({ description: 'candidate tests to rank by what they would do to the reliability index (plan-tests; shown in the report)' }),
   },
   'a scenario',
 );

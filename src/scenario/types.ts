@@ -213,11 +213,35 @@ export interface Scenario {
   readonly evidence?: Readonly<Record<string, EvidenceRecord>>;
   /** Measurements on this structure through a model (scenario-level `evidence:`, in file order; absent: none). */
   readonly measurements?: readonly Measurement[];
+  /** Loads the column is known to have carried without failure (absent: none); scenario/readStructureEvidence.ts. */
+  readonly survivedLoads?: readonly SurvivedLoad[];
+  /** Candidate tests to rank (absent: none given); scenario/readTestPlans.ts. */
+  readonly testPlans?: readonly TestPlan[];
+}
+
+/** `evidence: [{type: survived_load, load, date, notes}]` */
+export interface SurvivedLoad {
+  /** where it was written, e.g. evidence[0].load (also its variable name when random) */
+  readonly path: string;
+  /** N */
+  readonly load: Scalar;
+  readonly date?: string;
+  readonly notes?: string;
+}
+
+/** One candidate test plan (`test_plans:`). */
+export interface TestPlan {
+  readonly variable: string;
+  readonly tests: number;
+  readonly tested: 'similar' | 'this_one';
+  /** this_one only: CoV of each reading's error */
+  readonly measurementCov?: number;
+  readonly label?: string;
 }
 
 /**
  * A measurement on this structure that informs the column's variables through a model
- * (docs/evidence.md §5). SI; `measurementCov` is the CoV of a lognormal reading error.
+ * (docs/evidence.md §7). SI; `measurementCov` is the CoV of a lognormal reading error.
  * `index` is the item's position in the file's `evidence:` list (for messages: `evidence[index]`).
  */
 export type Measurement =

@@ -4,6 +4,8 @@
  */
 import { evidenceRows } from './evidenceSummary.js';
 import { measurementUpdateJson } from './measurementUpdate.js';
+import type { MeasurementEffect } from './measurementEffect.js';
+import { testPlansBlock } from './testPlanJson.js';
 import type { EvidenceMoments } from '../report/reportInput.js';
 import { SAMPLER_VERSION } from '../probability/blockRng.js';
 import type { SobolResult } from '../sensitivity/sobol.js';
@@ -227,6 +229,28 @@ function evidenceJson(s: Assessment['scenario']): unknown {
   }));
 }
 
+/** β and verdict before and after the evidence (FORM), and the survival study (SI). */
+function measurementsJson(m: MeasurementEffect, s: Assessment['scenario']): unknown {
+  const state = (b: { beta: number; pf: number; meets: boolean }) => ({ beta: b.beta, pf: b.pf, meets_target: b.meets });
+  return {
+    method: 'form',
+    target_beta: m.target,
+    before: state(m.before),
+    ...(m.afterTests ? { after_tests: state(m.afterTests) } : {}),
+    after: state(m.after),
+    ...(m.survival
+      ? {
+          survived_loads: (s.survivedLoads ?? []).map((l) => ({ path: l.path, load: l.load.kind === 'fixed' ? l.load.value : l.load.spec, date: l.date ?? null, notes: l.notes ?? null })),
+          survival: {
+            beta: m.survival.beta, pf: m.survival.pf, probability_of_survival: m.survival.pSurvival, rho: m.survival.rho, converged: m.survival.converged,
+            model_factor_shared: true,
+            ...(m.survival.mc ? { mc: { pf: m.survival.mc.pf, cov: m.survival.mc.cov, samples: m.survival.mc.samples, survived: m.survival.mc.survived, failures: m.survival.mc.failures, seed: m.survival.mc.seed } } : {}),
+          },
+        }
+      : {}),
+  };
+}
+
 export function assessmentJson(a: Assessment, meta: RunMeta): unknown {
   const t = a.scenario.target;
   const doc: Record<string, unknown> = {
@@ -262,6 +286,8 @@ export function assessmentJson(a: Assessment, meta: RunMeta): unknown {
   if (a.restraint) doc.restraint = restraintJson(a.restraint);
   if (a.scenario.evidence) doc.evidence = evidenceJson(a.scenario);
   if (a.measurementUpdate) doc.evidence_update = measurementUpdateJson(a.measurementUpdate);
+  if (a.measurements) doc.measurements = measurementsJson(a.measurements, a.scenario);
+  if (a.testPlans) doc.test_plans = testPlansBlock(a.testPlans);
   doc.warnings = a.warnings;
   return jsonSafe(doc);
 }

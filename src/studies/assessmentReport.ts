@@ -22,6 +22,31 @@ import type { ConnectionResponse } from '../limitState/connectionResponse.js';
 import type { ConnectionValues } from '../report/reportInput.js';
 import { designPointConnections } from './designPointConnections.js';
 import { evidenceRows } from './evidenceSummary.js';
+import type { MeasurementEffect } from './measurementEffect.js';
+import type { MeasurementsReport } from '../report/reportInput.js';
+
+function measurementsReport(m: MeasurementEffect, s: Assessment['scenario']): MeasurementsReport {
+  const sv = m.survival;
+  return {
+    target: m.target,
+    before: m.before,
+    ...(m.afterTests ? { afterTests: m.afterTests } : {}),
+    after: m.after,
+    densities: m.densities,
+    ...(sv
+      ? {
+          survival: {
+            loads: (s.survivedLoads ?? []).map((l) => ({
+              path: l.path, mean: l.load.kind === 'fixed' ? l.load.value : makeDistribution(l.load.spec).mean, random: l.load.kind === 'random',
+              ...(l.date ? { date: l.date } : {}), ...(l.notes ? { notes: l.notes } : {}),
+            })),
+            beta: sv.beta, pf: sv.pf, pSurvival: sv.pSurvival, rho: sv.rho, converged: sv.converged,
+            ...(sv.mc ? { mc: { pf: sv.mc.pf, cov: sv.mc.cov, samples: sv.mc.samples, survived: sv.mc.survived, failures: sv.mc.failures, seed: sv.mc.seed } } : {}),
+          },
+        }
+      : {}),
+  };
+}
 import { strengthUsesBow } from '../mechanics/strengthModelKind.js';
 import { makeDistribution } from '../probability/makeDistribution.js';
 import { zeroFailureBound } from '../reliability/zeroFailureBound.js';
@@ -278,6 +303,8 @@ export function assessmentReportInput(a: Assessment, meta: RunMeta): ReportInput
     },
     inputs: inputRows(s),
     ...(s.evidence ? { evidence: evidenceRows(s) } : {}),
+    ...(a.measurements ? { measurements: measurementsReport(a.measurements, s) } : {}),
+    ...(a.testPlans ? { testPlans: a.testPlans } : {}),
     correlation: s.correlation.map((r) => ({ a: r.a, b: r.b, rho: r.rho })),
     column: {
       length: s.column.length,

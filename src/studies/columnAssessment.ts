@@ -24,6 +24,8 @@ import { InputError } from '../scenario/inputError.js';
 import { fieldDomain } from '../scenario/fieldDomain.js';
 import { supportInsideDomain } from '../scenario/readScalar.js';
 import type { Method, Scenario } from '../scenario/types.js';
+import { measurementEffect, type MeasurementEffect } from './measurementEffect.js';
+import { planTests, type TestPlanStudy } from './testPlanning.js';
 import { scalarAt } from '../scenario/variables.js';
 import type { DistSpec } from '../probability/distribution.js';
 import { scenarioForm } from './columnForm.js';
@@ -130,6 +132,10 @@ export interface Assessment {
   calls: Record<string, number>;
   /** the scenario's measurements (scenario-level `evidence:`): posterior, diagnostics, β before and after; `scenario` is then the updated one */
   measurementUpdate?: MeasurementUpdateResult;
+  /** β before and after the test results and survived loads (present when the scenario has any) */
+  measurements?: MeasurementEffect;
+  /** the scenario's test plans ranked (present when it lists any) */
+  testPlans?: TestPlanStudy;
 }
 
 function momentsOf(model: ColumnModel): Moments[] {
@@ -446,6 +452,18 @@ export async function assessColumn(given: Scenario, opts: AssessOptions = {}): P
   const named = Object.entries(calls).reduce((a, [k, n]) => a + (k === 'is' || k === 'mc' || k === 'subset' ? 0 : n), 0);
   const other = inThread - named - simulatedHere;
   if (other > 0) calls.other = other;
+  let measurements: MeasurementEffect | undefined;
+  if (!interrupted && !opts.reliabilityOnly && (s.evidence || s.survivedLoads)) {
+    const r = countEvaluations(() => measurementEffect(given, seed));
+    measurements = r.result;
+    calls.measurements = r.calls;
+  }
+  let testPlans: TestPlanStudy | undefined;
+  if (!interrupted && !opts.reliabilityOnly && s.testPlans) {
+    const r = countEvaluations(() => planTests(given, { seed }));
+    testPlans = r.result;
+    calls['test-plans'] = r.calls;
+  }
   const studies = STUDY_NAMES.filter((n) => asked.has(n));
   // two principal axes: each axis' own β, which governs, and what the check leaves out
   const axesCounted = countEvaluations(() => (check.axes !== null ? axesReliability(lead ? lead.model : model, check.axes.governing) : null));
@@ -457,6 +475,8 @@ export async function assessColumn(given: Scenario, opts: AssessOptions = {}): P
   warnings.push(...axisCautions(s));
   return {
     ...(axes !== null ? { axes } : {}),
+    ...(measurements ? { measurements } : {}),
+    ...(testPlans ? { testPlans } : {}),
     scenario: s,
     model: lead ? lead.model : model,
     modelFactor: model.modelFactorUsed,

@@ -1,6 +1,6 @@
 /**
  * Measurements on the structure (scenario-level `evidence:`) → the posterior of the scenario's
- * random variables → an updated scenario that every method then assesses (docs/evidence.md §5).
+ * random variables → an updated scenario that every method then assesses (docs/evidence.md §7).
  *
  * 1. Likelihood: each reading (rotation test, natural frequency) against the column model's
  *    prediction at x (limitState/measurementModel.ts), lognormal reading error.

@@ -97,7 +97,7 @@ describe('bad measurements get one message naming the field', () => {
     [`  - {type: rotation_test, end: bottom, moment: 20 kN, rotation: 12 mrad, measurement_cov: 0.1}`, '', /evidence\[0\]\.moment/, ''],
     [`  - {type: rotation_test, end: bottom, moment: 20 kN m, rotation: 12 mrad, measurement_cov: 0}`, '', /evidence\[0\]\.measurement_cov.*greater than 0/, ''],
     [`  - {type: frequency, value: 4 Hz, axial_load: 250 kN, measurement_cov: 0.02}`, '', /evidence\[0\]\.mass_per_length.*missing/, ''],
-    [`  - {type: frequencies, value: 4 Hz}`, '', /evidence\[0\].*unknown measurement type 'frequencies'.*frequency/, ''],
+    [`  - {type: frequencies, value: 4 Hz}`, '', /evidence\[0\].*unknown evidence type 'frequencies'.*frequency/, ''],
     [`  - {type: frequency, value: -4 Hz, axial_load: 250 kN, mass_per_length: 52 kg/m, measurement_cov: 0.02}`, '', /evidence\[0\]\.value.*greater than zero/, ''],
   ])('%s', (item, _unused, message, bottom) => {
     const text = scenarioWith(item, bottom ? `    ${bottom}` : BOTTOM);

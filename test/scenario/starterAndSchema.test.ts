@@ -31,7 +31,7 @@ describe('JSON Schema generated from the validator', () => {
   };
   test('names every top-level key and refuses others', () => {
     expect(Object.keys(schema.properties).sort()).toEqual(
-      ['$schema', 'analysis', 'column', 'correlation', 'display_units', 'evidence', 'loads', 'model_factor', 'reference_period', 'stanchion', 'strength', 'target', 'target_beta', 'target_source', 'title'].sort(),
+      ['$schema', 'analysis', 'column', 'correlation', 'display_units', 'evidence', 'loads', 'model_factor', 'reference_period', 'stanchion', 'strength', 'target', 'target_beta', 'target_source', 'test_plans', 'title'].sort(),
     );
     expect(schema.required.sort()).toEqual(['column', 'loads', 'stanchion', 'strength']);
     expect(schema.additionalProperties).toBe(false);

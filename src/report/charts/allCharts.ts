@@ -13,6 +13,8 @@ import { restraintCurveChart } from './restraintCurve.js';
 import { sweepChart } from './sweep.js';
 import { restraintContourChart } from './restraintContour.js';
 import { restraintCovChart } from './restraintCov.js';
+import { measurementDensityChart } from './measurementDensity.js';
+import { testPlansChart } from './testPlans.js';
 
 export function buildCharts(input: ReportInput, system: UnitSystem): ChartSpec[] {
   const charts: ChartSpec[] = [];
@@ -26,6 +28,8 @@ export function buildCharts(input: ReportInput, system: UnitSystem): ChartSpec[]
   if (input.restraint && input.restraint.curve.some((p) => p.ideal === undefined)) charts.push(restraintCurveChart(input, input.restraint, system));
   if (input.restraint?.contour && input.restraint.contour.segments.length > 0) charts.push(restraintContourChart(input, input.restraint, system));
   if (input.restraint?.covCurve && input.restraint.covCurve.points.some((p) => p.mean !== null)) charts.push(restraintCovChart(input, input.restraint, system));
+  (input.measurements?.densities ?? []).forEach((d, i) => { if (d.points.length > 1) charts.push(measurementDensityChart(d, i, system)); });
+  if (input.testPlans && input.testPlans.plans.some((r) => Number.isFinite(r.beta05))) charts.push(testPlansChart(input, input.testPlans));
   if (input.sweep && input.sweep.rows.length > 0) charts.push(sweepChart(input, input.sweep, system));
   return charts;
 }

@@ -75,12 +75,27 @@ function summariseMode(state: ColumnState, mode: number): ModeSummary | null {
   };
 }
 
-export function deterministicCheck(model: ColumnModel, modes = 3): CheckResult {
-  const x = model.mean;
-  const state = model.state(x);
+/** The numbers a sweep row keeps of the check (what deterministicCheck computes first). */
+export type CheckCore = Pick<CheckResult, 'critical_load' | 'effective_length_factor' | 'capacity' | 'demand' | 'utilization'>;
+
+/** The capacity and demand at the means only: no mode shapes, connection moments or joint classes. */
+export function checkCore(model: ColumnModel): CheckCore {
+  return coreAt(model, model.mean, model.state(model.mean)).core;
+}
+
+function coreAt(model: ColumnModel, x: Float64Array, state: ColumnState) {
   const cap = columnCapacity(model.scenario.strength, state);
   const theta = model.modelFactor(x);
   const demand = model.demand(x);
+  const core: CheckCore = { critical_load: cap.Pcr, effective_length_factor: cap.K, capacity: cap.capacity, demand, utilization: demand / (theta * cap.capacity) };
+  return { core, cap, theta };
+}
+
+export function deterministicCheck(model: ColumnModel, modes = 3): CheckResult {
+  const x = model.mean;
+  const state = model.state(x);
+  const { core, cap, theta } = coreAt(model, x, state);
+  const { demand } = core;
   const summaries: ModeSummary[] = [];
   for (let m = 1; m <= modes; m++) {
     const s = summariseMode(state, m);
@@ -92,7 +107,7 @@ export function deterministicCheck(model: ColumnModel, modes = 3): CheckResult {
     restraint_ratio: { bottom: finiteOrNull(state.r.bottom), top: finiteOrNull(state.r.top) },
     capacity: cap.capacity,
     demand,
-    utilization: demand / (theta * cap.capacity),
+    utilization: core.utilization,
     fixity_factor: { bottom: fixityFactor(state.r.bottom), top: fixityFactor(state.r.top) },
     lateral_ratio: state.frame === 'sway' ? (state.r.lateral ?? 0) : null,
     curvature_factor: cap.c,

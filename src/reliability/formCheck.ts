@@ -108,13 +108,14 @@ export function checkForm(problem: ReliabilityProblem, f: FormResult, opts: Form
     G.evaluate(uRows, rows, gRows);
     for (let r = 0; r < rows; r++) {
       if (gRows[r] > 0) continue;
-      const u = uRows.subarray(r * n, r * n + n);
+      const row = r * n;
       failures++;
       // φ(u)/q(u) = 1 / (w0 + Σ w_i exp(u·c_i − |c_i|²/2)), summed without overflow.
       let largest = 0;
       for (let m = 0; m < centres.length; m++) {
         let d = 0;
-        for (let i = 0; i < n; i++) d += u[i] * centres[m][i];
+        const c = centres[m];
+        for (let i = 0; i < n; i++) d += uRows[row + i] * c[i];
         exponents[m] = d - halfSquare[m];
         if (exponents[m] > largest) largest = exponents[m];
       }

@@ -7,6 +7,8 @@
  * it first).
  */
 import { spawnSync } from 'node:child_process';
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
 import { fileURLToPath } from 'node:url';
 import { dirname, join } from 'node:path';
 import { runProgram } from '../../src/cli/program.js';
@@ -54,4 +56,23 @@ export async function runCli(args: string[], input?: string, cwd = ROOT): Promis
     process.stderr.write = writeErr;
     process.chdir(previous);
   }
+}
+
+let textFolder: string | null = null;
+let textFiles = 0;
+
+/**
+ * The command on a scenario text given as a file of its own in place of `-`, in this process: for
+ * runs where the scenario's content is the point, not standard input (which runCli with `input`
+ * and runCliProcess exercise). The file is .json when the text is a JSON object, else .yaml.
+ */
+export function runCliOnText(args: string[], text: string): Promise<CliRun> {
+  if (textFolder === null) {
+    const folder = mkdtempSync(join(tmpdir(), 'stanchion-cli-text-'));
+    textFolder = folder;
+    process.once('exit', () => rmSync(folder, { recursive: true, force: true }));
+  }
+  const file = join(textFolder, `scenario-${textFiles++}.${text.trimStart().startsWith('{') ? 'json' : 'yaml'}`);
+  writeFileSync(file, text);
+  return runCli(args.map((a) => (a === '-' ? file : a)));
 }

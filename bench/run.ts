@@ -48,6 +48,12 @@ async function main(): Promise<void> {
     for (const line of runMeasurementBench(join(root, 'scenarios', 'measured-shed-column.yaml'))) console.log(line);
     return;
   }
+  if (process.argv[2] === 'sweep-cost') {
+    // `node dist/bench/run.js sweep-cost`: the 800-case FORM sweep's cost per case only
+    console.log('\n## sweep cost per case');
+    for (const line of await runSweepCostBench(join(root, 'scenarios', 'braced-base-plate.yaml'))) console.log(line);
+    return;
+  }
   if (process.argv[2] === 'cost') {
     // `node dist/bench/run.js cost`: the Monte Carlo kernel (with the whole-process ratio) and the sweep cost only
     const demo = join(root, 'scenarios', 'braced-base-plate.yaml');

@@ -148,16 +148,24 @@ function sectionPropertiesAt(model: ColumnModel): SectionPropertiesCheck | null 
   };
 }
 
-export function deterministicCheck(model: ColumnModel, modes = 3): CheckResult {
-  const x = model.mean;
+/** The numbers a sweep row keeps of the check (what deterministicCheck computes first). */
+export type CheckCore = Pick<CheckResult, 'critical_load' | 'effective_length_factor' | 'capacity' | 'demand' | 'utilization'>;
+
+/** The capacity and demand at the means only (about the governing axis): no mode shapes, connection moments or joint classes. */
+export function checkCore(model: ColumnModel): CheckCore {
+  return coreAt(model, model.mean).core;
+}
+
+/** The governing axis at x (the smaller capacity; y on a tie), its state and capacity. */
+function coreAt(model: ColumnModel, x: Float64Array) {
   const theta = model.modelFactor(x);
+  const demand = model.demand(x);
   let state: ColumnState;
   let strength = model.scenario.strength;
   let axes: AxesCheck | null = null;
   if (model.axes.length === 2) {
-    const d = model.demand(x);
-    const y = axisCheck(model.axes[0]!, x, d, theta);
-    const z = axisCheck(model.axes[1]!, x, d, theta);
+    const y = axisCheck(model.axes[0]!, x, demand, theta);
+    const z = axisCheck(model.axes[1]!, x, demand, theta);
     const governing = z.check.capacity < y.check.capacity ? z : y;
     axes = { y: y.check, z: z.check, governing: governing.check.axis };
     state = governing.state;
@@ -166,7 +174,14 @@ export function deterministicCheck(model: ColumnModel, modes = 3): CheckResult {
     state = model.state(x);
   }
   const cap = columnCapacity(strength, state);
-  const demand = model.demand(x);
+  const core: CheckCore = { critical_load: cap.Pcr, effective_length_factor: cap.K, capacity: cap.capacity, demand, utilization: demand / (theta * cap.capacity) };
+  return { core, cap, theta, state, strength, axes };
+}
+
+export function deterministicCheck(model: ColumnModel, modes = 3): CheckResult {
+  const x = model.mean;
+  const { core, cap, theta, state, strength, axes } = coreAt(model, x);
+  const { demand } = core;
   const summaries: ModeSummary[] = [];
   for (let m = 1; m <= modes; m++) {
     const s = summariseMode(state, m);
@@ -178,7 +193,7 @@ export function deterministicCheck(model: ColumnModel, modes = 3): CheckResult {
     restraint_ratio: { bottom: finiteOrNull(state.r.bottom), top: finiteOrNull(state.r.top) },
     capacity: cap.capacity,
     demand,
-    utilization: demand / (theta * cap.capacity),
+    utilization: core.utilization,
     fixity_factor: { bottom: fixityFactor(state.r.bottom), top: fixityFactor(state.r.top) },
     lateral_ratio: state.frame === 'sway' ? (state.r.lateral ?? 0) : null,
     curvature_factor: cap.c,

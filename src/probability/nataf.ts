@@ -8,6 +8,7 @@
 import { choleskyLower, lowerSolve, sparseLower, sparseLowerTimes } from './cholesky.js';
 import { DistributionError, type Distribution } from './distribution.js';
 import { equivalentCorrelation } from './equivalentCorrelation.js';
+import { columnInverse } from './columnInverse.js';
 
 export { equivalentCorrelation, physicalCorrelation } from './equivalentCorrelation.js';
 
@@ -15,6 +16,11 @@ export interface IsoTransform {
   readonly n: number;
   toPhysical(u: Float64Array, x: Float64Array): void; // u (indep. std normal) → x
   toStandard(x: Float64Array, u: Float64Array): void;
+  /**
+   * Optional: many points at once, u row-major (uRows[r·n + i]) → x column-wise (columns[i][r]),
+   * for r < count; bit-identical to toPhysical on each row.
+   */
+  toPhysicalRows?(uRows: Float64Array, count: number, columns: Float64Array[]): void;
 }
 
 /** What natafTransform returns: the IsoTransform plus the pieces it was built from. */
@@ -24,6 +30,7 @@ export interface NatafTransform extends IsoTransform {
   readonly normalCorrelation: readonly (readonly number[])[];
   /** row-major lower Cholesky factor of R0, or null when the variables are independent */
   readonly lower: Float64Array | null;
+  toPhysicalRows(uRows: Float64Array, count: number, columns: Float64Array[]): void;
 }
 
 const SYMMETRY_TOLERANCE = 1e-10;
@@ -115,5 +122,25 @@ export function natafTransform(
     : (x: Float64Array, u: Float64Array): void => {
         for (let i = 0; i < n; i++) u[i] = marginals[i].toStandardNormal(x[i]);
       };
-  return { n, marginals, normalCorrelation: R0, lower, toPhysical, toStandard };
+  // column-wise: z_i = Σ L0[i][k] u_k over the nonzero entries in toPhysical's order (so the same
+  // sums, bit for bit), then each marginal's inverse over its whole column
+  const inverses = marginals.map(columnInverse);
+  const toPhysicalRows = (uRows: Float64Array, count: number, columns: Float64Array[]): void => {
+    for (let i = 0; i < n; i++) {
+      const col = columns[i];
+      if (sparse === null) {
+        for (let r = 0, at = i; r < count; r++, at += n) col[r] = uRows[at];
+      } else {
+        const from = sparse.start[i];
+        const to = sparse.start[i + 1];
+        for (let r = 0, row = 0; r < count; r++, row += n) {
+          let sum = 0;
+          for (let e = from; e < to; e++) sum += sparse.value[e] * uRows[row + sparse.column[e]];
+          col[r] = sum;
+        }
+      }
+      inverses[i](col, count);
+    }
+  };
+  return { n, marginals, normalCorrelation: R0, lower, toPhysical, toStandard, toPhysicalRows };
 }

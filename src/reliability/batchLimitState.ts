@@ -1,6 +1,7 @@
 /**
  * g at a batch of u-space points, for methods that choose their points themselves (the FORM
- * self-check): each point is transformed on its own (x = T(u)), then g runs once over the
+ * self-check): the points are transformed (x = T(u); column-wise when the transform offers
+ * toPhysicalRows, bit-identical to one point at a time), then g runs once over the
  * batch through the problem's block form when it has one (types.ts BlockLimitState), else point
  * by point. Values, errors and call counts are those of checkedLimitState called on each point in
  * order: the block form is bit-identical to g, a NaN/±Infinity raises the same LimitStateError
@@ -43,10 +44,13 @@ export function batchLimitState(problem: ReliabilityProblem, method: string, bat
     evaluate: (uRows, count, out) => {
       if (count > batchSize) throw new Error(`batch of ${count} points exceeds ${batchSize}`);
       throwIfInterrupted(method);
-      for (let r = 0; r < count; r++) {
-        for (let i = 0; i < n; i++) u[i] = uRows[r * n + i];
-        transform.toPhysical(u, x);
-        for (let i = 0; i < n; i++) columns[i][r] = x[i];
+      if (transform.toPhysicalRows !== undefined) transform.toPhysicalRows(uRows, count, columns);
+      else {
+        for (let r = 0; r < count; r++) {
+          for (let i = 0; i < n; i++) u[i] = uRows[r * n + i];
+          transform.toPhysical(u, x);
+          for (let i = 0; i < n; i++) columns[i][r] = x[i];
+        }
       }
       try {
         block.evaluate(columns, count, out);

@@ -79,17 +79,10 @@ export function checkForm(problem: ReliabilityProblem, f: FormResult, opts: Form
   const halfSquare = centres.map((c) => 0.5 * c.reduce((s, v) => s + v * v, 0));
   const pfs = crude ? [] : f.system.designPoints.map((p) => normalSf(p.beta));
   const formBeta = f.system.beta;
-  // The block sampler's generator (ziggurat normals, filled a block at a time).
+  // The block sampler's generator (ziggurat normals). fillNormal draws one stream whatever the
+  // chunk sizes, so filling each batch's rows straight from it gives the same numbers in the
+  // same order as drawing them one at a time.
   const rng = new BlockRng(seed, FORM_CHECK_STREAM_BASE);
-  const block = new Float64Array(512);
-  let next = block.length;
-  const draw = (): number => {
-    if (next === block.length) {
-      fillNormal(rng, block, block.length);
-      next = 0;
-    }
-    return block[next++];
-  };
   const uRows = new Float64Array(FORM_CHECK_BATCH * n);
   const gRows = new Float64Array(FORM_CHECK_BATCH);
   const exponents = new Float64Array(centres.length);
@@ -106,22 +99,23 @@ export function checkForm(problem: ReliabilityProblem, f: FormResult, opts: Form
     const share = counts.map((c) => c / size);
     // the batch's points in drawing order (component by component), then g over all of them
     let rows = 0;
-    for (let k = 0; k < counts.length; k++) {
-      const c = k === 0 ? null : centres[k - 1];
-      for (let j = 0; j < counts[k]; j++, rows++) {
-        for (let i = 0; i < n; i++) uRows[rows * n + i] = draw() + (c ? c[i] : 0);
-      }
+    for (let k = 0; k < counts.length; k++) rows += counts[k];
+    fillNormal(rng, uRows, rows * n);
+    for (let k = 1, at = counts[0] * n; k < counts.length; k++) {
+      const c = centres[k - 1];
+      for (let j = 0; j < counts[k]; j++) for (let i = 0; i < n; i++, at++) uRows[at] += c[i];
     }
     G.evaluate(uRows, rows, gRows);
     for (let r = 0; r < rows; r++) {
       if (gRows[r] > 0) continue;
-      const u = uRows.subarray(r * n, r * n + n);
+      const row = r * n;
       failures++;
       // φ(u)/q(u) = 1 / (w0 + Σ w_i exp(u·c_i − |c_i|²/2)), summed without overflow.
       let largest = 0;
       for (let m = 0; m < centres.length; m++) {
         let d = 0;
-        for (let i = 0; i < n; i++) d += u[i] * centres[m][i];
+        const c = centres[m];
+        for (let i = 0; i < n; i++) d += uRows[row + i] * c[i];
         exponents[m] = d - halfSquare[m];
         if (exponents[m] > largest) largest = exponents[m];
       }

@@ -1,8 +1,9 @@
 /**
- * A sweep case's values set in the base scenario's parsed tree (parsed once per runner), then
- * read by the same shape and meaning stages as loadScenario: units, expressions (`L/1500`
- * follows a varied length) and every validation rule stay in one place, and the base file's
- * lines still point at the user's file. `applySweepValues` writes the same edit as text (YAML
+ * A sweep case's values set in the base scenario (parsed and shape-checked once per runner): each
+ * value is checked against its own field's rule, then the case is read by the same meaning stage
+ * as loadScenario, so units, expressions (`L/1500` follows a varied length) and every validation
+ * rule stay in one place, and the base file's lines still point at the user's file. A value its
+ * field refuses goes through the whole shape check, which words the message. `applySweepValues` writes the same edit as text (YAML
  * edited as a document, comments kept; JSON as a plain object) for people to read.
  *
  * A path is a contract path (`column.length`, `loads.dead`, `column.ends.bottom.rotation`)
@@ -16,6 +17,9 @@ import { detectFormat, parseText } from '../scenario/parseText.js';
 import { InputError } from '../scenario/inputError.js';
 import { loadScenario, scenarioFromTree } from '../scenario/loadScenario.js';
 import { setOwn, type RawMap, type RawValue, type RawTree } from '../scenario/rawTree.js';
+import { buildScenario } from '../scenario/buildScenario.js';
+import { scenarioShape, type ScenarioShape } from '../scenario/scenarioShape.js';
+import { fieldRuleAt, type FieldRule } from '../scenario/shapeAtPath.js';
 import { didYouMean } from '../scenario/nearestName.js';
 import type { Scenario } from '../scenario/types.js';
 import type { SweepValue } from './sweepTypes.js';
@@ -42,6 +46,24 @@ export interface SweepBase {
   tree: RawTree;
   /** sha256 of the base text; a case's scenario is named by it and the case's values. */
   sha256: string;
+  /** The shape-checked base (frozen: cases share what they do not edit). */
+  shaped: ScenarioShape;
+  /** Each set of varied paths' edits, with the rule of every varied field (filled as cases come). */
+  plans: Map<string, PlannedEdit[]>;
+}
+
+/** One varied path: where it lands, what it drops, and its field's rule (null: check the whole scenario). */
+interface PlannedEdit extends Edit {
+  path: string;
+  rule: FieldRule | null;
+}
+
+function deepFreeze<T>(x: T): T {
+  if (typeof x === 'object' && x !== null && !Object.isFrozen(x)) {
+    Object.freeze(x);
+    for (const v of Object.values(x)) deepFreeze(v);
+  }
+  return x;
 }
 
 /** Validates the base scenario (loadScenario's errors) and keeps it ready for edits. */
@@ -50,9 +72,12 @@ export function parseSweepBase(text: string, fileName: string): SweepBase {
   const tree = parseText(text, fileName);
   const sha256 = scenario.sha256;
   const format = detectFormat(text, fileName);
-  if (format === 'json') return { fileName, scenario, format, plain: JSON.parse(text) as unknown, yaml: null, tree, sha256 };
+  // loadScenario has shape-checked this very tree, so this parse succeeds
+  const shaped = deepFreeze(scenarioShape.parse(tree.value));
+  const plans = new Map<string, PlannedEdit[]>();
+  if (format === 'json') return { fileName, scenario, format, plain: JSON.parse(text) as unknown, yaml: null, tree, sha256, shaped, plans };
   const yaml = parseDocument(text, { uniqueKeys: true });
-  return { fileName, scenario, format, plain: yaml.toJS() as unknown, yaml, tree, sha256 };
+  return { fileName, scenario, format, plain: yaml.toJS() as unknown, yaml, tree, sha256, shaped, plans };
 }
 
 /** A deep copy of a raw tree value (own keys kept as own keys, whatever their names). */
@@ -146,15 +171,122 @@ export function applySweepValues(
   return `${JSON.stringify(copy, null, 2)}\n`;
 }
 
+/** A copy of a map with the same own keys in the same order. */
+function shallowCopy(v: RawMap): RawMap {
+  const out: RawMap = {};
+  for (const k of Object.keys(v)) setOwn(out, k, v[k]);
+  return out;
+}
+
+/** The edits of a set of varied paths (planEdit's errors, in the order of the values). */
+function plannedEdits(base: SweepBase, paths: string[], fieldOf: (path: string) => string): PlannedEdit[] {
+  const key = paths.join('\n');
+  const known = base.plans.get(key);
+  if (known !== undefined) return known;
+  const varied = new Set(paths);
+  const plans = paths.map((p) => {
+    const e = planEdit(base.plain, p, fieldOf(p), varied);
+    return { path: p, ...e, rule: fieldRuleAt(base.shaped, e.segments) };
+  });
+  base.plans.set(key, plans);
+  return plans;
+}
+
 /**
- * The scenario of one case: the base tree with the values set, through the shape and meaning
- * stages of loadScenario (no text written or parsed per case).
+ * The case's values set in a copy of the shape-checked base (only the objects on the edited paths
+ * are copied), or null when some value does not pass its field's own rule (shapeAtPath.ts).
+ */
+function shapedWithValues(base: SweepBase, plans: readonly PlannedEdit[], values: Readonly<Record<string, SweepValue>>): ScenarioShape | null {
+  for (const e of plans) {
+    if (e.rule === null || !e.rule.accepts(values[e.path])) return null;
+    if (e.drop !== null && !e.rule.optional(e.drop[e.drop.length - 1])) return null;
+  }
+  const root = shallowCopy(base.shaped as unknown as RawMap);
+  const copies = new Set<RawMap>([root]);
+  for (const e of plans) {
+    const leaf = e.segments[e.segments.length - 1];
+    let grand: RawMap | null = null;
+    let node = root;
+    for (let k = 0; k < e.segments.length - 1; k++) {
+      const seg = e.segments[k];
+      let child = node[seg] as RawMap;
+      if (!copies.has(child)) {
+        child = shallowCopy(child);
+        copies.add(child);
+        setOwn(node, seg, child);
+      }
+      grand = node;
+      node = child;
+    }
+    if (e.drop !== null) delete node[e.drop[e.drop.length - 1]];
+    if (Object.hasOwn(node, leaf)) {
+      setOwn(node, leaf, values[e.path]);
+      continue;
+    }
+    // a new key (sd in place of cov): the parent rebuilt in the shape's key order, as the shape check gives it
+    if (!e.rule!.parentKeys.includes(leaf) || grand === null) return null;
+    const rebuilt: RawMap = {};
+    for (const k of e.rule!.parentKeys) {
+      if (k === leaf) setOwn(rebuilt, k, values[e.path]);
+      else if (Object.hasOwn(node, k)) setOwn(rebuilt, k, node[k]);
+    }
+    copies.add(rebuilt);
+    setOwn(grand, e.segments[e.segments.length - 2], rebuilt);
+  }
+  return root as unknown as ScenarioShape;
+}
+
+/**
+ * The case's shape-checked data (what the shape check of treeWithValues gives), or null when a
+ * value does not pass its field's own rule; planEdit's InputErrors for a path not in the scenario.
+ */
+export function shapedCase(
+  base: SweepBase,
+  values: Readonly<Record<string, SweepValue>>,
+  fieldOf: (path: string) => string = (p) => p,
+): ScenarioShape | null {
+  return shapedWithValues(base, plannedEdits(base, Object.keys(values), fieldOf), values);
+}
+
+/** The name of a case's scenario: the base text's sha256 and the case's values. */
+function caseSha256(base: SweepBase, values: Readonly<Record<string, SweepValue>>): string {
+  return createHash('sha256').update(base.sha256).update(JSON.stringify(values)).digest('hex');
+}
+
+/**
+ * The scenario of one case. Each varied value is checked against its own field's rule and set in
+ * the already shape-checked base, then read by the meaning stage (units, expressions such as
+ * `L/1500` that follow a varied length, cross-field rules) as loadScenario reads it. A value its
+ * field refuses takes scenarioWithValuesChecked instead, so every message stays the whole check's.
  */
 export function scenarioWithValues(
   base: SweepBase,
   values: Readonly<Record<string, SweepValue>>,
   fieldOf: (path: string) => string = (p) => p,
 ): Scenario {
+  const shaped = shapedCase(base, values, fieldOf);
+  if (shaped === null) return scenarioWithValuesChecked(base, values, fieldOf);
+  return buildScenario(shaped, base.tree.lines, { fileName: base.fileName, format: base.tree.format, sha256: caseSha256(base, values) });
+}
+
+/**
+ * The scenario of one case: the base tree with the values set, through the shape and meaning
+ * stages of loadScenario (the whole scenario shape-checked again; no text written or parsed).
+ */
+export function scenarioWithValuesChecked(
+  base: SweepBase,
+  values: Readonly<Record<string, SweepValue>>,
+  fieldOf: (path: string) => string = (p) => p,
+): Scenario {
+  return scenarioFromTree(treeWithValues(base, values, fieldOf), base.fileName, caseSha256(base, values));
+}
+
+/** The base's parsed tree with the case's values set (a copy; the base's lines). */
+export function treeWithValues(
+  base: SweepBase,
+  values: Readonly<Record<string, SweepValue>>,
+  fieldOf: (path: string) => string = (p) => p,
+): RawTree {
   const varied = new Set(Object.keys(values));
   const value = cloneRaw(base.tree.value);
   for (const p of Object.keys(values)) {
@@ -162,6 +294,5 @@ export function scenarioWithValues(
     if (e.drop) deletePlain(value, e.drop);
     setPlain(value, e.segments, values[p]);
   }
-  const sha256 = createHash('sha256').update(base.sha256).update(JSON.stringify(values)).digest('hex');
-  return scenarioFromTree({ value, lines: base.tree.lines, format: base.tree.format }, base.fileName, sha256);
+  return { value, lines: base.tree.lines, format: base.tree.format };
 }

@@ -7,7 +7,7 @@
 import { fileURLToPath } from 'node:url';
 import { buildColumnModel, type ColumnModel } from '../limitState/columnModel.js';
 import { problemFromModel } from '../limitState/columnRecipe.js';
-import { deterministicCheck } from '../limitState/deterministicCheck.js';
+import { checkCore } from '../limitState/deterministicCheck.js';
 import { form } from '../reliability/form.js';
 import { checkEstimate, checkForm } from '../reliability/formCheck.js';
 import { importanceSamplingAtDesignPoint } from '../reliability/importanceSampling.js';
@@ -49,7 +49,8 @@ async function runCase(args: ColumnCaseArgs, base: ReturnType<typeof parseSweepB
   const methods = args.methods ?? SWEEP_DEFAULT_METHODS;
   const s = scenarioWithValues(base, c.values);
   const model = buildColumnModel(s);
-  const check = deterministicCheck(model, 1);
+  // the check's numbers at the means that a row keeps (not its mode shapes or connection moments)
+  const check = checkCore(model);
   const out: CaseResult = {
     utilization: check.utilization,
     capacity: check.capacity,

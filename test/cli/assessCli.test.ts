@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { existsSync, mkdtempSync, readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { runCli } from './runCli.js';
+import { runCli, runCliOnText } from './runCli.js';
 
 // Checks of docs/json-output.md (common practice for a CLI: one JSON document on stdout).
 describe('stanchion assess (end to end)', () => {
@@ -74,7 +74,7 @@ describe('stanchion restraint (end to end)', () => {
       /bottom: \{rotation: \{dist: lognormal, mean: [^,]+, cov: 0.4\}\}/,
       `bottom: {rotation: {dist: lognormal, mean: ${k} N m/rad, cov: 0.4}}`,
     );
-    const a = await runCli(['assess', '-', '--json', '--methods', 'form'], text);
+    const a = await runCliOnText(['assess', '-', '--json', '--methods', 'form'], text);
     expect(a.status, a.stderr).toBe(0);
     expect(Math.abs(JSON.parse(a.stdout).reliability.form.beta - res.target_beta)).toBeLessThan(0.02);
   });

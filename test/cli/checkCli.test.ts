@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { readdirSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { ROOT, runCli } from './runCli.js';
+import { ROOT, runCli, runCliOnText } from './runCli.js';
 
 const scenarios = readdirSync(join(ROOT, 'scenarios')).filter((f) => /\.ya?ml$/.test(f) && !f.startsWith('sweep'));
 
@@ -43,7 +43,7 @@ column:
 loads: {dead: 500 kN}
 strength: first-yield
 `;
-    const r = await runCli(['check', '-', '--json'], yaml);
+    const r = await runCliOnText(['check', '-', '--json'], yaml);
     expect(r.status, r.stderr).toBe(0);
     const c = JSON.parse(r.stdout).check;
     const EI = 200e9 * 20e-6;
@@ -70,7 +70,7 @@ describe('bad input: one line naming the field, exit 2, no stack trace', () => {
 
   it('a wrong dimension for E', async () => {
     const text = base.replace('E: {dist: lognormal, mean: 200 GPa, cov: 0.03}', 'E: 4 m');
-    const r = await runCli(['check', '-'], text);
+    const r = await runCliOnText(['check', '-'], text);
     expect(r.status).toBe(2);
     expect(r.stdout).toBe('');
     expect(r.stderr.trim().split('\n')).toHaveLength(1);

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { ROOT, runCli } from './runCli.js';
+import { ROOT, runCliOnText } from './runCli.js';
 import { loadScenario } from '../../src/scenario/loadScenario.js';
 import { assessColumn } from '../../src/studies/columnAssessment.js';
 import { reliabilityJson } from '../../src/studies/assessmentJson.js';
@@ -29,7 +29,7 @@ const EI = 200e9 * 20e-6;
 describe('connection moments and joint classes in check and assess', () => {
   // source: Timoshenko & Gere, Theory of Elastic Stability, 2nd ed., §1.11–1.12: M_mid = P e0/(1 − P/Pcr), no end moment
   it('check --json, pinned–pinned: zero connection moments, amplified mid-span moment', async () => {
-    const r = await runCli(['check', '-', '--json'], scenario('{bottom: pinned, top: pinned}'));
+    const r = await runCliOnText(['check', '-', '--json'], scenario('{bottom: pinned, top: pinned}'));
     expect(r.status, r.stderr).toBe(0);
     const c = JSON.parse(r.stdout).check;
     const Pcr = (Math.PI ** 2 * EI) / 16;
@@ -49,7 +49,7 @@ describe('connection moments and joint classes in check and assess', () => {
     const EIbOverL = (200e9 * 100e-6) / 8; // beam 100e6 mm⁴ over 8 m, E of the column
     const mean = 10 * EIbOverL; // well above the rigid limit 8 E I_b/L_b; its 5 % fractile (cov 0.5) is well below
     const ends = `{bottom: fixed, top: {rotation: {dist: lognormal, mean: ${mean} N m/rad, cov: 0.5}, beam: {inertia: 100e6 mm^4, length: 8 m}}}`;
-    const r = await runCli(['check', '-', '--json'], scenario(ends));
+    const r = await runCliOnText(['check', '-', '--json'], scenario(ends));
     expect(r.status, r.stderr).toBe(0);
     const t = JSON.parse(r.stdout).check.joint_classification.top;
     expect(t.rule).toBe('beam');
@@ -59,7 +59,7 @@ describe('connection moments and joint classes in check and assess', () => {
     expect(t.class_at_5pct).toBe('semi-rigid');
     expect(t.stiffness_mean / mean).toBeCloseTo(1, 12);
     expect(t.stiffness_5pct).toBeLessThan(0.5 * mean);
-    const human = await runCli(['check', '-'], scenario(ends));
+    const human = await runCliOnText(['check', '-'], scenario(ends));
     expect(human.stdout).toMatch(/M_j,Rd/);
     expect(human.stdout).toMatch(/top\s+[\d.]+ kN·m\s+[\d.]+ mrad\s+rigid at the mean k, semi-rigid at its 5 % fractile/);
     expect(human.stdout).toMatch(/Caution/);
@@ -72,7 +72,7 @@ describe('connection moments and joint classes in check and assess', () => {
     ['{bottom: fixed, top: {rotation: 5 MN m/rad, beam: {inertia: 100e6 mm^4, length: -8 m}}}', /column\.ends\.top\.beam\.length/],
     ['{bottom: fixed, top: {rotation: 5 MN m/rad, beam: {inertia: 100e6 mm^4, length: 8 m, span: 3 m}}}', /span/],
   ])('bad beam %s', async (ends, field) => {
-    const r = await runCli(['check', '-', '--json'], scenario(ends));
+    const r = await runCliOnText(['check', '-', '--json'], scenario(ends));
     expect(r.status).toBe(2);
     expect(r.stdout).toBe('');
     expect(r.stderr).toMatch(field);

@@ -1,13 +1,14 @@
 // common practice: an output option never destroys what the tool did not write; input is read
 // within its size limit; messages never echo a huge value back. Every case runs in a temporary
-// folder, through the compiled CLI as a child process.
+// folder as its working folder: the program in this process, and the compiled CLI as a child
+// process where standard input is read.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { spawn, spawnSync } from 'node:child_process';
 import { existsSync, lstatSync, mkdirSync, mkdtempSync, readFileSync, readdirSync, rmSync, statSync, symlinkSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import YAML from 'yaml';
-import { CLI, ROOT } from './runCli.js';
+import { CLI, ROOT, runCli } from './runCli.js';
 import { OUTPUT_MARKER } from '../../src/report/outputFolder.js';
 
 interface Run {
@@ -24,9 +25,9 @@ const scenarioText = readFileSync(join(ROOT, 'scenarios', 'sway-canopy-post.yaml
   'title: "<img src=x onerror=alert(1)> [click](http://example.invalid) **loud** # =1+2"',
 );
 
-function run(args: string[], input?: string): Run {
-  const r = spawnSync(process.execPath, [CLI, ...args], { cwd: work, input, encoding: 'utf8', timeout: 120_000 });
-  return { status: r.status, stdout: r.stdout, stderr: r.stderr };
+/** The command in the working folder `work` (a child process when it reads stdin). */
+function run(args: string[], input?: string): Promise<Run> {
+  return runCli(args, input, work);
 }
 
 /** Every path under `dir` with its content (folders end in '/'), to show nothing changed. */
@@ -67,40 +68,40 @@ beforeAll(() => {
 afterAll(() => rmSync(base, { recursive: true, force: true }));
 
 describe('--force replaces only a stanchion output folder', () => {
-  it('never touches the working folder, its parent, the root or the scenario folder', () => {
+  it('never touches the working folder, its parent, the root or the scenario folder', async () => {
     const before = snapshot(base);
-    expectRefused(run(assessTo('.', '--force')), /^stanchion: --out: \. is the working folder/);
-    expectRefused(run(assessTo('..', '--force')), /^stanchion: --out: \.\. holds the working folder/);
-    expectRefused(run(assessTo('inputs', '--force')), /inputs holds the input file inputs\/s\.yaml/);
-    expectRefused(run(['restraint', 'inputs/s.yaml', '--out', '.', '--force']), /is the working folder/);
-    expectRefused(run(['assess', '-', '--methods', 'form', '--out', '..', '--force'], scenarioText), /holds the working folder/);
+    expectRefused(await run(assessTo('.', '--force')), /^stanchion: --out: \. is the working folder/);
+    expectRefused(await run(assessTo('..', '--force')), /^stanchion: --out: \.\. holds the working folder/);
+    expectRefused(await run(assessTo('inputs', '--force')), /inputs holds the input file inputs\/s\.yaml/);
+    expectRefused(await run(['restraint', 'inputs/s.yaml', '--out', '.', '--force']), /is the working folder/);
+    expectRefused(await run(['assess', '-', '--methods', 'form', '--out', '..', '--force'], scenarioText), /holds the working folder/);
     expect(snapshot(base)).toEqual(before);
   });
 
-  it('refuses a plain file, a device and a symbolic link, and leaves them as they were', () => {
+  it('refuses a plain file, a device and a symbolic link, and leaves them as they were', async () => {
     const before = snapshot(base);
-    expectRefused(run(assessTo('notes.txt', '--force')), /notes\.txt is a file, not a folder, which stanchion never replaces/);
-    expectRefused(run(assessTo('/dev/null', '--force')), /\/dev\/null is a device/);
+    expectRefused(await run(assessTo('notes.txt', '--force')), /notes\.txt is a file, not a folder, which stanchion never replaces/);
+    expectRefused(await run(assessTo('/dev/null', '--force')), /\/dev\/null is a device/);
     expect(statSync('/dev/null').isCharacterDevice()).toBe(true);
-    expectRefused(run(assessTo('linked', '--force')), /linked is a symbolic link, which stanchion never replaces nor follows/);
+    expectRefused(await run(assessTo('linked', '--force')), /linked is a symbolic link, which stanchion never replaces nor follows/);
     expect(lstatSync(join(work, 'linked')).isSymbolicLink()).toBe(true);
     expect(readFileSync(join(work, 'mine', 'thesis.txt'), 'utf8')).toBe('user file');
     expect(snapshot(base)).toEqual(before);
   });
 
-  it('refuses a folder of someone else’s files, with or without --force', () => {
+  it('refuses a folder of someone else’s files, with or without --force', async () => {
     const before = snapshot(base);
-    expectRefused(run(assessTo('mine', '--force')), /mine already exists and is not a stanchion output folder .*choose another name or remove it yourself/);
-    expectRefused(run(assessTo('mine')), /not a stanchion output folder/);
+    expectRefused(await run(assessTo('mine', '--force')), /mine already exists and is not a stanchion output folder .*choose another name or remove it yourself/);
+    expectRefused(await run(assessTo('mine')), /not a stanchion output folder/);
     expect(snapshot(base)).toEqual(before);
   });
 
-  it('marks its own folder, replaces it only with --force, and removes leftovers of a killed writer', () => {
-    const first = run(assessTo('report'));
+  it('marks its own folder, replaces it only with --force, and removes leftovers of a killed writer', async () => {
+    const first = await run(assessTo('report'));
     expect(first.status, first.stderr).toBe(0);
     const marker = JSON.parse(readFileSync(join(work, 'report', OUTPUT_MARKER), 'utf8')) as Record<string, string>;
     expect(marker).toMatchObject({ tool: 'stanchion', command: `stanchion ${assessTo('report').join(' ')}` });
-    expectRefused(run(assessTo('report')), /report already exists; choose a new folder or pass --force/);
+    expectRefused(await run(assessTo('report')), /report already exists; choose a new folder or pass --force/);
 
     // user text in summary.md stays text: no HTML, link, emphasis or heading from the title
     const md = readFileSync(join(work, 'report', 'summary.md'), 'utf8');
@@ -116,7 +117,7 @@ describe('--force replaces only a stanchion output folder', () => {
       writeFileSync(join(d, 'report.html'), 'half');
     }
     writeFileSync(join(work, 'report', 'extra.txt'), 'added later');
-    const second = run(assessTo('report', '--force'));
+    const second = await run(assessTo('report', '--force'));
     expect(second.status, second.stderr).toBe(0);
     expect(second.stderr).toMatch(/^stanchion: removed 1 unfinished output left in .* by an interrupted run \(\.report\.partial-\d+-1-0\)$/m);
     expect(existsSync(stale)).toBe(false);
@@ -131,27 +132,27 @@ describe('--force replaces only a stanchion output folder', () => {
 describe('the sweep deletes nothing it did not write', () => {
   const sweepTo = (out: string): string[] => ['sweep', 'inputs/s.yaml', '--vary', 'column.length=4 m:5 m:2', '--out', out];
 
-  it('refuses an OUT/report it did not write before any case runs', () => {
+  it('refuses an OUT/report it did not write before any case runs', async () => {
     mkdirSync(join(work, 'sw1', 'report'), { recursive: true });
     writeFileSync(join(work, 'sw1', 'report', 'plan.txt'), 'user file');
     const before = snapshot(join(work, 'sw1'));
-    const r = run(sweepTo('sw1'));
+    const r = await run(sweepTo('sw1'));
     expectRefused(r, /sw1\/report already exists and is not a stanchion output folder/);
     expect(snapshot(join(work, 'sw1'))).toEqual(before); // no journal, no results: nothing ran
   });
 
-  it('refuses an OUT/report that is a link, even though the sweep replaces its own', () => {
+  it('refuses an OUT/report that is a link, even though the sweep replaces its own', async () => {
     mkdirSync(join(work, 'sw2'));
     symlinkSync(join(work, 'mine'), join(work, 'sw2', 'report'));
-    expectRefused(run(sweepTo('sw2')), /report is a symbolic link/);
+    expectRefused(await run(sweepTo('sw2')), /report is a symbolic link/);
     expect(readFileSync(join(work, 'mine', 'thesis.txt'), 'utf8')).toBe('user file');
   });
 
-  it('replaces its own marked report', () => {
+  it('replaces its own marked report', async () => {
     mkdirSync(join(work, 'sw4', 'report'), { recursive: true });
     writeFileSync(join(work, 'sw4', 'report', OUTPUT_MARKER), JSON.stringify({ tool: 'stanchion' }));
     writeFileSync(join(work, 'sw4', 'report', 'old.html'), 'old');
-    const r = run(sweepTo('sw4'));
+    const r = await run(sweepTo('sw4'));
     expect(r.status, r.stderr).toBe(0);
     expect(existsSync(join(work, 'sw4', 'report', 'old.html'))).toBe(false);
     expect(existsSync(join(work, 'sw4', 'report', 'report.html'))).toBe(true);
@@ -160,9 +161,9 @@ describe('the sweep deletes nothing it did not write', () => {
 });
 
 describe('input edges', () => {
-  it('stops reading an endless file at the 4 MB limit and names FILE', () => {
+  it('stops reading an endless file at the 4 MB limit and names FILE', async () => {
     symlinkSync('/dev/zero', join(work, 'zero.yaml'));
-    const r = run(['check', 'zero.yaml']);
+    const r = await run(['check', 'zero.yaml']);
     expectRefused(r, /^stanchion: FILE: zero\.yaml is larger than the 4 MB limit of a scenario/);
   });
 
@@ -186,20 +187,20 @@ describe('input edges', () => {
     expect(written).toBeLessThan(16e6); // it stopped reading long before the writer gave up
   });
 
-  it('accepts a leading UTF-8 byte order mark in JSON and YAML, from a file and from stdin', () => {
+  it('accepts a leading UTF-8 byte order mark in JSON and YAML, from a file and from stdin', async () => {
     const bom = '\uFEFF';
     const json = JSON.stringify(YAML.parse(scenarioText) as unknown);
     writeFileSync(join(work, 'bom.json'), bom + json);
-    for (const r of [run(['check', 'bom.json']), run(['check', '-'], bom + scenarioText)]) {
+    for (const r of [await run(['check', 'bom.json']), await run(['check', '-'], bom + scenarioText)]) {
       expect(r.status, r.stderr).toBe(0);
       expect(r.stdout).toContain('stanchion check:');
     }
   });
 
-  it('never echoes a huge value back in full', () => {
+  it('never echoes a huge value back in full', async () => {
     const huge = 'a'.repeat(100_000);
     writeFileSync(join(work, 'huge.yaml'), scenarioText.replace(/^( {2}length: ).*$/m, `$15.6 ${huge}`));
-    for (const r of [run(['check', 'huge.yaml']), run(['check', 'inputs/s.yaml', '--units', huge])]) {
+    for (const r of [await run(['check', 'huge.yaml']), await run(['check', 'inputs/s.yaml', '--units', huge])]) {
       expect(r.status).toBe(2);
       expect(r.stderr.length, r.stderr.slice(0, 300)).toBeLessThan(400);
       expect(r.stderr).toMatch(/a… \(\d{6} characters\)/);

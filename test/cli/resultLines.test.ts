@@ -3,7 +3,9 @@
 import { afterAll, describe, expect, it } from 'vitest';
 import { existsSync, mkdtempSync, rmSync } from 'node:fs';
 import { basename, join } from 'node:path';
-import { ROOT, runCliProcess as runCli } from './runCli.js'; // a real process: these read its exit code and streams whole
+// The first run is the real executable (its launcher passes the command thread's streams on in
+// order); the others check what the program itself prints, in this process.
+import { ROOT, runCli, runCliProcess } from './runCli.js';
 
 const lastLine = (s: string) => s.trimEnd().split('\n').pop() ?? '';
 const scratch = mkdtempSync(join(ROOT, 'result-lines-test-'));
@@ -12,7 +14,7 @@ afterAll(() => rmSync(scratch, { recursive: true, force: true }));
 describe('the last line of each command', () => {
   it('assess: the verdict last on stdout, then the report path, relative, last on stderr', () => {
     const out = join(scratch, 'assess');
-    const r = runCli(['assess', 'scenarios/braced-base-plate.yaml', '--methods', 'form,sorm', '--out', out]);
+    const r = runCliProcess(['assess', 'scenarios/braced-base-plate.yaml', '--methods', 'form,sorm', '--out', out]);
     expect(r.status, r.stderr).toBe(0);
     expect(lastLine(r.stdout)).toMatch(/^result: β = \d\.\d\d \((FORM|SORM)[^)]*\) against β = 3\.80 over 50 years \(EN 1990 Annex B\): (MEETS the target|FALLS SHORT of the target by Δβ = \d\.\d\d)$/);
     // the result also leads the summary
@@ -23,9 +25,9 @@ describe('the last line of each command', () => {
     expect(existsSync(join(out, 'report.html'))).toBe(true);
   });
 
-  it('assess: Monte Carlo without failure states a bound, never β ∞', () => {
+  it('assess: Monte Carlo without failure states a bound, never β ∞', async () => {
     // β ≈ 3.9 for this scenario: 2000 samples (pf ≈ 5×10⁻⁵) almost surely see no failure
-    const r = runCli(['assess', 'scenarios/braced-base-plate.yaml', '--methods', 'mc', '--samples', '2000']);
+    const r = await runCli(['assess', 'scenarios/braced-base-plate.yaml', '--methods', 'mc', '--samples', '2000']);
     expect(r.status, r.stderr).toBe(0);
     // source: exact binomial bound 1 − 0.05^(1/2000) = 1.50×10⁻³ (Clopper & Pearson 1934), β = 2.97
     expect(r.stdout).toMatch(/Monte Carlo\s+> 2\.97\s+< 1\.5×10⁻³/);
@@ -34,15 +36,15 @@ describe('the last line of each command', () => {
     expect(r.stdout).not.toContain('∞');
   });
 
-  it('check: a mean-value ratio, said not to be a design check', () => {
-    const r = runCli(['check', 'scenarios/braced-base-plate.yaml']);
+  it('check: a mean-value ratio, said not to be a design check', async () => {
+    const r = await runCli(['check', 'scenarios/braced-base-plate.yaml']);
     expect(r.status, r.stderr).toBe(0);
     expect(lastLine(r.stdout)).toMatch(/^result: mean-value ratio \d\.\d{3} \(demand \/ resistance at the means; not a design check/);
     expect(r.stdout).not.toMatch(/^\s*utilization\b/m);
   });
 
-  it('restraint: the least stiffness for the target', () => {
-    const r = runCli(['restraint', 'scenarios/braced-base-plate.yaml', '--end', 'bottom']);
+  it('restraint: the least stiffness for the target', async () => {
+    const r = await runCli(['restraint', 'scenarios/braced-base-plate.yaml', '--end', 'bottom']);
     expect(r.status, r.stderr).toBe(0);
     expect(lastLine(r.stdout)).toMatch(/^result: for the target β = 3\.80 the mean rotational stiffness must be bottom (at least \d+ kN·m\/rad|: not reachable)/);
   });

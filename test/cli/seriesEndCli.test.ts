@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { runCli, runCliProcess } from './runCli.js';
+import { runCliOnText } from './runCli.js';
 
 function scenario(bottom: string): string {
   return `stanchion: 1
@@ -29,7 +29,7 @@ const GOOD = `      series:
 
 describe('series end springs (end to end)', () => {
   it('assess: each component is a variable with an importance factor; connection moments use the effective k', async () => {
-    const r = await runCli(['assess', '-', '--json', '--methods', 'form,sorm', '--no-studies'], scenario(GOOD));
+    const r = await runCliOnText(['assess', '-', '--json', '--methods', 'form,sorm', '--no-studies'], scenario(GOOD));
     expect(r.status, r.stderr).toBe(0);
     const d = JSON.parse(r.stdout);
     const importance = d.reliability.form.importance;
@@ -44,7 +44,7 @@ describe('series end springs (end to end)', () => {
   });
 
   it('check prints the components and the effective stiffness', async () => {
-    const r = await runCli(['check', '-'], scenario(GOOD));
+    const r = await runCliOnText(['check', '-'], scenario(GOOD));
     expect(r.status, r.stderr).toBe(0);
     expect(r.stdout).toMatch(/bottom end, springs in series .*connection 2500 kN·m\/rad \(mean\) \+ foundation 8000 kN·m\/rad \(mean\) → effective k = 1905 kN·m\/rad/);
     expect(r.stdout).toMatch(/top end, springs in series .*connection 900 kN·m\/rad \+ beam rigid → effective k = 900 kN·m\/rad/);
@@ -58,7 +58,7 @@ describe('series end springs (end to end)', () => {
     ['no component', '      series: {}', 'column.ends.bottom.series'],
     ['a bad component name', "      series: {'2nd plate': 3 MN m/rad}", 'column.ends.bottom.series.2nd plate'],
   ])('refuses %s: exit 2 naming the field, nothing on stdout', async (_what, bottom, field) => {
-    const r = runCliProcess(['check', '-', '--json'], scenario(bottom));
+    const r = await runCliOnText(['check', '-', '--json'], scenario(bottom));
     expect(r.status, r.stderr).toBe(2);
     expect(r.stdout).toBe('');
     expect(r.stderr).toContain(field);

@@ -72,8 +72,9 @@ beforeAll(async () => {
     if (!existsSync(twin) || statSync(twin).mtimeMs < statSync(join(ROOT, src)).mtimeMs) throw new Error(`${js} is missing or stale: build first (npm test does)`);
   }
   writeFileSync(scenario, SCENARIO);
-  const run = await start(sweep('reference', ['--json'])).done;
-  expect(run.code, run.stderr).toBe(0);
+  // the reference run and the resumed runs in this process: only the killed run needs to be a process of its own
+  const run = await runCli(sweep('reference', ['--json']));
+  expect(run.status, run.stderr).toBe(0);
   reference = files('reference');
 });
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
@@ -102,14 +103,14 @@ describe('stanchion sweep', () => {
     expect(recorded).toBeGreaterThanOrEqual(3);
     expect(recorded).toBeLessThan(CASES); // the kill really landed mid-way
     expect(existsSync(join(dir, 'killed', 'sweep.csv'))).toBe(false);
-    const again = await start(sweep('killed', ['--json'])).done;
-    expect(again.code, again.stderr).toBe(0);
+    const again = await runCli(sweep('killed', ['--json']));
+    expect(again.status, again.stderr).toBe(0);
     const summary = JSON.parse(again.stdout).sweep;
     expect(summary.skipped).toBe(recorded);
     expect(summary.ran).toBe(CASES - recorded);
     expect(files('killed')).toEqual(reference);
     // a third run finds everything finished and recomputes nothing
-    const third = JSON.parse((await start(sweep('killed', ['--json'])).done).stdout).sweep;
+    const third = JSON.parse((await runCli(sweep('killed', ['--json']))).stdout).sweep;
     expect([third.ran, third.skipped]).toEqual([0, CASES]);
     expect(files('killed')).toEqual(reference);
   });

@@ -6,7 +6,7 @@ import { updateLognormalUnknownVariance } from '../../src/evidence/lognormalPopu
 import { makeDistribution } from '../../src/probability/makeDistribution.js';
 import { InputError } from '../../src/scenario/inputError.js';
 import { loadScenario } from '../../src/scenario/loadScenario.js';
-import { runCli, runCliProcess } from '../cli/runCli.js';
+import { runCli } from '../cli/runCli.js';
 
 const BASE = readFileSync(new URL('../../scenarios/braced-base-plate.yaml', import.meta.url), 'utf8');
 const FY_LINE = '    fy: {dist: lognormal, mean: 300 MPa, cov: 0.07}';
@@ -104,11 +104,11 @@ describe('evidence through the CLI', () => {
     expect(text.stdout).toMatch(/after\s+log-Student-t \(ν = 3\)/);
   });
 
-  it('bad evidence: exit 2, one message naming the field, nothing written', () => {
+  it('bad evidence: exit 2, one message naming the field, nothing written', async () => {
     const file = join(dir, 'bad.yaml');
     writeFileSync(file, withFy('{tests: [312 MPa, 298 MPa]}'));
     const out = join(dir, 'out');
-    const r = runCliProcess(['assess', file, '--methods', 'form', '--out', out]);
+    const r = await runCli(['assess', file, '--methods', 'form', '--out', out]);
     expect(r.status).toBe(2);
     expect(r.stderr).toMatch(/column\.material\.fy\.evidence/);
     expect(r.stderr).not.toMatch(/\n\s+at /); // no stack trace

@@ -11,7 +11,7 @@ import { form } from '../../src/reliability/form.js';
 import { problemFromModel } from '../../src/limitState/columnRecipe.js';
 import { betaByStrengthModel } from '../../src/studies/strengthComparison.js';
 import type { Scenario } from '../../src/scenario/types.js';
-import { runCli } from '../cli/runCli.js';
+import { runCliOnText } from '../cli/runCli.js';
 
 const scenarioFormFull = (s: Scenario) => form(problemFromModel(buildColumnModel(s)));
 
@@ -141,7 +141,7 @@ describe('eccentricity input errors: exit 2, the field named', () => {
     ],
   ];
   it.each(cases)('%s', async (_label, text, message) => {
-    const r = await runCli(['check', '-'], text);
+    const r = await runCliOnText(['check', '-'], text);
     expect(r.status).toBe(2);
     expect(r.stderr).toMatch(message);
     expect(r.stderr).not.toMatch(/\n\s+at /); // no stack trace
@@ -149,8 +149,8 @@ describe('eccentricity input errors: exit 2, the field named', () => {
   });
 
   it('a code curve now checks a non-zero eccentricity (exit 0, a lower capacity)', async () => {
-    const plain = await runCli(['check', '-', '--json'], demoText('sway-canopy-post'));
-    const r = await runCli(['check', '-', '--json'], withEccentricity(demoText('sway-canopy-post'), () => ({ top: '40 mm' })));
+    const plain = await runCliOnText(['check', '-', '--json'], demoText('sway-canopy-post'));
+    const r = await runCliOnText(['check', '-', '--json'], withEccentricity(demoText('sway-canopy-post'), () => ({ top: '40 mm' })));
     expect(r.status).toBe(0);
     const capacity = (out: string) => (JSON.parse(out) as { check: { capacity: number } }).check.capacity;
     expect(capacity(r.stdout)).toBeLessThan(capacity(plain.stdout));
@@ -158,7 +158,7 @@ describe('eccentricity input errors: exit 2, the field named', () => {
 
   it('a code curve accepts an eccentricity of exactly zero', async () => {
     const text = withEccentricity(demoText('sway-canopy-post'), () => ({ top: '0 mm' }));
-    const r = await runCli(['check', '-', '--json'], text);
+    const r = await runCliOnText(['check', '-', '--json'], text);
     expect(r.status).toBe(0);
   });
 });

@@ -200,3 +200,48 @@ describe('natafTransform', () => {
     rejectsWith(() => natafTransform([wild, wild], [[1, -0.3], [-0.3, 1]], ['E', 'fy']), /^E and fy: correlation -0.3 cannot be reached/);
   });
 });
+
+describe('natafTransform.toPhysicalRows (many points, column-wise)', () => {
+  // The FORM self-check relies on it giving, bit for bit, what toPhysical gives point by point.
+  const uniform = makeDistribution({ dist: 'uniform', min: 1, max: 3 });
+  const truncated = makeDistribution({ dist: 'truncnormal', mean: 2, sd: 1, min: 0 });
+  const beta = makeDistribution({ dist: 'beta', min: 0, max: 10, mean: 4, sd: 1.5 });
+  const dists = [normal, gumbel2, ln10, weibull10, uniform, truncated, beta, ln25];
+  const n = dists.length;
+  const rows = 300;
+  const uRows = new Float64Array(rows * n);
+  const stream = normalStream(11, 0);
+  for (let k = 0; k < uRows.length; k++) uRows[k] = 3 * stream();
+  // far tails and both signs of zero as well as ordinary points
+  uRows.set([0, -0, 9, -9, 38, -38, 1e-300, -1e-300], 0);
+
+  function expectRowsMatch(correlation: number[][] | null): void {
+    const t = natafTransform(dists, correlation);
+    const columns = Array.from({ length: n }, () => new Float64Array(rows));
+    t.toPhysicalRows(uRows, rows, columns);
+    const x = new Float64Array(n);
+    let mismatches = 0;
+    for (let r = 0; r < rows; r++) {
+      t.toPhysical(uRows.subarray(r * n, r * n + n), x);
+      for (let i = 0; i < n; i++) if (!Object.is(columns[i][r], x[i])) mismatches++;
+    }
+    expect(mismatches).toBe(0);
+  }
+
+  it('equals toPhysical row by row, independent variables', () => expectRowsMatch(null));
+
+  it('equals toPhysical row by row, correlated variables (sparse L0)', () => {
+    const R = Array.from({ length: n }, (_, i) => Array.from({ length: n }, (_, j) => (i === j ? 1 : 0)));
+    R[0][1] = R[1][0] = 0.3;
+    R[2][7] = R[7][2] = -0.4;
+    R[3][7] = R[7][3] = 0.2;
+    expectRowsMatch(R);
+  });
+
+  it('fills only the first count entries', () => {
+    const t = natafTransform(dists, null);
+    const columns = Array.from({ length: n }, () => new Float64Array(rows).fill(-7));
+    t.toPhysicalRows(uRows, 5, columns);
+    expect(columns.every((c) => c[4] !== -7 && c[5] === -7)).toBe(true);
+  });
+});

@@ -30,6 +30,7 @@ export interface AssessCliOptions {
   workers?: number;
   units?: UnitSystem;
   end?: EndChoice;
+  axis?: 'y' | 'z';
 }
 
 export async function runAssess(file: string, opts: AssessCliOptions, argv: string[]): Promise<void> {
@@ -53,6 +54,7 @@ export async function runAssess(file: string, opts: AssessCliOptions, argv: stri
       seed: opts.seed,
       workers: opts.workers,
       end: opts.end,
+      axis: opts.axis,
       units: system,
       signal,
       onProgress: progress.update,

@@ -70,6 +70,11 @@ export function parseEnd(value: string): 'bottom' | 'top' | 'both' {
   return value;
 }
 
+export function parseAxis(value: string): 'y' | 'z' {
+  if (value !== 'y' && value !== 'z') throw new InvalidArgumentError("expected 'y' or 'z' (the principal axis whose end restraint is studied).");
+  return value;
+}
+
 export function parseShard(value: string): { index: number; count: number } {
   const m = /^(\d+)\/(\d+)$/.exec(value.trim());
   if (!m) throw new InvalidArgumentError('expected I/N, e.g. 0/4 (shard I of N, counting from 0).');

@@ -10,7 +10,7 @@
 import { Command, CommanderError, Option } from 'commander';
 import { toolVersion } from './version.js';
 import { EXIT_INPUT, EXIT_OK, reportFailure } from './failure.js';
-import { parseDesignAlpha, parseEnd, parseNonNegativeInteger, parseOutcomeCount, parseRestraintMethod, parseUnits } from './optionParsers.js';
+import { parseAxis, parseDesignAlpha, parseEnd, parseNonNegativeInteger, parseOutcomeCount, parseRestraintMethod, parseUnits } from './optionParsers.js';
 import { refuseRepeatedOptions } from './repeatedOptions.js';
 import type { CheckOptions } from './checkCommand.js';
 import type { RestraintOptions } from './restraintCommand.js';
@@ -59,6 +59,7 @@ export function buildProgram(argv: string[]): Command {
     .argument('<FILE>', 'scenario (.yaml, .yml, .json, or - for stdin)')
     .option('--json', 'print one JSON document (SI units) on stdout')
     .addOption(new Option('--end <end>', 'which connection to study: bottom, top or both (default: the ends given as springs)').argParser(parseEnd))
+    .addOption(new Option('--axis <axis>', 'the principal axis whose connections are studied: y or z (default: the axis with the lower β; a column without column.axis_z has only y)').argParser(parseAxis))
     .addOption(new Option('--method <method>', 'what solves for the requirement: form, sorm or is (default: FORM, or importance sampling where FORM disagrees with its sampling check)').argParser(parseRestraintMethod))
     .addOption(new Option('--design-alpha <alpha>', "α of the design stiffness (EN 1990 Annex C): form (FORM's own α, default) or standard (0.8 leading, 0.4 × 0.8 otherwise)").argParser(parseDesignAlpha))
     .option('--out <DIR>', 'also write the report (HTML, Markdown, JSON, CSV, charts) into the new folder DIR, whole or not at all')
@@ -66,7 +67,7 @@ export function buildProgram(argv: string[]): Command {
     .addOption(unitsOption())
     .addHelpText(
       'after',
-      `\nExamples:\n  stanchion restraint scenarios/braced-base-plate.yaml\n  stanchion restraint scenarios/sway-canopy-post.yaml --end bottom --json\n  stanchion restraint scenarios/braced-base-plate.yaml --out reports/c3-restraint\n\nEach option by example:\n  --json                            one JSON document on stdout (SI units)\n  --end top                         study the top connection only (bottom, top or both)\n  --method is                       solve the requirement with importance sampling (form, sorm or is)\n  --design-alpha standard           design stiffness with the standard α = 0.8 / 0.4 × 0.8 (or form)\n  --out reports/c3-restraint --force  report folder; --force replaces one stanchion wrote\n  --units us                        kip·in/rad, ft, ksi for people\n\n${CAUTION}\n`,
+      `\nExamples:\n  stanchion restraint scenarios/braced-base-plate.yaml\n  stanchion restraint scenarios/sway-canopy-post.yaml --end bottom --json\n  stanchion restraint scenarios/braced-base-plate.yaml --out reports/c3-restraint\n\nEach option by example:\n  --json                            one JSON document on stdout (SI units)\n  --end top                         study the top connection only (bottom, top or both)\n  --axis z                          study the connections about z (column.axis_z.ends)\n  --method is                       solve the requirement with importance sampling (form, sorm or is)\n  --design-alpha standard           design stiffness with the standard α = 0.8 / 0.4 × 0.8 (or form)\n  --out reports/c3-restraint --force  report folder; --force replaces one stanchion wrote\n  --units us                        kip·in/rad, ft, ksi for people\n\n${CAUTION}\n`,
     )
     .action(async (file: string, opts: RestraintOptions) => (await import('./restraintCommand.js')).runRestraint(file, opts));
 

@@ -18,6 +18,7 @@ export interface RestraintOptions {
   out?: string;
   force?: boolean;
   end?: EndChoice;
+  axis?: 'y' | 'z';
   units?: UnitSystem;
   method?: RestraintMethod;
   designAlpha?: DesignAlphaChoice;
@@ -32,12 +33,12 @@ export async function runRestraint(file: string, opts: RestraintOptions): Promis
   const scenario = updateScenarioWithEvidence(loaded, seed).scenario;
   if (loaded.measurements?.length) process.stderr.write(`stanchion: the scenario's ${loaded.measurements.length} measurement(s) updated its variables before the study (assess shows the update)\n`);
   const system = opts.units ?? scenario.displayUnits;
-  const r = await columnRestraint(scenario, { end: opts.end, units: system, method: opts.method, designAlpha: opts.designAlpha, governing: governingAssessor(seed) });
+  const r = await columnRestraint(scenario, { end: opts.end, axis: opts.axis, units: system, method: opts.method, designAlpha: opts.designAlpha, governing: governingAssessor(seed) });
   const writeReport = async (): Promise<void> => {
     if (!opts.out) return;
     process.stderr.write('stanchion: writing the report …\n');
     // the report around the study: the column, FORM/SORM at the assessed stiffness, sensitivity, the curve
-    const a = await assessColumn(scenario, { methods: ['form', 'sorm'], end: opts.end, restraint: r });
+    const a = await assessColumn(scenario, { methods: ['form', 'sorm'], end: opts.end, axis: r.axis?.axis, restraint: r });
     const meta = { version: toolVersion(), date: new Date().toISOString(), command: ['stanchion', ...process.argv.slice(2)].join(' ') };
     const json = assessmentJson(a, meta);
     const input = { ...assessmentReportInput(a, meta), subject: 'restraint' as const };
@@ -75,7 +76,8 @@ export async function runRestraint(file: string, opts: RestraintOptions): Promis
   }
   const out = [
     `stanchion restraint: ${scenario.title}`,
-    `  ${betaLabel} as the mean stiffness of the ${ends.join(' and ')} connection${ends.length > 1 ? 's' : ''} is scaled (coefficient of variation kept); target β = ${r.study.target}`,
+    `  ${betaLabel} as the mean stiffness of the ${ends.join(' and ')} connection${ends.length > 1 ? 's' : ''}${r.axis ? ` about ${r.axis.axis}` : ''} is scaled (coefficient of variation kept); target β = ${r.study.target}`,
+    ...(r.axis ? [`  axis ${r.axis.axis} ${r.axis.basis === 'asked' ? 'as asked (--axis)' : 'governs'}; β is the whole column's (min over both axes); axis ${r.axis.other.axis} alone: β = ${formatBeta(r.axis.other.beta)}, the same at every stiffness studied`] : []),
     '',
     textTable(rows),
     '',
@@ -84,18 +86,22 @@ export async function runRestraint(file: string, opts: RestraintOptions): Promis
     '',
     CAUTION,
     '',
-    restraintResultLine(r, system, scenario.column.axisZ !== undefined),
+    restraintResultLine(r, system),
   ];
   process.stdout.write(out.join('\n') + '\n');
   await writeReport();
 }
 
 /** The last line: the stiffness each studied end needs for the target, or why none will do. */
-function restraintResultLine(r: ColumnRestraintResult, system: UnitSystem, twoAxes: boolean): string {
+function restraintResultLine(r: ColumnRestraintResult, system: UnitSystem): string {
   const parts = r.study.ends.map((e) => {
     const k = r.study.required[e];
     return k === null || k === undefined || !Number.isFinite(k) ? `${e}: not reachable, even with a rigid ${e} connection` : `${e} at least ${formatQuantity(k, 'rotationalStiffness', system)}`;
   });
-  // with two axes the study varies the ends about y (docs/sections.md)
-  return `result: for the target β = ${formatBeta(r.study.target)} the mean rotational stiffness${twoAxes ? ' about y' : ''} must be ${parts.join('; ')}`;
+  // with two axes the study varies the ends about one of them (docs/sections.md)
+  const about = r.axis ? ` about ${r.axis.axis}` : '';
+  if (r.axis?.other.capsTarget) {
+    return `result: no mean rotational stiffness${about} reaches the target β = ${formatBeta(r.study.target)}: axis ${r.axis.other.axis} alone has β = ${formatBeta(r.axis.other.beta)}`;
+  }
+  return `result: for the target β = ${formatBeta(r.study.target)} the mean rotational stiffness${about} must be ${parts.join('; ')}`;
 }

@@ -13,6 +13,7 @@ import {
 import type { End } from '../scenario/types.js';
 import { flexibleComponents, seriesComponentPath } from '../scenario/seriesEnd.js';
 import type { ColumnModel } from './columnModel.js';
+import { endsAbout, endsPath } from './scenarioEdits.js';
 
 export type EndKey = 'bottom' | 'top';
 const END_KEYS: readonly EndKey[] = ['bottom', 'top'];
@@ -119,16 +120,23 @@ function lowStiffnessPoint(model: ColumnModel, end: End, path: string): Float64A
   return x;
 }
 
-/** Joint class of each end at the mean stiffness and at its 5 % fractile (EN 1993-1-8 §5.2.2.5). */
-export function classifyEnds(model: ColumnModel): EndClassification[] {
+/**
+ * Joint class of each end at the mean stiffness and at its 5 % fractile (EN 1993-1-8 §5.2.2.5).
+ * `axis` z classifies the ends about z (`column.axis_z.ends`) against the column's E·I_z.
+ */
+export function classifyEnds(model: ColumnModel, axis: 'y' | 'z' = 'y'): EndClassification[] {
   const s = model.scenario;
-  const st = model.state(model.mean);
+  const about = model.axes.find((a) => a.name === axis);
+  if (about === undefined) throw new Error(`the scenario has no axis ${axis}`);
+  const state = (x: Float64Array) => about.state(x);
+  const st = state(model.mean);
   const EIc = st.E * st.I;
   const L = st.L;
   const lambda0 = pinnedRelativeSlenderness(st.A, st.fy, EIc, L);
+  const ends = endsAbout(s, axis);
   return END_KEYS.map((key): EndClassification => {
-    const end = s.column.ends[key];
-    const path = `column.ends.${key}`;
+    const end = ends[key];
+    const path = `${endsPath(axis)}.${key}`;
     const xLow = lowStiffnessPoint(model, end, path);
     let kMean: number;
     let kLow: number;
@@ -138,7 +146,7 @@ export function classifyEnds(model: ColumnModel): EndClassification[] {
       kMean = end.k.kind === 'fixed' ? end.k.value : model.mean[i];
       kLow = end.k.kind === 'fixed' ? end.k.value : xLow[i];
     } else {
-      const low = model.state(xLow);
+      const low = state(xLow);
       kMean = (st.r[key] * EIc) / L;
       kLow = (low.r[key] * (low.E * low.I)) / L;
     }

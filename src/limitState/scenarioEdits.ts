@@ -152,17 +152,17 @@ export function scaleScalar(v: Scalar, factor: number): Scalar {
  * `base` then stands for the component named `connection` (Infinity makes that component rigid),
  * or, without one, for the end's effective stiffness at the means, every component being scaled
  * by the same factor so that the effective mean becomes factor × mean(base) (seriesEnd.ts,
- * `scaledComponents`).
+ * `scaledComponents`). `axis` 'z' edits the ends about z (`column.axis_z.ends`) instead.
  */
-export function withEndStiffness(s: Scenario, end: 'bottom' | 'top', base: Scalar, factor: number): Scenario {
-  const given = s.column.ends[end];
-  if (given.type === 'series' && factor > 0) return withSeriesStiffness(s, end, given, base, factor);
+export function withEndStiffness(s: Scenario, end: 'bottom' | 'top', base: Scalar, factor: number, axis: 'y' | 'z' = 'y'): Scenario {
+  const given = endsAbout(s, axis)[end];
+  if (given.type === 'series' && factor > 0) return withSeriesStiffness(s, end, given, base, factor, axis);
   const out = clone(s);
   const replaced: End =
     factor === 0 ? { type: 'pinned' } : factor === Infinity ? { type: 'fixed' } : { type: 'rotation', k: scaleScalar(base, factor) };
-  out.column.ends[end] = replaced as Mutable<End>;
+  setEnd(out, axis, end, replaced);
   // a correlation survives only while its variable does (a random spring keeps the path `.rotation`)
-  const prefix = `column.ends.${end}.`;
+  const prefix = `${endsPath(axis)}.${end}.`;
   const kept = replaced.type === 'rotation' && replaced.k.kind === 'random' ? `${prefix}rotation` : null;
   const gone = (p: string) => p.startsWith(prefix) && p !== kept;
   out.correlation = out.correlation.filter((r) => !gone(r.a) && !gone(r.b));
@@ -171,7 +171,24 @@ export function withEndStiffness(s: Scenario, end: 'bottom' | 'top', base: Scala
 
 type SeriesEnd = Extract<End, { type: 'series' }>;
 
-function withSeriesStiffness(s: Scenario, end: 'bottom' | 'top', given: SeriesEnd, base: Scalar, factor: number): Scenario {
+/** The contract path of the ends about an axis. */
+export function endsPath(axis: 'y' | 'z'): string {
+  return axis === 'y' ? 'column.ends' : 'column.axis_z.ends';
+}
+
+/** The ends about an axis (about z only when the scenario has `column.axis_z`). */
+export function endsAbout(s: Scenario, axis: 'y' | 'z'): Scenario['column']['ends'] {
+  if (axis === 'y') return s.column.ends;
+  if (s.column.axisZ === undefined) throw new Error('the scenario has no axis z');
+  return s.column.axisZ.ends;
+}
+
+function setEnd(out: Mutable<Scenario>, axis: 'y' | 'z', end: 'bottom' | 'top', replaced: End): void {
+  if (axis === 'y') out.column.ends[end] = replaced as Mutable<End>;
+  else out.column.axisZ!.ends[end] = replaced as Mutable<End>;
+}
+
+function withSeriesStiffness(s: Scenario, end: 'bottom' | 'top', given: SeriesEnd, base: Scalar, factor: number, axis: 'y' | 'z'): Scenario {
   const scaled = scaledComponents(given);
   const byConnection = scaled.length === 1 && scaled[0] === 'connection';
   // without a `connection`, every component × one ratio: the effective stiffness scales by that ratio
@@ -183,10 +200,10 @@ function withSeriesStiffness(s: Scenario, end: 'bottom' | 'top', given: SeriesEn
   });
   const replaced: End = components.every((c) => c.k === 'rigid') ? { type: 'fixed' } : { ...given, components };
   const out = clone(s);
-  out.column.ends[end] = replaced as Mutable<End>;
-  const prefix = `column.ends.${end}.`;
+  setEnd(out, axis, end, replaced);
+  const prefix = `${endsPath(axis)}.${end}.`;
   const kept = new Set(
-    replaced.type === 'series' ? replaced.components.filter((c) => c.k !== 'rigid' && c.k.kind === 'random').map((c) => seriesComponentPath(`column.ends.${end}`, c.name)) : [],
+    replaced.type === 'series' ? replaced.components.filter((c) => c.k !== 'rigid' && c.k.kind === 'random').map((c) => seriesComponentPath(`${endsPath(axis)}.${end}`, c.name)) : [],
   );
   const gone = (p: string) => p.startsWith(prefix) && !kept.has(p);
   out.correlation = out.correlation.filter((r) => !gone(r.a) && !gone(r.b));

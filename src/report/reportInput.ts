@@ -333,6 +333,12 @@ export interface RestraintStudy {
     range: { bottom: [number, number]; top: [number, number] };
     formAnalyses: number;
   };
+  /**
+   * Two-axis columns only: the axis whose ends were varied (β being the whole column's), why that
+   * one, the other axis's own β (the same at every stiffness studied) and whether it alone keeps
+   * the column below the target; the joint classes of the ends about the studied axis.
+   */
+  axis?: { axis: 'y' | 'z'; basis: 'asked' | 'governing'; otherAxis: 'y' | 'z'; otherBeta: number; capsTarget: boolean; classes: JointClassRow[] };
   /** required mean stiffness and 5 % fractile against the stiffness's CoV (first studied random end) */
   covCurve?: { end: EndName; assessedCov: number; points: { cov: number; mean: number | null; characteristic: number | null }[]; formAnalyses: number };
 }

@@ -398,11 +398,17 @@ function restraintSection(input: ReportInput, system: UnitSystem, charts: ChartS
   if (st.effectiveLengthFactor !== null) ks.push(`K at the required means: ${formatNumber(st.effectiveLengthFactor, 3)}.`);
   if (st.designK !== undefined && st.designK !== null) ks.push(`K_d at the design stiffness: ${formatNumber(st.designK, 3)}, the K to use with the other design values of the same method (EN 1990 Annex C).`);
   if (st.equivalentK !== null) ks.push(`K at which β reaches the target if the stiffness were known exactly (this scenario's statistics and strength model); not a partial-factor code check: ${formatNumber(st.equivalentK, 3)}.`);
+  const ax = st.axis;
+  if (ax) {
+    ks.unshift(
+      `The stiffnesses are about axis ${ax.axis} (${ax.basis === 'asked' ? 'as asked' : 'the governing axis'}); K is about ${ax.axis}. β is the whole column's; axis ${ax.otherAxis} alone has β = ${formatBeta(ax.otherBeta)} at every stiffness studied${ax.capsTarget ? `, below the target, so no stiffness about ${ax.axis} reaches it` : ''}.`,
+    );
+  }
   return section('restraint', [
     { kind: 'callout', tone: 'info', text: st.sentence },
     {
       kind: 'table',
-      caption: `Stiffness at which β equals the target ${formatBeta(st.targetBeta)}${st.method ? ` (solved with ${st.method.toUpperCase()}${st.confirmation ? `; assessed there, ${st.confirmation.method.toUpperCase()} gives β = ${formatBeta(st.confirmation.beta)}` : ''})` : ''}`,
+      caption: `Stiffness${ax ? ` about ${ax.axis}` : ''} at which β equals the target ${formatBeta(st.targetBeta)}${st.method ? ` (solved with ${st.method.toUpperCase()}${st.confirmation ? `; assessed there, ${st.confirmation.method.toUpperCase()} gives β = ${formatBeta(st.confirmation.beta)}` : ''})` : ''}`,
       head: ['end', 'required mean', 'CoV', '5 % characteristic', 'design (EN 1990 Annex C)', 'fixity factor'],
       rows,
       numeric: [false, true, true, true, true, true],
@@ -461,7 +467,9 @@ function restraintLine(input: ReportInput, system: UnitSystem): string {
     return req === null || req === undefined ? `${e}: not reachable, even rigid ends fall short of the target` : `${e}: at least ${formatQuantity(req, 'rotationalStiffness', system)} mean stiffness`;
   });
   const k = st.equivalentK === null ? '' : `; a deterministic check may then use K ≤ ${formatNumber(st.equivalentK, 3)}`;
-  return `${parts.join('; ')}${k}`;
+  const ax = st.axis;
+  if (ax?.capsTarget) return `none about ${ax.axis}: axis ${ax.otherAxis} alone has β = ${formatBeta(ax.otherBeta)}, below the target`;
+  return `${ax ? `about ${ax.axis}: ` : ''}${parts.join('; ')}${k}`;
 }
 
 function resultSection(input: ReportInput, system: UnitSystem): Section {

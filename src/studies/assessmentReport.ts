@@ -18,8 +18,8 @@ import type {
 import { fixityFactor } from '../mechanics/restraint.js';
 import type { Assessment } from './columnAssessment.js';
 import { formatBeta } from '../report/displayUnits.js';
-import type { ConnectionResponse } from '../limitState/connectionResponse.js';
-import type { ConnectionValues } from '../report/reportInput.js';
+import type { ConnectionResponse, EndClassification } from '../limitState/connectionResponse.js';
+import type { ConnectionValues, JointClassRow } from '../report/reportInput.js';
 import { designPointConnections } from './designPointConnections.js';
 import { evidenceRows } from './evidenceSummary.js';
 import type { MeasurementEffect } from './measurementEffect.js';
@@ -285,6 +285,9 @@ export function assessmentReportInput(a: Assessment, meta: RunMeta): ReportInput
           }
         : undefined,
       covCurve: covCurveInput(r),
+      ...(r.axis
+        ? { axis: { axis: r.axis.axis, basis: r.axis.basis, otherAxis: r.axis.other.axis, otherBeta: r.axis.other.beta, capsTarget: r.axis.other.capsTarget, classes: r.axis.jointClasses.map(jointClassRow) } }
+        : {}),
     };
   }
 
@@ -356,17 +359,7 @@ export function assessmentReportInput(a: Assessment, meta: RunMeta): ReportInput
     connections: {
       atMean: connectionValues(c.connections),
       atDesignPoint: ((m) => (m ? connectionValues(m) : undefined))(designPointConnections(a)),
-      classes: c.jointClasses.map((j) => ({
-        end: j.end,
-        rule: j.rule,
-        stiffnessMean: j.stiffnessMean,
-        stiffnessLow: j.stiffnessLow,
-        classAtMean: j.classAtMean,
-        classAtLow: j.classAtLow,
-        rigidFrom: j.boundaries ? j.boundaries.rigidFrom : null,
-        pinnedUpTo: j.boundaries ? j.boundaries.pinnedUpTo : null,
-        note: j.note,
-      })),
+      classes: c.jointClasses.map(jointClassRow),
       strengthUsesBow: strengthUsesBow(s.strength),
     },
     samples: {
@@ -376,6 +369,20 @@ export function assessmentReportInput(a: Assessment, meta: RunMeta): ReportInput
       designPoint: a.samples.designPoint,
     },
     cautions,
+  };
+}
+
+function jointClassRow(j: EndClassification): JointClassRow {
+  return {
+    end: j.end,
+    rule: j.rule,
+    stiffnessMean: j.stiffnessMean,
+    stiffnessLow: j.stiffnessLow,
+    classAtMean: j.classAtMean,
+    classAtLow: j.classAtLow,
+    rigidFrom: j.boundaries ? j.boundaries.rigidFrom : null,
+    pinnedUpTo: j.boundaries ? j.boundaries.pinnedUpTo : null,
+    note: j.note,
   };
 }
 

@@ -3,7 +3,7 @@
  * sensitivity studies and the restraint justification. Pure orchestration: the numbers come from
  * reliability/, sensitivity/ and studies/; this file only decides what runs with which seed.
  */
-import { buildColumnModel, type ColumnModel } from '../limitState/columnModel.js';
+import { buildColumnModel, type AxisName, type ColumnModel } from '../limitState/columnModel.js';
 import { columnRecipe, problemFromModel } from '../limitState/columnRecipe.js';
 import { deterministicCheck, type CheckResult } from '../limitState/deterministicCheck.js';
 import { withMoments, withScalar } from '../limitState/scenarioEdits.js';
@@ -30,7 +30,7 @@ import { scalarAt } from '../scenario/variables.js';
 import type { DistSpec } from '../probability/distribution.js';
 import { scenarioForm } from './columnForm.js';
 import type { UnitSystem } from '../report/displayUnits.js';
-import { columnRestraint, studiedEnds, type ColumnRestraintResult, type EndChoice, type GoverningAssessor } from './columnRestraint.js';
+import { columnRestraint, restraintAxis, studiedEnds, type ColumnRestraintResult, type EndChoice, type GoverningAssessor } from './columnRestraint.js';
 import { BOW_PATH, BOW_Z_PATH, resolveStrengthModel, type ModelFactorUsed } from '../limitState/strengthChoice.js';
 import { betaByStrengthModel, type StrengthModelBeta } from './strengthComparison.js';
 import { characteristicValues, type CharacteristicSummary } from './characteristicValues.js';
@@ -63,6 +63,8 @@ export interface AssessOptions {
   seed?: number;
   workers?: number;
   end?: EndChoice;
+  /** the principal axis of the restraint study (default: the one with the lower β alone) */
+  axis?: AxisName;
   signal?: AbortSignal;
   onProgress?: (method: string, p: SimulationProgress) => void;
   /** display units of the restraint sentence (default: the scenario's) */
@@ -431,10 +433,14 @@ export async function assessColumn(given: Scenario, opts: AssessOptions = {}): P
       sensitivity = sensitivityStudy(s, model, baseline, seed, asked, calls, opts.sobolSamples ?? SOBOL_N);
       if (combos) sensitivity.notes.push(`The sensitivity and restraint studies use the combination with ${model.combination.leading} leading (the largest mean demand), not the series system.`);
     }
-    if (asked.has('restraint') && studiedEnds(s, opts.end).length > 0) {
+    if (asked.has('restraint')) {
       const before = evaluationsSoFar();
-      restraint = opts.restraint ?? (await columnRestraint(s, { end: opts.end, units: opts.units, governing: governingAssessor(seed) }));
-      calls.restraint = evaluationsSoFar() - before;
+      // two axes: the study varies the ends about the governing axis (or the one asked for)
+      const axisChoice = opts.restraint ? undefined : restraintAxis(s, opts.axis);
+      if (opts.restraint || studiedEnds(s, opts.end, axisChoice!.axis).length > 0) {
+        restraint = opts.restraint ?? (await columnRestraint(s, { end: opts.end, axis: opts.axis, axisChoice, units: opts.units, governing: governingAssessor(seed) }));
+        calls.restraint = evaluationsSoFar() - before;
+      }
     }
   }
   let byStrengthModel: StrengthModelBeta[] | undefined;

@@ -3,7 +3,7 @@
  * restraint curve). A column that is a mechanism everywhere fails with certainty. β and pf are
  * those of FORM's series system of design points (FORM's own when there is one).
  */
-import { buildColumnModel } from '../limitState/columnModel.js';
+import { buildColumnModel, type AxisName } from '../limitState/columnModel.js';
 import { problemFromModel } from '../limitState/columnRecipe.js';
 import { form } from '../reliability/form.js';
 import { sorm } from '../reliability/sorm.js';
@@ -25,8 +25,8 @@ export interface CheckedBetaPoint extends BetaPoint {
 }
 
 /** β at both certain extremes: no random variable, or a mechanism at the means. */
-function certain(s: Scenario): BetaPoint | null {
-  const model = buildColumnModel(s);
+function certain(s: Scenario, axis?: AxisName): BetaPoint | null {
+  const model = buildColumnModel(s, undefined, axis);
   if (model.names.length === 0 || !(model.capacity(model.mean) > 0)) {
     const g = model.g(model.mean);
     return g > 0 ? { beta: Infinity, pf: 0, converged: true } : { beta: -Infinity, pf: 1, converged: true };
@@ -34,11 +34,12 @@ function certain(s: Scenario): BetaPoint | null {
   return null;
 }
 
-export function scenarioForm(s: Scenario): BetaPoint {
-  const known = certain(s);
+/** `axis`: FORM on the capacity about that axis alone (default: the column, min over its axes). */
+export function scenarioForm(s: Scenario, axis?: AxisName): BetaPoint {
+  const known = certain(s, axis);
   if (known) return known;
   // restarts: 0 — no blind restarts; doubtful directions are still searched (form.ts)
-  const r = form(problemFromModel(buildColumnModel(s)), { restarts: 0 });
+  const r = form(problemFromModel(buildColumnModel(s, undefined, axis)), { restarts: 0 });
   return { beta: r.system.beta, pf: r.system.pf, converged: r.converged };
 }
 

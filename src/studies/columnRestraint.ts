@@ -3,8 +3,9 @@
  * ends is multiplied by one common factor (docs/json-output.md `restraint`), the least stiffness that
  * reaches the target, and a sentence a reviewer can read.
  */
-import { buildColumnModel } from '../limitState/columnModel.js';
-import { scaleScalar, withEndStiffness, withScalar } from '../limitState/scenarioEdits.js';
+import { buildColumnModel, type AxisName } from '../limitState/columnModel.js';
+import { endsAbout, endsPath, scaleScalar, withEndStiffness, withScalar } from '../limitState/scenarioEdits.js';
+import { classifyEnds, type EndClassification } from '../limitState/connectionResponse.js';
 import { criticalLoad } from '../mechanics/criticalLoad.js';
 import { fixityFactor } from '../mechanics/restraint.js';
 import { makeDistribution } from '../probability/makeDistribution.js';
@@ -22,8 +23,24 @@ import { restraintMaps, restraintMapsJson, type RestraintMaps } from './restrain
 export type EndChoice = 'bottom' | 'top' | 'both';
 type EndName = 'bottom' | 'top';
 
+/** The principal axis whose ends a study varies, and the other axis's own β (two-axis columns only). */
+export interface RestraintAxisFacts {
+  /** the axis whose ends are varied */
+  axis: AxisName;
+  /** 'asked' with `--axis`; 'governing' when chosen as the axis with the lower FORM β alone */
+  basis: 'asked' | 'governing';
+  /** FORM β of each axis alone at the assessed stiffness */
+  betaAlone: Record<AxisName, number>;
+  /** the other axis: its β alone does not depend on the varied ends, so it is its β at the requirement too */
+  other: { axis: AxisName; beta: number; pf: number; capsTarget: boolean };
+  /** joint classes of the ends about the studied axis (EN 1993-1-8 §5.2.2.5) */
+  jointClasses: EndClassification[];
+}
+
 export interface ColumnRestraintResult {
   study: RestraintStudyResult;
+  /** the axis studied; absent for a one-axis column (its ends are the only ones) */
+  axis?: RestraintAxisFacts;
   /** base (factor 1) stiffness of each studied end: the scenario's spring, or EI/L for an end given otherwise */
   base: Record<string, Scalar>;
   /** fixity factor and K at the required stiffness (means); null where not reached */
@@ -141,30 +158,60 @@ function roleText(c: RestraintCheckPoint): string {
   return c.role === 'required' ? 'the requirement' : c.role === 'assessed' ? 'the assessed stiffness' : c.role === 'pinned' ? 'pinned ends' : 'rigid ends';
 }
 
-/** The ends the study varies: the requested ones, else every end given as a rotational spring. */
-export function studiedEnds(s: Scenario, choice?: EndChoice): EndName[] {
+/** The ends the study varies (about `axis`): the requested ones, else every end given as a rotational spring. */
+export function studiedEnds(s: Scenario, choice?: EndChoice, axis: AxisName = 'y'): EndName[] {
   if (choice) return choice === 'both' ? ['bottom', 'top'] : [choice];
-  return (['bottom', 'top'] as const).filter((e) => s.column.ends[e].type === 'rotation' || s.column.ends[e].type === 'series');
+  const ends = endsAbout(s, axis);
+  return (['bottom', 'top'] as const).filter((e) => ends[e].type === 'rotation' || ends[e].type === 'series');
+}
+
+/**
+ * The axis a restraint study varies: the one asked for, else (two axes) the one with the lower FORM β
+ * alone, y on a tie. The column's β is min over its axes, so the study must vary the governing one.
+ */
+export interface AxisChoice {
+  axis: AxisName;
+  basis: 'asked' | 'governing';
+  /** FORM β of each axis alone; null for a one-axis column */
+  betaAlone: Record<AxisName, number> | null;
+}
+
+export function restraintAxis(s: Scenario, asked?: AxisName): AxisChoice {
+  if (s.column.axisZ === undefined) {
+    if (asked === 'z') throw new InputError('--axis', "expected y: this column has one axis (no column.axis_z), so its ends are column.ends, about y");
+    return { axis: 'y', basis: asked ? 'asked' : 'governing', betaAlone: null };
+  }
+  const betaAlone = { y: scenarioForm(s, 'y').beta, z: scenarioForm(s, 'z').beta };
+  if (asked) return { axis: asked, basis: 'asked', betaAlone };
+  return { axis: betaAlone.z < betaAlone.y ? 'z' : 'y', basis: 'governing', betaAlone };
 }
 
 function meanValue(v: Scalar): number {
   return v.kind === 'fixed' ? v.value : makeDistribution(v.spec).mean;
 }
 
-function baseScalar(s: Scenario, end: EndName, notes: string[]): Scalar {
-  const e = s.column.ends[end];
+/** The column's state at the means about an axis (E·I about it: I_z from the section at the mean loss). */
+function stateAbout(s: Scenario, axis: AxisName) {
+  const model = buildColumnModel(s);
+  const about = model.axes.find((a) => a.name === axis);
+  if (about === undefined) throw new Error(`the scenario has no axis ${axis}`);
+  return about.state(model.mean);
+}
+
+function baseScalar(s: Scenario, end: EndName, axis: AxisName, notes: string[]): Scalar {
+  const e = endsAbout(s, axis)[end];
   if (e.type === 'rotation' && meanValue(e.k) > 0) return e.k;
   if (e.type === 'series' && seriesStiffnessAtMeans(e) > 0) return seriesBase(e, end, notes);
-  const model = buildColumnModel(s);
-  const st = model.state(model.mean);
+  const st = stateAbout(s, axis);
   const EI = st.E * st.I;
   // a factor times zero stays zero: an end with no stiffness (or an infinite one) is scaled from EI/L
   const R = e.type === 'ratio' && e.R > 0 && Number.isFinite(e.R) ? e.R : 1;
   const k = (R * EI) / st.L;
   const given = e.type === 'ratio' ? `a ${e.from === 'fixity' ? 'fixity factor' : 'alignment-chart G'}` : e.type === 'rotation' ? 'a spring of zero stiffness' : e.type;
+  const ei = axis === 'z' ? 'EI_z' : 'EI';
   notes.push(
-    `the ${end} end is given as ${given}; ` +
-      `the study treats it as a rotational spring of fixed stiffness ${R === 1 ? 'EI/L' : 'R·EI/L'} = ${(k / 1e3).toPrecision(3)} kN·m/rad times the factor`,
+    `the ${end} end${axis === 'z' ? ' about z' : ''} is given as ${given}; ` +
+      `the study treats it as a rotational spring of fixed stiffness ${R === 1 ? `${ei}/L` : `R·${ei}/L`} = ${(k / 1e3).toPrecision(3)} kN·m/rad times the factor`,
   );
   return { kind: 'fixed', value: k };
 }
@@ -196,21 +243,20 @@ function listText(names: readonly string[]): string {
 }
 
 /** The contract path of the variable a study scales at this end (a path no variable has when several are scaled). */
-function studiedVariable(s: Scenario, end: EndName): string {
-  const e = s.column.ends[end];
-  if (e.type !== 'series') return `column.ends.${end}.rotation`;
+function studiedVariable(s: Scenario, end: EndName, axis: AxisName): string {
+  const e = endsAbout(s, axis)[end];
+  const path = `${endsPath(axis)}.${end}`;
+  if (e.type !== 'series') return `${path}.rotation`;
   const scaled = scaledComponents(e);
-  return scaled.length === 1 ? seriesComponentPath(`column.ends.${end}`, scaled[0]) : `column.ends.${end}.series`;
+  return scaled.length === 1 ? seriesComponentPath(path, scaled[0]) : `${path}.series`;
 }
 
-function ratioOfEnd(s: Scenario, end: EndName): number {
-  const model = buildColumnModel(s);
-  return model.state(model.mean).r[end];
+function ratioOfEnd(s: Scenario, end: EndName, axis: AxisName): number {
+  return stateAbout(s, axis).r[end];
 }
 
-function ratioAt(s: Scenario, k: number): number {
-  const model = buildColumnModel(s);
-  const st = model.state(model.mean);
+function ratioAt(s: Scenario, k: number, axis: AxisName): number {
+  const st = stateAbout(s, axis);
   return k === Infinity ? Infinity : (k * st.L) / (st.E * st.I);
 }
 
@@ -225,6 +271,10 @@ export type GoverningAssessor = (s: Scenario) => Promise<GoverningBeta>;
 
 export interface ColumnRestraintOptions {
   end?: EndChoice;
+  /** the principal axis whose ends are varied (default: the one with the lower β alone; y for one axis) */
+  axis?: AxisName;
+  /** the axis already chosen by `restraintAxis` for these options (saves its two FORM analyses) */
+  axisChoice?: AxisChoice;
   units?: UnitSystem;
   /** the method that solves for the requirement; default: FORM, or its importance-sampling check where they disagree */
   method?: RestraintMethod;
@@ -249,6 +299,8 @@ export interface RestraintConfirmation {
 }
 
 const MAX_RAISES = 8;
+/** the largest single raise, in ln(factor): ×4 */
+const MAX_RAISE_STEP = Math.log(4);
 
 /**
  * Assess at the method's root; while the governing β falls short of the target, raise the factor
@@ -266,8 +318,14 @@ async function confirmRequirement(
   const slope = below && above ? (above.beta - below.beta) / Math.log(above.factor / below.factor) : 0;
   let f = root;
   let g = await governing(edited(f));
+  let previous: { lnF: number; beta: number } | null = null;
   for (let k = 0; k < MAX_RAISES && g.beta < study.target; k++) {
-    const step = slope > 1e-3 ? Math.max((study.target - g.beta) / slope + 0.002 / slope, 0.01) : 0.1;
+    // from the second raise on, the governing method's own slope (secant) where it is flatter than
+    // the study curve's: near a cap set by the other axis the governing β rises ever more slowly
+    const secant = previous === null ? 0 : (g.beta - previous.beta) / (Math.log(f) - previous.lnF);
+    const s = secant > 1e-3 && secant < slope ? secant : slope;
+    const step = s > 1e-3 ? Math.min(Math.max((study.target - g.beta) / s + 0.002 / s, 0.01), MAX_RAISE_STEP) : 0.1;
+    previous = { lnF: Math.log(f), beta: g.beta };
     f *= Math.exp(step);
     g = await governing(edited(f));
   }
@@ -275,23 +333,23 @@ async function confirmRequirement(
 }
 
 export async function columnRestraint(s: Scenario, opts: ColumnRestraintOptions = {}): Promise<ColumnRestraintResult> {
-  const ends = studiedEnds(s, opts.end);
+  const chosen = opts.axisChoice ?? restraintAxis(s, opts.axis);
+  const axis = chosen.axis;
+  const ends = studiedEnds(s, opts.end, axis);
   if (ends.length === 0) {
+    const where = s.column.axisZ === undefined ? '' : ` about ${axis} (${endsPath(axis)})`;
     throw new InputError(
       '--end',
-      'no end of this column is given as a rotational spring ({rotation: ...}); choose the end to study with --end bottom|top|both',
+      `no end of this column${where} is given as a rotational spring ({rotation: ...}); choose the end to study with --end bottom|top|both${s.column.axisZ === undefined ? '' : ' or the axis with --axis y|z'}`,
     );
   }
   const notes: string[] = [];
-  if (s.column.axisZ !== undefined) {
-    notes.push('The restraint studied is about y (column.ends); the ends about z (column.axis_z.ends) stay as given, so where axis z governs no stiffness about y can lift β above what axis z allows.');
-  }
   const base: Record<string, Scalar> = {};
-  for (const e of ends) base[e] = baseScalar(s, e, notes);
+  for (const e of ends) base[e] = baseScalar(s, e, axis, notes);
   /** The scenario with every studied end at factor × its base stiffness (random or known exactly). */
   const edited = (factor: number, bases: Record<string, Scalar> = base): Scenario => {
     let t = s;
-    for (const e of ends) t = withEndStiffness(t, e, bases[e], factor);
+    for (const e of ends) t = withEndStiffness(t, e, bases[e], factor, axis);
     return t;
   };
   const baseStiffness: Record<string, number> = {};
@@ -323,9 +381,9 @@ export async function columnRestraint(s: Scenario, opts: ColumnRestraintOptions 
     }
   }
 
+  /** K about the studied axis at the means */
   const kWith = (t: Scenario): number => {
-    const model = buildColumnModel(t);
-    const st = model.state(model.mean);
+    const st = stateAbout(t, axis);
     return criticalLoad(st.E * st.I, st.L, st.frame, st.r).K;
   };
   /** K with the studied ends known exactly at these stiffnesses (Infinity: rigid). */
@@ -333,7 +391,7 @@ export async function columnRestraint(s: Scenario, opts: ColumnRestraintOptions 
     let t = s;
     for (const e of ends) {
       const k = stiff[e];
-      t = withEndStiffness(t, e, { kind: 'fixed', value: k === Infinity ? 1 : k }, k === Infinity ? Infinity : 1);
+      t = withEndStiffness(t, e, { kind: 'fixed', value: k === Infinity ? 1 : k }, k === Infinity ? Infinity : 1, axis);
     }
     return kWith(t);
   };
@@ -342,7 +400,7 @@ export async function columnRestraint(s: Scenario, opts: ColumnRestraintOptions 
   const fixityAtRequired: Record<string, number | null> = {};
   for (const e of ends) {
     // a series end: R of the whole end (its other components included), at the means
-    const R = s.column.ends[e].type === 'series' ? (reached ? ratioOfEnd(edited(f as number), e) : 0) : ratioAt(s, (baseStiffness[e] ?? 0) * (f as number));
+    const R = endsAbout(s, axis)[e].type === 'series' ? (reached ? ratioOfEnd(edited(f as number), e, axis) : 0) : ratioAt(s, (baseStiffness[e] ?? 0) * (f as number), axis);
     fixityAtRequired[e] = reached ? fixityFactor(R) : null;
   }
   const kAtRequired = reached ? kWith(edited(f as number)) : null;
@@ -355,7 +413,7 @@ export async function columnRestraint(s: Scenario, opts: ColumnRestraintOptions 
     const { names, alpha } = scenarioAlphas(at);
     requirement = {};
     for (const e of ends) {
-      const a = designAlpha(alpha, names.indexOf(studiedVariable(s, e)), opts.designAlpha ?? 'form');
+      const a = designAlpha(alpha, names.indexOf(studiedVariable(s, e, axis)), opts.designAlpha ?? 'form');
       const q = endRequirement(base[e], f as number, target, a);
       requirement[e] = { ...q, fixityFactor: fixityAtRequired[e] as number };
     }
@@ -394,16 +452,54 @@ export async function columnRestraint(s: Scenario, opts: ColumnRestraintOptions 
   const facts = reached && requirement && kAtRequired !== null && kDesign !== null
     ? { reached: { requirement, k: kAtRequired, kDesign, factor: f as number } }
     : { shortfall };
-  const parts = [restraintSentence(study, wording, facts)];
+  // two axes: the column's β is that of min over both, so the other axis alone bounds it from above
+  let axisFacts: RestraintAxisFacts | undefined;
+  if (s.column.axisZ !== undefined && chosen.betaAlone !== null) {
+    const otherName: AxisName = axis === 'y' ? 'z' : 'y';
+    const other = scenarioForm(s, otherName);
+    axisFacts = {
+      axis,
+      basis: chosen.basis,
+      betaAlone: chosen.betaAlone,
+      other: { axis: otherName, beta: other.beta, pf: other.pf, capsTarget: other.beta < target },
+      jointClasses: classifyEnds(buildColumnModel(s), axis),
+    };
+  }
+  const parts = [...(axisFacts ? [axisLead(axisFacts, ends)] : []), restraintSentence(study, wording, facts)];
+  if (axisFacts) parts.push(otherAxisSentence(axisFacts, target));
   if (kDeterministic !== null) parts.push(`${EQUIVALENT_K_LABEL}: ${kDeterministic.toFixed(2)}.`);
   parts.push(opts.method ? methodSentence(opts.method, confirmation) : `${verificationSentence(verification)}${confirmation ? ` ${confirmationSentence(confirmation)}` : ''}`);
   const sentence = parts.join(' ');
 
-  const maps = opts.maps === false ? undefined : restraintMaps(s, { ends, base, edited, target, required: reached ? study.required as Record<string, number> : null });
+  const maps = opts.maps === false ? undefined : restraintMaps(s, { ends, base, edited, target, required: reached ? study.required as Record<string, number> : null, axis });
   return {
-    study, base, fixityAtRequired, kAtRequired, kAtCharacteristic, kDeterministic, kDesign, kAssessed, requirement,
+    study, ...(axisFacts ? { axis: axisFacts } : {}), base, fixityAtRequired, kAtRequired, kAtCharacteristic, kDeterministic, kDesign, kAssessed, requirement,
     method: opts.method ?? verification.method, confirmation, shortfall: shortfall ?? null, verification, sentence, notes, maps,
   };
+}
+
+/** How far above the target the other axis's own β must be before its mode stops adding to the column's pf (in β). */
+const CLOSE_MARGIN = 0.5;
+
+/** Which axis the requirement is about, and why that one. */
+function axisLead(a: RestraintAxisFacts, ends: readonly EndName[]): string {
+  const why = a.basis === 'asked'
+    ? 'as asked'
+    : `the governing axis: alone, axis y has β = ${a.betaAlone.y.toFixed(2)} and axis z β = ${a.betaAlone.z.toFixed(2)}`;
+  return `The requirement is about axis ${a.axis} (${why}): the ${listText([...ends])} ${ends.length > 1 ? 'ends' : 'end'} about ${a.axis} (${endsPath(a.axis)}) ${ends.length > 1 ? 'are' : 'is'} varied, the ends about ${a.other.axis} stay as given, and β is the whole column's (it fails when either axis does).`;
+}
+
+/** The other axis's own β, and whether it alone keeps the column below the target. */
+function otherAxisSentence(a: RestraintAxisFacts, target: number): string {
+  const o = a.other;
+  if (o.capsTarget) {
+    return `No stiffness about ${a.axis} reaches the target because axis ${o.axis} alone has β = ${o.beta.toFixed(2)} < ${target.toFixed(2)}: the ${o.axis} restraint, the load or the column itself must change.`;
+  }
+  // close above the target, both axes fail with similar probability near the requirement: their series system needs more
+  const close = o.beta - target < CLOSE_MARGIN
+    ? ` Being close to it, near the requirement both axes fail with similar probability and the column's β stays below either axis's own, so more stiffness is needed than axis ${a.axis} alone would need (and FORM's design point may lie on axis ${o.axis}).`
+    : '';
+  return `Axis ${o.axis} alone has β = ${o.beta.toFixed(2)} whatever the stiffness about ${a.axis} (its own ends as given), above the target ${target.toFixed(2)}.${close}`;
 }
 
 /** β of a scenario by the chosen method; IS is the self-check's importance sampling with one seed at every factor (common random numbers). */
@@ -436,7 +532,8 @@ const METHOD_LABEL: Record<string, string> = { form: 'FORM', sorm: 'SORM', is: '
 
 function confirmationSentence(c: RestraintConfirmation): string {
   const label = METHOD_LABEL[c.method] ?? c.method;
-  const raised = c.raisedBy > 1 ? ` after the requirement was raised ${((c.raisedBy - 1) * 100).toPrecision(2)} % above the root, because at the root it fell short` : '';
+  const pct = (c.raisedBy - 1) * 100;
+  const raised = c.raisedBy > 1 ? ` after the requirement was raised ${pct >= 10 ? pct.toFixed(0) : pct.toPrecision(2)} % above the root, because at the root it fell short` : '';
   return `Assessed at the reported stiffness, the governing method (${label}) gives β = ${c.beta.toFixed(2)}${raised}.`;
 }
 
@@ -490,6 +587,13 @@ export function restraintJson(r: ColumnRestraintResult): Record<string, unknown>
     effective_length_factor_design: r.kDesign,
     effective_length_factor_assessed: r.kAssessed,
     shortfall: r.shortfall ? { load_factor: r.shortfall.loadFactor, utilization_rigid: r.shortfall.utilizationRigid } : null,
+    // two axes only: a one-axis column's JSON is as before
+    ...(r.axis ? {
+      axis: r.axis.axis,
+      axis_basis: r.axis.basis,
+      axis_beta_alone: { y: finite(r.axis.betaAlone.y), z: finite(r.axis.betaAlone.z) },
+      other_axis: { axis: r.axis.other.axis, beta: finite(r.axis.other.beta), pf: r.axis.other.pf, caps_target: r.axis.other.capsTarget },
+    } : {}),
     ...(r.maps ? { maps: restraintMapsJson(r.maps) } : {}),
     sentence: r.sentence,
     notes: r.notes,

@@ -58,6 +58,8 @@ export interface RestraintMapsInput {
   edited: (factor: number, bases?: Record<string, Scalar>) => Scenario;
   target: number;
   required: Record<string, number> | null;
+  /** the principal axis whose ends are varied (default y) */
+  axis?: 'y' | 'z';
 }
 
 const GRID_POINTS = 7;
@@ -79,10 +81,11 @@ function contourMap(s: Scenario, input: RestraintMapsInput): RestraintContourMap
   const kb = meanOf(input.base.bottom);
   const kt = meanOf(input.base.top);
   const factors = logGrid(1 / 30, 30, GRID_POINTS);
+  const axis = input.axis ?? 'y';
   const at = (fb: number, ft: number): number => {
     throwIfInterrupted('the restraint map');
-    let t = withEndStiffness(s, 'bottom', input.base.bottom, fb);
-    t = withEndStiffness(t, 'top', input.base.top, ft);
+    let t = withEndStiffness(s, 'bottom', input.base.bottom, fb, axis);
+    t = withEndStiffness(t, 'top', input.base.top, ft, axis);
     const b = scenarioForm(t).beta;
     return Math.min(BETA_CLAMP[1], Math.max(BETA_CLAMP[0], b));
   };
@@ -90,13 +93,13 @@ function contourMap(s: Scenario, input: RestraintMapsInput): RestraintContourMap
   let calls = GRID_POINTS * GRID_POINTS;
   const asymptote = (end: 'bottom' | 'top'): number | null => {
     const other = end === 'bottom' ? 'top' : 'bottom';
-    const rigidOther = withEndStiffness(s, other, input.base[other], Infinity);
+    const rigidOther = withEndStiffness(s, other, input.base[other], Infinity, axis);
     const r = restraintStudy({
       baseStiffness: { [end]: meanOf(input.base[end]) },
       target: input.target,
       grid: { min: 0.01, max: 100, points: 7 },
       tolerance: 1e-4,
-      betaAtFactor: (f) => scenarioForm(withEndStiffness(rigidOther, end, input.base[end], f)),
+      betaAtFactor: (f) => scenarioForm(withEndStiffness(rigidOther, end, input.base[end], f, axis)),
     });
     calls += r.calls;
     return r.outcome === 'reached' ? (r.required[end] as number) : null;

@@ -33,12 +33,42 @@ describe('the facade demo: an H section by its dimensions, two axes, a corroded 
     expect(c.cautions.join(' ')).toMatch(/reduced section is used over the whole length/);
   });
 
-  it('restraint runs and says that it studies the ends about y', async () => {
-    const r = await runCli(['restraint', DEMO]);
+  it('restraint studies the governing axis z: a finite requirement about z, the other axis shown', async () => {
+    const r = await runCli(['restraint', DEMO, '--json']);
     expect(r.status).toBe(0);
-    expect(r.stdout).toMatch(/The restraint studied is about y/);
-    expect(r.stdout).toMatch(/^result: .* stiffness about y must be/m);
+    const j = JSON.parse(r.stdout).restraint;
+    expect(j.axis).toBe('z');
+    expect(j.axis_basis).toBe('governing');
+    expect(j.axis_beta_alone.z).toBeLessThan(j.axis_beta_alone.y);
+    expect(j.ends).toEqual(['bottom']);
+    expect(j.outcome).toBe('reached');
+    expect(j.required.bottom).toBeGreaterThan(0);
+    expect(j.other_axis).toMatchObject({ axis: 'y', caps_target: false });
+    expect(j.sentence).toMatch(/The requirement is about axis z/);
+    // the curve rises with the stiffness about z (it was flat when only the ends about y moved)
+    const betas = j.curve.map((p: { beta: number }) => p.beta);
+    expect(Math.max(...betas) - Math.min(...betas)).toBeGreaterThan(0.3);
+  }, 90_000);
+
+  it('restraint --axis y: the terminal says that axis z alone keeps the column below the target', async () => {
+    const r = await runCli(['restraint', DEMO, '--axis', 'y']);
+    expect(r.status).toBe(0);
+    expect(r.stdout).toMatch(/No stiffness about y reaches the target because axis z alone has β = \d\.\d\d/);
+    expect(r.stdout).toMatch(/^result: no mean rotational stiffness about y reaches the target β = 3\.80: axis z alone has β = /m);
+    expect(r.stdout).toMatch(/licensed engineer/);
   }, 60_000);
+
+  it('restraint --axis with a bad value, or z on a one-axis column: exit 2 naming --axis', async () => {
+    for (const args of [['restraint', DEMO, '--axis', 'x'], ['restraint', 'scenarios/braced-base-plate.yaml', '--axis', 'z']]) {
+      const r = await runCli(args);
+      expect(r.status).toBe(2);
+      expect(r.stdout).toBe('');
+      expect(r.stderr).toMatch(/--axis/);
+      expect(r.stderr).toMatch(/expected '?y'?/);
+      expect(r.stderr.trim().split('\n')).toHaveLength(1);
+      expect(r.stderr).not.toMatch(/\n\s+at /);
+    }
+  }, 30_000);
 
   it('the terminal says which axis governs and carries the cautions', async () => {
     const r = await runCli(['check', DEMO]);

@@ -138,6 +138,25 @@ describe('report document', () => {
     expect(table && table.kind === 'table' ? table.head : []).toEqual(['variable', 'description', 'distribution', 'mean or value', 'sd', 'CoV']);
   });
 
+  it('names the axis of a restraint study on a two-axis column, the other axis and its joint classes', () => {
+    const base = demoReportInput();
+    const classes = [{ end: 'bottom' as const, rule: 'base' as const, stiffnessMean: 1e5, stiffnessLow: 5e4, classAtMean: 'semi-rigid' as const, classAtLow: 'semi-rigid' as const, rigidFrom: 7.7e5, pinnedUpTo: 2.2e4, note: 'column base about z' }];
+    const restraint = { ...base.restraint!, axis: { axis: 'z' as const, basis: 'governing' as const, otherAxis: 'y' as const, otherBeta: 3.9, capsTarget: false, classes } };
+    const input = { ...base, restraint };
+    const t = sectionText(doc(input), 'restraint');
+    expect(t).toContain('Stiffness about z at which β equals the target');
+    expect(t).toContain('The stiffnesses are about axis z (the governing axis); K is about z.');
+    expect(t).toContain('axis y alone has β = 3.90 at every stiffness studied');
+    const curve = buildCharts(input, 'si').find((c) => c.name === 'restraint-curve')!;
+    expect(JSON.stringify(curve.spec)).toContain('about z');
+    expect(JSON.stringify(curve.spec)).toContain('axis y alone: β = 3.90');
+    // the joint-class limits drawn are those about z, not the check's (about y)
+    const limits = JSON.stringify((curve.spec.layer as { name?: string; data?: unknown }[]).find((l) => l.name === 'jointClassLimits')?.data);
+    expect(limits).toContain(`"k":0.77,"label":"bottom rigid from here"`); // 7.7e5 N·m/rad shown in MN·m/rad
+    const capped = sectionText(doc({ ...base, restraint: { ...restraint, axis: { ...restraint.axis, otherBeta: 3.5, capsTarget: true } } }), 'result');
+    expect(capped).toContain('none about z: axis y alone has β = 3.50, below the target');
+  });
+
   it('says so when there is no restraint study', () => {
     const t = sectionText(doc({ ...demoReportInput(), restraint: undefined }), 'restraint');
     expect(t).toContain('no restraint study');

@@ -57,12 +57,14 @@ export function restraintCurveChart(input: ReportInput, study: RestraintStudy, s
   // room above and below the lines so their labels keep off the ticks
   const yDomain = [Math.floor(Math.min(...betas) - 0.8), Math.ceil(Math.max(...betas) + 0.8)];
 
+  // a fixed-end line close to the target (the other axis capping β, say): the lower label goes below its line
+  const fixedNear = fixed !== undefined && Number.isFinite(fixed.beta) && Math.abs(fixed.beta - target.beta) < 0.3;
   const layers: VegaLiteSpec[] = [
-    ...horizontalRule('targetLine', target.beta, `target β = ${formatBeta(target.beta)} (${target.source})`, PALETTE.target, [6, 4], xLeft),
+    ...horizontalRule('targetLine', target.beta, `target β = ${formatBeta(target.beta)} (${target.source})`, PALETTE.target, [6, 4], xLeft, fixedNear && fixed.beta >= target.beta),
   ];
   // the ideal cases are labelled at the right end, away from the target's label
   if (pinned && Number.isFinite(pinned.beta)) layers.push(...horizontalRule('pinnedIdeal', pinned.beta, `ideal pinned: β = ${formatBeta(pinned.beta)}`, PALETTE.muted, [2, 3], xLeft, true));
-  if (fixed && Number.isFinite(fixed.beta)) layers.push(...horizontalRule('fixedIdeal', fixed.beta, `ideal fixed: β = ${formatBeta(fixed.beta)}`, PALETTE.muted, [2, 3], xLeft));
+  if (fixed && Number.isFinite(fixed.beta)) layers.push(...horizontalRule('fixedIdeal', fixed.beta, `ideal fixed: β = ${formatBeta(fixed.beta)}`, PALETTE.muted, [2, 3], xLeft, fixedNear && fixed.beta < target.beta));
   layers.push({
     name: 'restraintLine',
     data: { values: points },
@@ -73,7 +75,8 @@ export function restraintCurveChart(input: ReportInput, study: RestraintStudy, s
       color: { field: 'end', type: 'nominal', title: null },
     },
   });
-  const classes = (input.connections?.classes ?? []).filter((c) => ends.includes(c.end));
+  // two axes: the joint classes about the studied axis (the check's are about y)
+  const classes = (study.axis?.classes ?? input.connections?.classes ?? []).filter((c) => ends.includes(c.end));
   const limits = classes.flatMap((c) => [
     ...(c.rigidFrom !== null && c.rigidFrom > 0 && Number.isFinite(c.rigidFrom) ? [{ k: toDisplay(c.rigidFrom, unit), label: `${c.end} rigid from here` }] : []),
     ...(c.pinnedUpTo !== null && c.pinnedUpTo > 0 ? [{ k: toDisplay(c.pinnedUpTo, unit), label: `${c.end} nominally pinned below` }] : []),
@@ -111,10 +114,12 @@ export function restraintCurveChart(input: ReportInput, study: RestraintStudy, s
     });
   }
   const title = 'Reliability against end restraint';
+  const about = study.axis ? ` about ${study.axis.axis}` : '';
   const subtitle = [
     ends.length > 1
-      ? `Mean stiffness of the ${ends.join(' and ')} ends scaled by one common factor, CoV kept.`
-      : `Mean stiffness of the ${ends[0]} end scaled, CoV kept; the ${ends[0] === 'bottom' ? 'top' : 'bottom'} end as given.`,
+      ? `Mean stiffness of the ${ends.join(' and ')} ends${about} scaled by one common factor, CoV kept.`
+      : `Mean stiffness of the ${ends[0]} end${about} scaled, CoV kept; the ${ends[0] === 'bottom' ? 'top' : 'bottom'} end as given.`,
+    ...(study.axis ? [`β of the whole column; axis ${study.axis.otherAxis} alone: β = ${formatBeta(study.axis.otherBeta)} at every stiffness.`] : []),
     `Diamond: the stiffness assessed${required.length > 0 ? '; green line: the required mean stiffness, its value beside it' : ''}${limits.length > 0 ? '; dotted: joint class limits of EN 1993-1-8 §5.2.2.5' : ''}.`,
   ];
   return {

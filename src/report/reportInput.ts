@@ -473,6 +473,8 @@ export interface ReportInput {
   reliability: ReliabilityResults;
   sensitivity: SensitivityResults;
   restraint?: RestraintStudy; // absent when no end has a rotational spring
+  /** two-axis columns only: FORM about each principal axis alone, and the axis with the lower β */
+  axes?: { governing: 'y' | 'z'; governingAtMeans: 'y' | 'z'; y: { beta: number; pf: number }; z: { beta: number; pf: number } };
   partialFactors: PartialFactorRow[];
   resistanceFactor?: ResistanceFactorRow;
   strengthModels?: StrengthModelRow[];

@@ -160,6 +160,7 @@ function connectionBlocks(input: ReportInput, system: UnitSystem): Block[] {
   });
   const text =
     'Second-order moments k·θ the end connections carry (zero at a pinned end, the fixed-end moment at a fixed end): these are the values with which each joint\'s moment resistance M_j,Rd is checked. ' +
+    (input.axes ? 'They are about y, the plane of the load eccentricities and transverse actions (the column has two principal axes; its ends about z carry no moment from these actions). ' : '') +
     'The bow is affine to the first buckling mode, so the whole shape is amplified by 1/(1 − P/Pcr). ' +
     (j.atMean.endCouples || j.atMean.lineLoad !== undefined || j.atMean.topForce !== undefined
       ? 'End couples, line load and top force enter through the exact second-order solution of the spring-restrained member, each scaled with the axial load. '
@@ -472,6 +473,13 @@ function restraintLine(input: ReportInput, system: UnitSystem): string {
   return `${ax ? `about ${ax.axis}: ` : ''}${parts.join('; ')}${k}`;
 }
 
+/** Which principal axis governs, with each axis's own β (FORM about that axis alone). */
+function axesLine(a: NonNullable<ReportInput['axes']>): string {
+  const other = a.governing === 'y' ? 'z' : 'y';
+  const means = a.governingAtMeans === a.governing ? 'it also has the smaller capacity at the means' : `at the means axis ${a.governingAtMeans} has the smaller capacity`;
+  return `${a.governing}: β ${formatBeta(a[a.governing].beta)} about ${a.governing} alone, ${formatBeta(a[other].beta)} about ${other} alone (FORM; the column fails when either axis does; ${means})`;
+}
+
 function resultSection(input: ReportInput, system: UnitSystem): Section {
   const r = input.reliability;
   const g = r.governing;
@@ -487,6 +495,7 @@ function resultSection(input: ReportInput, system: UnitSystem): Section {
     { label: 'Reliability index', text: `β ${governingBeta(input)} (pf ${g.lowerBound ? '< ' : '= '}${formatProbability(g.pf)}) by ${METHOD_LABELS[g.method]}` },
     { label: 'Target', text: `β = ${formatBeta(t.beta)}, ${t.source}${t.note ? ` (${t.note})` : ''}` },
     { label: 'Governing method', text: `${g.basis ?? METHOD_LABELS[g.method]}: ${r.agreement.text}` },
+    ...(input.axes ? [{ label: 'Governing axis', text: axesLine(input.axes) }] : []),
     { label: 'Restraint required', text: restraintLine(input, system) },
   ];
   const top = leadingDriver(input);

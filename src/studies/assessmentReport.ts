@@ -308,6 +308,9 @@ export function assessmentReportInput(a: Assessment, meta: RunMeta): ReportInput
     ...(s.evidence ? { evidence: evidenceRows(s) } : {}),
     ...(a.measurements ? { measurements: measurementsReport(a.measurements, s) } : {}),
     ...(a.testPlans ? { testPlans: a.testPlans } : {}),
+    ...(a.axes
+      ? { axes: { governing: a.axes.governing, governingAtMeans: a.axes.governingAtMeans, y: { beta: a.axes.y.beta, pf: a.axes.y.pf }, z: { beta: a.axes.z.beta, pf: a.axes.z.pf } } }
+      : {}),
     correlation: s.correlation.map((r) => ({ a: r.a, b: r.b, rho: r.rho })),
     column: {
       length: s.column.length,

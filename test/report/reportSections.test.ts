@@ -55,6 +55,16 @@ describe('report document', () => {
     expect(okBox.kind === 'result' && okBox.tone === 'ok' && okBox.headline.startsWith('MEETS')).toBe(true);
   });
 
+  it('names the governing principal axis in the result box when there are two (docs/sections.md)', () => {
+    const input = demoReportInput();
+    expect(JSON.stringify(doc(input).sections[0])).not.toContain('Governing axis');
+    input.axes = { governing: 'z', governingAtMeans: 'y', y: { beta: 4.2, pf: 1.3e-5 }, z: { beta: 3.46, pf: 2.7e-4 } };
+    const box = doc(input).sections[0].blocks[0];
+    if (box.kind !== 'result') throw new Error('no result box');
+    const line = box.items.find((i) => i.label === 'Governing axis');
+    expect(line?.text).toBe('z: β 3.46 about z alone, 4.20 about y alone (FORM; the column fails when either axis does; at the means axis y has the smaller capacity)');
+  });
+
   it('states Monte Carlo without failure as a one-sided bound, never β ∞', () => {
     const input = demoReportInput();
     // source: exact binomial bound 1 − 0.05^(1/n) (Clopper & Pearson 1934); n = 2×10⁶ gives 1.5×10⁻⁶, β 4.67

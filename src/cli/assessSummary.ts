@@ -124,15 +124,15 @@ export function assessResultLine(a: Assessment): string {
   return `result: β ${g.beta} (${a.governing.basis ?? LABEL[a.governing.method]}) against β = ${formatBeta(s.targetBeta)} over ${years(s.referencePeriodYears)}${s.targetSource ? ` (${s.targetSource})` : ''}: ${verdict}`;
 }
 
-function measurementEffectLines(m: NonNullable<Assessment["measurements"]>): string[] {
-  const v = (b: { beta: number; meets: boolean }) => `β = ${formatBeta(b.beta)} (${b.meets ? 'meets' : 'short of'} the target)`;
-  const out = ['', '  what the measurements changed (FORM; report section of the same name):'];
-  out.push(`    as written, evidence ignored     ${v(m.before)}`);
-  if (m.afterTests) out.push(`    with the test results            ${v(m.afterTests)}`);
+function measurementEffectLines(a: Assessment, m: NonNullable<Assessment['measurements']>): string[] {
+  const out = ['', '  what the evidence changed, step by step (FORM; report section "What the measurements changed"):'];
+  const width = Math.max(...m.steps.map((st) => st.label.length));
+  for (const st of m.steps) out.push(`    ${st.label.padEnd(width)}  β = ${formatBeta(st.beta)} (${st.meets ? 'meets' : 'short of'} the target)`);
   if (m.survival) {
-    out.push(`    given the survived load          ${v(m.after)}; P(survival) beforehand ${m.survival.pSurvival.toFixed(4)}`);
-    if (m.survival.mc) out.push(`      Monte Carlo check: β = ${formatBeta(m.survival.mc.beta)} (${m.survival.mc.failures} failures among ${m.survival.mc.survived} survivors)`);
-    out.push('    the methods below use the updated distributions; the survived load enters only in the line above');
+    out.push(`    P(survival of the largest survived load) beforehand ${m.survival.pSurvival.toFixed(4)}`);
+    if (m.survival.mc) out.push(`    Monte Carlo check of the last step: β = ${formatBeta(m.survival.mc.beta)} (${m.survival.mc.failures} failures among ${m.survival.mc.survived} survivors)${m.survival.check ? `, ${m.survival.check.agrees ? 'agrees' : 'DISAGREES'}` : ''}`);
+    const u = a.governingUnconditional;
+    out.push(`    the verdict rests on the β given the survived loads${u ? ` (without them: β = ${formatBeta(u.beta)}, ${LABEL[u.method]})` : ''}; the methods below do not use the survived loads`);
   }
   return out;
 }
@@ -148,7 +148,7 @@ export function formatAssessment(a: Assessment, system: UnitSystem): string {
   lines.push(`  ${modelFactorLine(a)}`);
   if (a.scenario.evidence) lines.push(...evidenceLines(evidenceRows(a.scenario), system));
   if (a.measurementUpdate) lines.push(...measurementLines(a.measurementUpdate, system));
-  if (a.measurements) lines.push(...measurementEffectLines(a.measurements));
+  if (a.measurements) lines.push(...measurementEffectLines(a, a.measurements));
   lines.push('');
   const combos = a.combinations;
   if (combos) lines.push(...combinationLines(a));

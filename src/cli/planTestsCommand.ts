@@ -11,6 +11,8 @@ import { CAUTION, textTable } from './textTable.js';
 import { toolVersion } from './version.js';
 import { InputError } from '../scenario/inputError.js';
 import { planTestsJson } from '../studies/testPlanJson.js';
+import { updateScenarioWithEvidence } from '../studies/measurementUpdate.js';
+import { DEFAULT_SEED } from '../studies/columnAssessment.js';
 
 export interface PlanTestsOptions {
   json?: boolean;
@@ -49,7 +51,13 @@ export async function runPlanTests(file: string, opts: PlanTestsOptions): Promis
   const { text, fileName } = readScenarioText(file);
   const scenario = loadScenario(text, fileName);
   const seed = opts.seed ?? scenario.analysis.seed ?? DEFAULT_PLAN_SEED;
-  const study = planTests(scenario, { seed, ...(opts.outcomes !== undefined ? { outcomes: opts.outcomes } : {}) });
+  // the plans start from what the assessment would use: the scenario after its measurements through the model (same seed as assess)
+  const { scenario: updated, summary } = updateScenarioWithEvidence(scenario, opts.seed ?? scenario.analysis.seed ?? DEFAULT_SEED);
+  const study = planTests(updated, {
+    seed,
+    ...(opts.outcomes !== undefined ? { outcomes: opts.outcomes } : {}),
+    updatedByMeasurements: summary?.variables.map((v) => v.path) ?? [],
+  });
   if (study.plans.length === 0) throw new InputError('test_plans', 'nothing to plan: no random variable of the column can be tested; list plans under test_plans');
   if (opts.json) process.stdout.write(JSON.stringify(planTestsJson(study, { version: toolVersion(), scenario_sha256: scenario.sha256 }), null, 2) + '\n');
   else process.stdout.write(formatPlanTests(scenario.title, study));

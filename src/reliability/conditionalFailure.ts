@@ -20,6 +20,8 @@ import type { FormResult, LimitState, ReliabilityProblem } from './types.js';
 import { normalCdf, normalQuantile, normalQuantileUpper } from '../probability/normal.js';
 import { normalStream } from '../probability/rng.js';
 import { throwIfInterrupted } from '../runtime/interruptFlag.js';
+import { BETA_TOLERANCE, statisticalInterval } from './formCheck.js';
+import { zeroFailureBound } from './zeroFailureBound.js';
 
 /** A reliability problem with a survived event: the structure is known to have h(x) > 0. */
 export interface ConditionedProblem extends ReliabilityProblem {
@@ -122,4 +124,37 @@ export function conditionalMonteCarlo(problem: ConditionedProblem, opts: { sampl
   const pf = survived > 0 ? failures / survived : NaN;
   const cov = failures > 0 ? Math.sqrt((1 - pf) / (pf * survived)) : Infinity;
   return { pf, cov, beta: betaOf(pf), samples: opts.samples, survived, failures, pfBefore: failedAtAll / opts.samples, seed: opts.seed };
+}
+
+export interface ConditionalCheck {
+  /** FORM's conditional β lies within the Monte Carlo estimate's CHECK_SIGMAS interval widened by BETA_TOLERANCE */
+  agrees: boolean;
+  /** the estimate to rest on when they disagree: the Monte Carlo ratio, or its one-sided bound with no failure */
+  estimate: { beta: number; pf: number; upperBound: boolean };
+  reason: string;
+}
+
+/**
+ * Does the Monte Carlo ratio confirm FORM's conditional β? The same rule as FORM's own sampling
+ * check (formCheck.ts): a lognormal interval of CHECK_SIGMAS standard errors on pf, widened by
+ * BETA_TOLERANCE in β. With no failure among the survivors only the one-sided 95 % bound is known
+ * (zeroFailureBound.ts): FORM agrees when its β is above that bound less the tolerance.
+ */
+export function conditionalCheck(formBeta: number, mc: ConditionalMcResult): ConditionalCheck {
+  if (mc.failures === 0) {
+    const bound = zeroFailureBound(Math.max(1, mc.survived));
+    const agrees = formBeta >= bound.beta - BETA_TOLERANCE;
+    return {
+      agrees,
+      estimate: { beta: bound.beta, pf: bound.pf, upperBound: true },
+      reason: `Monte Carlo saw no failure among ${mc.survived} survivors (β above ${bound.beta.toFixed(2)} at 95 %), ${agrees ? 'consistent with' : 'which contradicts'} FORM's β = ${formBeta.toFixed(2)}`,
+    };
+  }
+  const [low, high] = statisticalInterval(mc.pf, mc.cov);
+  const agrees = formBeta >= low - BETA_TOLERANCE && formBeta <= high + BETA_TOLERANCE;
+  return {
+    agrees,
+    estimate: { beta: mc.beta, pf: mc.pf, upperBound: false },
+    reason: `Monte Carlo gives β = ${mc.beta.toFixed(2)} (${mc.failures} failures among ${mc.survived} survivors, CoV ${(100 * mc.cov).toFixed(0)} %), ${agrees ? 'which agrees with' : 'which disagrees with'} FORM's β = ${formBeta.toFixed(2)}`,
+  };
 }

@@ -165,7 +165,7 @@ function estimate(sumW: number, sumW2: number, count: number): { pf: number; cov
 }
 
 /** β from pf · e^(±CHECK_SIGMAS·s), s the log-scale standard deviation: [low, high]. */
-function statisticalInterval(pf: number, cov: number): [number, number] {
+export function statisticalInterval(pf: number, cov: number): [number, number] {
   const s = Math.sqrt(Math.log1p(cov * cov));
   return [normalQuantileUpper(Math.min(1, pf * Math.exp(CHECK_SIGMAS * s))), normalQuantileUpper(pf * Math.exp(-CHECK_SIGMAS * s))];
 }

@@ -13,13 +13,15 @@ export function measurementsSection(input: ReportInput, system: UnitSystem, char
   const m = input.measurements;
   if (!m) return null;
   const blocks: Block[] = [];
-  const rows: string[][] = [['as written (test results ignored, no survived load)', formatBeta(m.before.beta), formatProbability(m.before.pf), verdictText(m.before)]];
-  if (m.afterTests) rows.push(['with the test results', formatBeta(m.afterTests.beta), formatProbability(m.afterTests.pf), verdictText(m.afterTests)]);
-  if (m.survival) rows.push([m.afterTests ? 'with the test results and the survived load' : 'given the survived load', formatBeta(m.after.beta), formatProbability(m.after.pf), verdictText(m.after)]);
+  const rows: string[][] = m.steps
+    ? m.steps.map((st) => [st.label, formatBeta(st.beta), formatProbability(st.pf), verdictText(st)])
+    : [['as written (no evidence)', formatBeta(m.before.beta), formatProbability(m.before.pf), verdictText(m.before)],
+       ...(m.afterTests ? [['with the test results', formatBeta(m.afterTests.beta), formatProbability(m.afterTests.pf), verdictText(m.afterTests)]] : []),
+       ...(m.survival ? [['given the survived loads', formatBeta(m.after.beta), formatProbability(m.after.pf), verdictText(m.after)]] : [])];
   blocks.push({
     kind: 'table',
-    caption: `FORM β against the target ${formatNumber(m.target, 3)} before and after the evidence (one method throughout, so that the change is the evidence's alone).`,
-    head: ['state', 'β', 'pf', 'verdict'],
+    caption: `FORM β against the target ${formatNumber(m.target, 3)}, one kind of evidence added at each step (one method throughout, so that each change is the evidence's alone).`,
+    head: ['step', 'β', 'pf', 'verdict'],
     rows,
     numeric: [false, true, true, false],
   });
@@ -29,8 +31,40 @@ export function measurementsSection(input: ReportInput, system: UnitSystem, char
     tone: m.after.meets ? 'ok' : 'warn',
     text: `The evidence moves β from ${formatBeta(m.before.beta)} to ${formatBeta(m.after.beta)} (${change >= 0 ? '+' : ''}${formatNumber(change, 2)}): the column ${m.before.meets === m.after.meets ? (m.after.meets ? 'met and still meets' : 'fell and still falls short of') : m.after.meets ? 'now meets' : 'now falls short of'} the target.`,
   });
+  const u = m.modelUpdate;
+  if (u) {
+    const reading = (v: number, unit: 'rad' | 'Hz') => (!Number.isFinite(v) ? 'none' : unit === 'rad' ? `${formatNumber(v * 1e3, 3)} mrad` : `${formatNumber(v, 3)} Hz`);
+    blocks.push({
+      kind: 'table',
+      caption: 'Measurements through the model, as entered, against the model at the means before and after the update (the reading error is lognormal with the CoV given).',
+      head: ['item', 'measurement', 'reading', 'model before', 'model after', 'error CoV', 'source'],
+      rows: u.readings.map((r) => [`evidence[${r.index}]`, r.description, reading(r.measured, r.unit), reading(r.predictedPrior, r.unit), reading(r.predictedPosterior, r.unit), formatNumber(r.measurementCov, 3), r.source ?? '—']),
+      numeric: [false, false, true, true, true, true, false],
+    });
+    const cov = (x: { mean: number; sd: number }) => (x.mean !== 0 ? formatNumber(x.sd / Math.abs(x.mean), 3) : '—');
+    blocks.push({
+      kind: 'table',
+      caption: `The variables the measurements inform (and those correlated with them), before and after; R̂ and ESS of the posterior draws (converged when R̂ < ${u.rhatLimit} and ESS ≥ ${u.essMinimum}).`,
+      head: ['variable', 'mean before', 'CoV before', 'mean after', 'CoV after', '5 %–95 % after', 'fitted', 'R̂', 'ESS'],
+      rows: u.variables.map((v) => {
+        const q = (x: number) => formatQuantity(x, v.kind, system);
+        return [v.description, q(v.prior.mean), cov(v.prior), q(v.posterior.mean), cov(v.posterior), `${q(v.posterior.q05)} – ${q(v.posterior.q95)}`, v.fittedDist, v.rhat.toFixed(3), String(Math.round(v.ess))];
+      }),
+      numeric: [false, true, true, true, true, true, false, true, true],
+    });
+    blocks.push({
+      kind: u.converged ? 'paragraph' : 'callout',
+      ...(u.converged ? {} : { tone: 'warn' as const }),
+      text:
+        `Sampler: ${u.method}; acceptance ${u.acceptance.map((a) => formatNumber(a, 2)).join(', ')}; largest R̂ ${u.maxRhat.toFixed(3)}, smallest ESS ${Math.round(u.minEss)}: ` +
+        (u.converged ? 'converged.' : 'NOT converged; treat the updated β with caution.') +
+        (u.correlations.length > 0 ? ` Posterior correlations carried into the assessment: ${u.correlations.map((c) => `${c.a} / ${c.b} ${formatNumber(c.rho, 2)}`).join('; ')}.` : '') +
+        ` Approximation: ${u.approximation}.` +
+        u.notes.map((n) => ` Note: ${n}.`).join(''),
+    } as Block);
+  }
   if (m.densities.length > 0) {
-    blocks.push({ kind: 'paragraph', text: 'Data as entered and the update made are listed under the scenario inputs (appendix). Each chart below puts the distribution as written against the updated one; the tests are marked on the axis.' });
+    blocks.push({ kind: 'paragraph', text: 'Test results as entered and their update are listed under the scenario inputs (appendix). Each chart below puts the distribution before the update against the one after: for test results the posterior predictive, the tests marked on the axis; for the measurements through the model the distribution fitted to the posterior draws, with the draws as a histogram.' });
     m.densities.forEach((_, i) => {
       const c = charts.find((x) => x.name === `measurement-density-${i + 1}`);
       if (c) blocks.push({ kind: 'chart', name: c.name, title: c.title });
@@ -52,15 +86,25 @@ export function measurementsSection(input: ReportInput, system: UnitSystem, char
         `P(h > 0) = ${formatNumber(s.pSurvival, 4)} beforehand, conditional pf = ${formatProbability(s.pf)}${s.converged ? '' : ' (a FORM search did not converge: treat with care)'}.${mcText}`,
     });
   }
+  if (s) {
+    blocks.push({
+      kind: 'callout',
+      tone: m.after.meets ? 'ok' : 'warn',
+      text:
+        `The verdict of this report rests on the β given the survived loads (FORM on the two margins, checked by its Monte Carlo ratio; on the Monte Carlo ratio when they disagree)` +
+        `${s.unconditional ? `; without them β = ${formatBeta(s.unconditional.beta)} (${s.unconditional.basis ?? methodLabel(s.unconditional.method)})` : ''}.` +
+        `${s.check ? ` ${s.check.reason.charAt(0).toUpperCase()}${s.check.reason.slice(1)}.` : ''} The sampling methods, sensitivities and studies of this report do not use the survived loads.`,
+    });
+  }
   const g = input.reliability.governing;
-  const formAfterTests = m.afterTests ?? m.before;
-  const gap = g.method !== 'form' && Number.isFinite(g.beta) && Number.isFinite(formAfterTests.beta) ? g.beta - formAfterTests.beta : 0;
+  const formBeforeSurvival = m.steps ? m.steps.filter((st) => st.step !== 'survival').slice(-1)[0] : (m.afterTests ?? m.before);
+  const gap = !s && g.method !== 'form' && Number.isFinite(g.beta) && Number.isFinite(formBeforeSurvival.beta) ? g.beta - formBeforeSurvival.beta : 0;
   blocks.push({
     kind: 'paragraph',
     text:
-      'The assessment methods of this report use the updated distributions; the survived load enters only here (FORM and its Monte Carlo check).' +
+      'The assessment methods of this report use the updated distributions.' +
       (Math.abs(gap) >= 0.1
-        ? ` Note: the governing estimate (${methodLabel(g.method)}, β = ${formatBeta(g.beta)}) differs from FORM with the same distributions (β = ${formatBeta(formAfterTests.beta)}); read the changes above as shifts of β and check the final verdict with a sampling method.`
+        ? ` Note: the governing estimate (${methodLabel(g.method)}, β = ${formatBeta(g.beta)}) differs from FORM with the same distributions (β = ${formatBeta(formBeforeSurvival.beta)}); read the changes above as shifts of β and check the final verdict with a sampling method.`
         : ''),
   });
   return { id: 'measurements', title: SECTION_TITLES.measurements, blocks };

@@ -109,6 +109,10 @@ export interface MeasurementDensity {
   kind: QuantityKind;
   points: { x: number; prior: number; posterior: number }[];
   tests: number[];
+  /** what updated it: test results (the posterior predictive) or measurements through the model (a fit to the posterior draws) */
+  updatedBy?: 'tests' | 'measurements';
+  /** the posterior draws binned (measurements through the model), on the curves' scale */
+  histogram?: { x0: number; x1: number; density: number }[];
 }
 
 export interface BetaVerdictRow {
@@ -117,9 +121,59 @@ export interface BetaVerdictRow {
   meets: boolean;
 }
 
-/** "What the measurements changed": β before and after, densities, the survival study. */
+/** One step of the evidence: as written, with the tests, and the measurements, given the survived loads. */
+export interface EvidenceStepRow extends BetaVerdictRow {
+  step: 'as_written' | 'tests' | 'measurements' | 'survival';
+  label: string;
+}
+
+/** A reading through the model as entered, against the model at the prior and posterior means (SI: rad or Hz). */
+export interface ModelReadingRow {
+  index: number;
+  description: string;
+  unit: 'rad' | 'Hz';
+  measured: number;
+  predictedPrior: number;
+  predictedPosterior: number;
+  measurementCov: number;
+  source?: string;
+}
+
+/** The posterior sampler of the measurements through the model and its diagnostics. */
+export interface ModelUpdateReport {
+  method: string;
+  chains: number;
+  warmup: number;
+  draws: number;
+  acceptance: number[];
+  maxRhat: number;
+  minEss: number;
+  rhatLimit: number;
+  essMinimum: number;
+  converged: boolean;
+  readings: ModelReadingRow[];
+  variables: {
+    path: string;
+    description: string;
+    kind: QuantityKind;
+    prior: { mean: number; sd: number; q05: number; q95: number };
+    posterior: { mean: number; sd: number; q05: number; q95: number };
+    fittedDist: string;
+    rhat: number;
+    ess: number;
+  }[];
+  correlations: { a: string; b: string; rho: number }[];
+  approximation: string;
+  notes: string[];
+}
+
+/** "What the measurements changed": the steps of the evidence, densities, the sampler, the survival study. */
 export interface MeasurementsReport {
   target: number;
+  /** in order, the first is as written and the last is `after` */
+  steps?: EvidenceStepRow[];
+  /** the measurements through the model (absent: none) */
+  modelUpdate?: ModelUpdateReport;
   before: BetaVerdictRow;
   afterTests?: BetaVerdictRow;
   after: BetaVerdictRow;
@@ -131,6 +185,10 @@ export interface MeasurementsReport {
     rho: number;
     converged: boolean;
     mc?: { pf: number; cov: number; samples: number; survived: number; failures: number; seed: number };
+    /** the Monte Carlo check's verdict on FORM's conditional β */
+    check?: { agrees: boolean; reason: string };
+    /** the estimate without the survived loads (the main result rests on the conditional one) */
+    unconditional?: { beta: number; method: MethodName; basis?: string };
   };
   densities: MeasurementDensity[];
 }

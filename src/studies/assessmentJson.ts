@@ -156,7 +156,10 @@ export function reliabilityJson(a: Assessment): Record<string, unknown> {
   }
   r.verdict = { agree: a.verdict.agree, material: a.verdict.material, trust: a.verdict.trust, reason: a.verdict.reason };
   r.governing = a.governing;
+  // with survived loads `governing` is the conditional estimate (docs/evidence.md §8); this is the one without them
+  if (a.governingUnconditional) r.governing_unconditional = a.governingUnconditional;
   const c = a.combinations;
+  const system = a.governingUnconditional ?? a.governing;
   if (c) {
     r.combinations = c.combinations.map((k, i) => ({
       leading: k.leading,
@@ -169,9 +172,9 @@ export function reliabilityJson(a: Assessment): Record<string, unknown> {
     }));
     const sys = c.sormSystem ?? c.formSystem;
     r.system = {
-      beta: a.governing.beta,
-      pf: a.governing.pf,
-      method: a.governing.method,
+      beta: system.beta,
+      pf: system.pf,
+      method: system.method,
       linearised: { beta: sys.beta, pf: sys.pf, method: sys.method, from: c.sormSystem ? 'sorm' : 'form', bounds: [sys.bounds.lower, sys.bounds.upper] },
     };
   }
@@ -229,14 +232,16 @@ function evidenceJson(s: Assessment['scenario']): unknown {
   }));
 }
 
-/** β and verdict before and after the evidence (FORM), and the survival study (SI). */
+/** The steps of the evidence (FORM), each with β and the verdict, and the survival study (SI). */
 function measurementsJson(m: MeasurementEffect, s: Assessment['scenario']): unknown {
   const state = (b: { beta: number; pf: number; meets: boolean }) => ({ beta: b.beta, pf: b.pf, meets_target: b.meets });
   return {
     method: 'form',
     target_beta: m.target,
+    steps: m.steps.map((st) => ({ step: st.step, label: st.label, ...state(st) })),
     before: state(m.before),
     ...(m.afterTests ? { after_tests: state(m.afterTests) } : {}),
+    ...(m.afterMeasurements ? { after_measurements: state(m.afterMeasurements) } : {}),
     after: state(m.after),
     ...(m.survival
       ? {
@@ -245,6 +250,7 @@ function measurementsJson(m: MeasurementEffect, s: Assessment['scenario']): unkn
             beta: m.survival.beta, pf: m.survival.pf, probability_of_survival: m.survival.pSurvival, rho: m.survival.rho, converged: m.survival.converged,
             model_factor_shared: true,
             ...(m.survival.mc ? { mc: { pf: m.survival.mc.pf, cov: m.survival.mc.cov, samples: m.survival.mc.samples, survived: m.survival.mc.survived, failures: m.survival.mc.failures, seed: m.survival.mc.seed } } : {}),
+            ...(m.survival.check ? { mc_agrees: m.survival.check.agrees, check: m.survival.check.reason } : {}),
           },
         }
       : {}),

@@ -23,12 +23,37 @@ import type { ConnectionValues, JointClassRow } from '../report/reportInput.js';
 import { designPointConnections } from './designPointConnections.js';
 import { evidenceRows } from './evidenceSummary.js';
 import type { MeasurementEffect } from './measurementEffect.js';
-import type { MeasurementsReport } from '../report/reportInput.js';
+import type { MeasurementsReport, ModelUpdateReport } from '../report/reportInput.js';
+import { ESS_MINIMUM, RHAT_LIMIT, type MeasurementUpdateResult } from './measurementUpdate.js';
 
-function measurementsReport(m: MeasurementEffect, s: Assessment['scenario']): MeasurementsReport {
+function modelUpdateReport(r: MeasurementUpdateResult): ModelUpdateReport {
+  const u = r.summary;
+  const moments = (m: { mean: number; sd: number; q05: number; q95: number }) => ({ mean: m.mean, sd: m.sd, q05: m.q05, q95: m.q95 });
+  return {
+    method: u.method, chains: u.chains, warmup: u.warmup, draws: u.draws, acceptance: [...u.acceptance],
+    maxRhat: u.maxRhat, minEss: u.minEss, rhatLimit: RHAT_LIMIT, essMinimum: ESS_MINIMUM, converged: u.converged,
+    readings: u.measurements.map((m) => ({
+      index: m.index, description: m.description, unit: m.unit, measured: m.measured, predictedPrior: m.predictedPrior,
+      predictedPosterior: m.predictedPosterior, measurementCov: m.measurementCov, ...(m.source !== undefined ? { source: m.source } : {}),
+    })),
+    variables: u.variables.map((v) => ({
+      path: v.path, description: v.description, kind: v.kind, prior: moments(v.prior), posterior: moments(v.posterior),
+      fittedDist: v.fitted.dist, rhat: v.rhat, ess: v.ess,
+    })),
+    correlations: u.correlations.map((c) => ({ a: c.a, b: c.b, rho: c.rho })),
+    approximation: u.approximation,
+    notes: [...u.notes],
+  };
+}
+
+function measurementsReport(m: MeasurementEffect, a: Assessment): MeasurementsReport {
+  const s = a.scenario;
   const sv = m.survival;
+  const u = a.governingUnconditional;
   return {
     target: m.target,
+    steps: m.steps.map((st) => ({ step: st.step, label: st.label, beta: st.beta, pf: st.pf, meets: st.meets })),
+    ...(a.measurementUpdate ? { modelUpdate: modelUpdateReport(a.measurementUpdate) } : {}),
     before: m.before,
     ...(m.afterTests ? { afterTests: m.afterTests } : {}),
     after: m.after,
@@ -42,6 +67,8 @@ function measurementsReport(m: MeasurementEffect, s: Assessment['scenario']): Me
             })),
             beta: sv.beta, pf: sv.pf, pSurvival: sv.pSurvival, rho: sv.rho, converged: sv.converged,
             ...(sv.mc ? { mc: { pf: sv.mc.pf, cov: sv.mc.cov, samples: sv.mc.samples, survived: sv.mc.survived, failures: sv.mc.failures, seed: sv.mc.seed } } : {}),
+            ...(sv.check ? { check: { agrees: sv.check.agrees, reason: sv.check.reason } } : {}),
+            ...(u ? { unconditional: { beta: u.beta, method: u.method, ...(u.basis ? { basis: u.basis } : {}) } } : {}),
           },
         }
       : {}),
@@ -306,7 +333,7 @@ export function assessmentReportInput(a: Assessment, meta: RunMeta): ReportInput
     },
     inputs: inputRows(s),
     ...(s.evidence ? { evidence: evidenceRows(s) } : {}),
-    ...(a.measurements ? { measurements: measurementsReport(a.measurements, s) } : {}),
+    ...(a.measurements ? { measurements: measurementsReport(a.measurements, a) } : {}),
     ...(a.testPlans ? { testPlans: a.testPlans } : {}),
     ...(a.axes
       ? { axes: { governing: a.axes.governing, governingAtMeans: a.axes.governingAtMeans, y: { beta: a.axes.y.beta, pf: a.axes.y.pf }, z: { beta: a.axes.z.beta, pf: a.axes.z.pf } } }

@@ -25,6 +25,7 @@ import { fieldDomain } from '../scenario/fieldDomain.js';
 import { supportInsideDomain } from '../scenario/readScalar.js';
 import type { Method, Scenario } from '../scenario/types.js';
 import { measurementEffect, type MeasurementEffect } from './measurementEffect.js';
+import type { SurvivalStudy } from './survivalStudy.js';
 import { planTests, type TestPlanStudy } from './testPlanning.js';
 import { scalarAt } from '../scenario/variables.js';
 import type { DistSpec } from '../probability/distribution.js';
@@ -109,8 +110,10 @@ export interface Assessment {
   mc?: McResult;
   subset?: SubsetResult;
   verdict: Verdict;
-  /** The estimate put against the target; `basis` says why when it is not the method's own result. */
+  /** The estimate put against the target; `basis` says why when it is not the method's own result. With survived loads: the conditional one (docs/evidence.md §8). */
   governing: { method: Method; beta: number; pf: number; basis?: string };
+  /** with survived loads: the estimate without them (what `governing` would be otherwise) */
+  governingUnconditional?: { method: Method; beta: number; pf: number; basis?: string };
   /** FORM's self-check, run whenever FORM or SORM would decide the verdict alone. */
   formCheck?: FormCheckResult;
   /** Two or more time-varying loads: each combination and their series system (`form`, `sorm` and `model` are then the lowest-β combination's; IS, MC and subset are of the system). */
@@ -134,7 +137,7 @@ export interface Assessment {
   calls: Record<string, number>;
   /** the scenario's measurements (scenario-level `evidence:`): posterior, diagnostics, β before and after; `scenario` is then the updated one */
   measurementUpdate?: MeasurementUpdateResult;
-  /** β before and after the test results and survived loads (present when the scenario has any) */
+  /** the steps of the evidence: β as written, with the tests, the measurements, given the survived loads (present when the scenario has any) */
   measurements?: MeasurementEffect;
   /** the scenario's test plans ranked (present when it lists any) */
   testPlans?: TestPlanStudy;
@@ -292,13 +295,41 @@ export function governingAssessor(seed: number): GoverningAssessor {
   };
 }
 
-export async function assessColumn(given: Scenario, opts: AssessOptions = {}): Promise<Assessment> {
+export async function assessColumn(original: Scenario, opts: AssessOptions = {}): Promise<Assessment> {
   // measurements on the structure update the variables first; everything below assesses the updated scenario
-  const update = given.measurements?.length ? measurementUpdate(given, opts.seed ?? given.analysis.seed ?? DEFAULT_SEED) : null;
-  if (update) {
-    const a = await assessColumn(update.scenario, opts);
-    return { ...a, calls: { ...a.calls, 'measurement-update': update.result.formCalls }, measurementUpdate: update.result };
-  }
+  const update = original.measurements?.length ? measurementUpdate(original, opts.seed ?? original.analysis.seed ?? DEFAULT_SEED) : null;
+  const a = await assessUpdated(update ? update.scenario : original, opts, original, update);
+  return update ? { ...a, calls: { ...a.calls, 'measurement-update': update.result.formCalls }, measurementUpdate: update.result } : a;
+}
+
+/**
+ * With survived loads the verdict rests on P(failure | survived) (docs/evidence.md §8): FORM on
+ * the two margins, checked by its Monte Carlo ratio; when they disagree, on the Monte Carlo ratio
+ * (or its one-sided bound). The unconditional estimate is kept beside it.
+ */
+function survivalGoverning(
+  sv: SurvivalStudy,
+  plain: Assessment['governing'],
+  v: Verdict,
+  target: number,
+): { governing: Assessment['governing']; verdict: Verdict; unconditional: Assessment['governing']; warning?: string } {
+  const check = sv.check;
+  const restOnMc = check !== undefined && !check.agrees;
+  const governing: Assessment['governing'] = restOnMc
+    ? { method: 'mc', beta: check.estimate.beta, pf: check.estimate.pf, basis: `Monte Carlo given the survived loads${check.estimate.upperBound ? ', upper bound' : ''}` }
+    : { method: 'form', beta: sv.beta, pf: sv.pf, basis: check ? 'FORM given the survived loads, checked by Monte Carlo' : 'FORM given the survived loads' };
+  const line =
+    `Given the survived loads β = ${governing.beta.toFixed(2)} (${governing.basis}); without them β = ${plain.beta.toFixed(2)} (${plain.basis ?? plain.method.toUpperCase()}). ` +
+    `The verdict rests on the conditional β, ${governing.beta >= target ? 'which meets' : 'which falls short of'} the target${check ? `; ${check.reason}` : ''}.`;
+  return {
+    governing,
+    verdict: { ...v, trust: governing.method, reason: `${v.reason} ${line}` },
+    unconditional: plain,
+    ...(restOnMc ? { warning: `FORM given the survived loads disagrees with its Monte Carlo check: ${check.reason}; the verdict rests on the Monte Carlo estimate.` } : {}),
+  };
+}
+
+async function assessUpdated(given: Scenario, opts: AssessOptions, original: Scenario, update: ReturnType<typeof measurementUpdate>): Promise<Assessment> {
   // the scenario as its strength model sees it; `given` is kept for the comparison of models
   const resolved = resolveStrengthModel(given);
   const s = resolved.scenario;
@@ -422,7 +453,6 @@ export async function assessColumn(given: Scenario, opts: AssessOptions = {}): P
   if (!asked.has('form-check') && (plainGoverning.method === 'form' || plainGoverning.method === 'sorm')) {
     warnings.push(`FORM's self-check was switched off: the verdict rests on ${plainGoverning.method.toUpperCase()} alone, unchecked by sampling`);
   }
-  const governing = checked.governing;
   if (checked.warning) warnings.unshift(checked.warning);
 
   let sensitivity: SensitivityStudy | undefined;
@@ -459,14 +489,24 @@ export async function assessColumn(given: Scenario, opts: AssessOptions = {}): P
   const other = inThread - named - simulatedHere;
   if (other > 0) calls.other = other;
   let measurements: MeasurementEffect | undefined;
-  if (!interrupted && !opts.reliabilityOnly && (s.evidence || s.survivedLoads)) {
-    const r = countEvaluations(() => measurementEffect(given, seed));
+  let governing = checked.governing;
+  let finalVerdict = checked.verdict;
+  let unconditional: Assessment['governing'] | undefined;
+  if (!interrupted && !opts.reliabilityOnly && (s.evidence || s.survivedLoads || update)) {
+    const r = countEvaluations(() => measurementEffect(original, seed, update));
     measurements = r.result;
     calls.measurements = r.calls;
+    if (measurements.survival) {
+      const c = survivalGoverning(measurements.survival, governing, finalVerdict, s.targetBeta);
+      governing = c.governing;
+      finalVerdict = c.verdict;
+      unconditional = c.unconditional;
+      if (c.warning) warnings.unshift(c.warning);
+    }
   }
   let testPlans: TestPlanStudy | undefined;
   if (!interrupted && !opts.reliabilityOnly && s.testPlans) {
-    const r = countEvaluations(() => planTests(given, { seed }));
+    const r = countEvaluations(() => planTests(given, { seed, updatedByMeasurements: update?.result.summary.variables.map((v) => v.path) ?? [] }));
     testPlans = r.result;
     calls['test-plans'] = r.calls;
   }
@@ -494,8 +534,9 @@ export async function assessColumn(given: Scenario, opts: AssessOptions = {}): P
     workers: out.mc?.workers ?? 1,
     form: formResult,
     ...out,
-    verdict: checked.verdict,
+    verdict: finalVerdict,
     governing,
+    ...(unconditional ? { governingUnconditional: unconditional } : {}),
     formCheck: checked.check,
     ...(combos ? { combinations: combos } : {}),
     sensitivity,

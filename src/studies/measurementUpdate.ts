@@ -62,8 +62,37 @@ export interface UpdatedVariable {
   posterior: Moments;
   /** the distribution fitted to the draws, which the updated scenario uses */
   fitted: DistSpec;
+  /** the distribution the sampler started from (the scenario's, after any test results) */
+  priorSpec: DistSpec;
+  /** the pooled draws binned over their central 99.5 % (for the report's density chart) */
+  histogram: DrawHistogram;
   rhat: number;
   ess: number;
+}
+
+/** Equal bins from `lo` of width `width`; `density` = count / (all draws × width), so it integrates to ≤ 1. */
+export interface DrawHistogram {
+  lo: number;
+  width: number;
+  density: number[];
+}
+
+const HISTOGRAM_BINS = 30;
+
+/** The pooled draws binned over [0.25 %, 99.75 %] fractiles (draws outside are counted in no bin). */
+export function drawHistogram(values: Float64Array, bins = HISTOGRAM_BINS): DrawHistogram {
+  const sorted = Float64Array.from(values).sort();
+  const n = sorted.length;
+  const lo = sorted[Math.floor(0.0025 * (n - 1))];
+  const hi = sorted[Math.ceil(0.9975 * (n - 1))];
+  const width = hi > lo ? (hi - lo) / bins : 1;
+  const counts = new Array<number>(bins).fill(0);
+  for (let i = 0; i < n; i++) {
+    const k = Math.floor((sorted[i] - lo) / width);
+    if (k >= 0 && k < bins) counts[k]++;
+    else if (sorted[i] === hi) counts[bins - 1]++;
+  }
+  return { lo, width, density: counts.map((c) => c / (n * width)) };
 }
 
 export interface MeasurementRow {
@@ -295,6 +324,8 @@ export function updateScenarioWithEvidence(
       prior: priorMoments(model.dists[i], spec),
       posterior: { distribution: 'posterior draws', ...post },
       fitted,
+      priorSpec: spec,
+      histogram: drawHistogram(pooled[k]),
       rhat: diag.rhat,
       ess: diag.ess,
     });
@@ -408,8 +439,12 @@ function buildAndTransform(s: Scenario): void {
 /** The update and FORM β (series system of design points) of the scenario before and after it. */
 export interface MeasurementUpdateResult {
   summary: MeasurementUpdateSummary;
+  /** FORM on the scenario without its measurements (its test results applied) */
   betaPrior: number;
+  pfPrior: number;
+  /** FORM on the updated scenario */
   betaPosterior: number;
+  pfPosterior: number;
   /** limit-state calls of the two FORM runs */
   formCalls: number;
 }
@@ -426,7 +461,10 @@ export function measurementUpdate(scenario: Scenario, seed: number, options: Mea
   const after = countEvaluations(() => scenarioForm(updated));
   return {
     scenario: updated,
-    result: { summary, betaPrior: before.result.beta, betaPosterior: after.result.beta, formCalls: before.calls + after.calls },
+    result: {
+      summary, betaPrior: before.result.beta, pfPrior: before.result.pf, betaPosterior: after.result.beta, pfPosterior: after.result.pf,
+      formCalls: before.calls + after.calls,
+    },
   };
 }
 

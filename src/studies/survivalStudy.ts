@@ -9,7 +9,7 @@
 import { buildColumnModel } from '../limitState/columnModel.js';
 import { makeDistribution } from '../probability/makeDistribution.js';
 import { natafTransform } from '../probability/nataf.js';
-import { conditionalForm, conditionalMonteCarlo, type ConditionalMcResult, type ConditionedProblem } from '../reliability/conditionalFailure.js';
+import { conditionalCheck, conditionalForm, conditionalMonteCarlo, type ConditionalCheck, type ConditionalMcResult, type ConditionedProblem } from '../reliability/conditionalFailure.js';
 import { InputError } from '../scenario/inputError.js';
 import type { Scenario } from '../scenario/types.js';
 
@@ -27,6 +27,8 @@ export interface SurvivalStudy {
   calls: number;
   /** crude Monte Carlo of the same conditional probability, a check */
   mc?: ConditionalMcResult;
+  /** does the Monte Carlo ratio confirm FORM's conditional β (absent without Monte Carlo) */
+  check?: ConditionalCheck;
 }
 
 export const SURVIVAL_MC_SAMPLES = 400_000;
@@ -84,6 +86,6 @@ export function survivalStudy(s: Scenario, opts: { seed: number; samples?: numbe
   const mc = samples > 0 ? conditionalMonteCarlo(problem, { samples, seed: opts.seed }) : undefined;
   return {
     beta: r.beta, pf: r.pf, betaBefore: r.betaBefore, pfBefore: r.pfBefore, pSurvival: r.pSurvival, rho: r.rho,
-    converged: r.converged, calls: r.calls + (mc ? 2 * mc.samples : 0), ...(mc ? { mc } : {}),
+    converged: r.converged, calls: r.calls + (mc ? 2 * mc.samples : 0), ...(mc ? { mc, check: conditionalCheck(r.beta, mc) } : {}),
   };
 }

@@ -19,6 +19,7 @@ import { form } from '../reliability/form.js';
 import { conditionalForm } from '../reliability/conditionalFailure.js';
 import { TEST_PLAN_STREAM_BASE } from '../reliability/streams.js';
 import { planRefusal } from '../scenario/readTestPlans.js';
+import { InputError } from '../scenario/inputError.js';
 import type { Scenario, TestPlan } from '../scenario/types.js';
 import { scalarAt } from '../scenario/variables.js';
 import { throwIfInterrupted } from '../runtime/interruptFlag.js';
@@ -50,7 +51,7 @@ function betaOf(s: Scenario, start: ArrayLike<number> | undefined): { beta: numb
 }
 
 /** 1, 3 and 5 tests on each of the three variables that matter most (FORM α²) and can be tested. */
-export function defaultTestPlans(s: Scenario): TestPlan[] {
+export function defaultTestPlans(s: Scenario, updatedByMeasurements: readonly string[] = []): TestPlan[] {
   const model = buildColumnModel(s);
   if (model.names.length === 0) return [];
   const r = form(problemFromModel(model), { restarts: 0 });
@@ -58,6 +59,7 @@ export function defaultTestPlans(s: Scenario): TestPlan[] {
     .map((path, i) => ({ path, importance: r.importance[i] ?? 0 }))
     .filter((v) => {
       const similar = s.evidence?.[v.path]?.tested === 'similar';
+      if (similar && updatedByMeasurements.includes(v.path)) return false;
       return planRefusal(s, v.path, similar ? 'similar' : 'this_one') === null;
     })
     .sort((a, b) => b.importance - a.importance)
@@ -79,10 +81,22 @@ export function planLabel(p: TestPlan): string {
   return p.label ?? `${p.tests} test${p.tests === 1 ? '' : 's'} ${p.tested === 'this_one' ? 'of this item' : 'of similar items'}: ${describePath(p.variable)}`;
 }
 
-export function planTests(s: Scenario, opts: { seed: number; outcomes?: number; plans?: readonly TestPlan[] }): TestPlanStudy {
+/**
+ * `s` is the scenario the assessment uses: after its measurements through the model, if any
+ * (their variables are then listed in `updatedByMeasurements`). A plan of more tests of similar
+ * items rebuilds its variable from the test results alone, which would drop the measurements'
+ * update: such a plan on such a variable is refused (plans of this item start from the posterior).
+ */
+export function planTests(s: Scenario, opts: { seed: number; outcomes?: number; plans?: readonly TestPlan[]; updatedByMeasurements?: readonly string[] }): TestPlanStudy {
   const outcomes = opts.outcomes ?? DEFAULT_OUTCOMES;
   const defaults = opts.plans === undefined && s.testPlans === undefined;
-  const plans = opts.plans ?? s.testPlans ?? defaultTestPlans(s);
+  const measured = opts.updatedByMeasurements ?? [];
+  const plans = opts.plans ?? s.testPlans ?? defaultTestPlans(s, measured);
+  plans.forEach((plan, k) => {
+    if (plan.tested === 'similar' && measured.includes(plan.variable)) {
+      throw new InputError(`test_plans[${k}]`, `${plan.variable} is also updated by the measurements through the model; a plan of more tests of similar items would set that update aside: plan a test of another variable`);
+    }
+  });
   const target = s.targetBeta;
   const now = betaOf(s, undefined);
   let calls = now.calls;

@@ -1,7 +1,7 @@
 // Failure given a survived proof load, P(g ≤ 0 | h > 0), by FORM (two linearised margins and the
 // bivariate normal) and by crude Monte Carlo, against closed forms.
 import { describe, expect, it } from 'vitest';
-import { conditionalForm, conditionalMonteCarlo, type ConditionedProblem } from '../../src/reliability/conditionalFailure.js';
+import { betaOf, conditionalCheck, conditionalForm, conditionalMonteCarlo, type ConditionalMcResult, type ConditionedProblem } from '../../src/reliability/conditionalFailure.js';
 import { natafTransform } from '../../src/probability/nataf.js';
 import { makeDistribution } from '../../src/probability/makeDistribution.js';
 import { normalCdf, normalPdf } from '../../src/probability/normal.js';
@@ -77,5 +77,30 @@ describe('survived proof load: normal resistance and normal load', () => {
     // common practice: a resistance that can never exceed the proof load contradicts the evidence
     const prob = proofProblem(muR, sdR, 500, 1e5); // the proof load is 825 sd above the mean resistance
     expect(() => conditionalForm(prob)).toThrow(/probability zero/);
+  });
+});
+
+describe('the Monte Carlo check of a conditional β (the rule of formCheck.ts)', () => {
+  const mc = (pf: number, failures: number, survived: number): ConditionalMcResult => ({
+    pf, cov: failures > 0 ? Math.sqrt((1 - pf) / (pf * survived)) : Infinity, beta: failures > 0 ? betaOf(pf) : Infinity,
+    samples: survived, survived, failures, pfBefore: pf, seed: 1,
+  });
+  it('agrees inside 4 standard errors plus 0.1 in β and disagrees well outside', () => {
+    // 100 failures in 1e6: CoV 10 %, 4σ on ln pf ≈ ±0.4 → β band about ±0.1 around 3.72, widened by 0.1
+    const m = mc(1e-4, 100, 1e6);
+    expect(conditionalCheck(betaOf(1e-4), m).agrees).toBe(true);
+    expect(conditionalCheck(betaOf(1e-4) + 0.15, m).agrees).toBe(true);
+    expect(conditionalCheck(betaOf(1e-4) + 0.5, m).agrees).toBe(false);
+    expect(conditionalCheck(betaOf(1e-4) - 0.5, m).estimate).toEqual({ beta: m.beta, pf: m.pf, upperBound: false });
+  });
+  it('with no failure uses the one-sided 95 % bound 1 − 0.05^(1/n) (Clopper & Pearson 1934)', () => {
+    const m = mc(0, 0, 100_000);
+    const bound = -Math.expm1(Math.log(0.05) / 100_000);
+    const c = conditionalCheck(5, m);
+    expect(c.agrees).toBe(true);
+    expect(c.estimate.upperBound).toBe(true);
+    expect(c.estimate.pf).toBeCloseTo(bound, 15);
+    // FORM claiming pf ≈ 1e-3, far above what 100 000 clean survivors allow (≈ 3e-5)
+    expect(conditionalCheck(betaOf(1e-3), m).agrees).toBe(false);
   });
 });

@@ -24,11 +24,12 @@ export interface ColumnMatrices {
 
 /**
  * Assemble the dimensionless column (EI = 1, L = 1, eigenvalue λ = P L²/EI = φ²) from `elements`
- * equal Hermite elements. Node i at ξ = i/elements, DOFs (w_i, θ_i). Rotational springs R on θ at the
+ * equal Hermite elements. Node i at ξ = i/elements, DOFs (w_i, θ_i). `elementStiffness(e)`, when given,
+ * is the EI of element e relative to the reference EI (a stepped member); R and T refer to that EI. Rotational springs R on θ at the
  * ends, translational spring T on w at the top (sway). Removed DOFs: w at the base; w at the top when
  * braced (or T = ∞); θ at an end whose R = ∞.
  */
-export function assembleColumn(frame: FeFrame, r: FeRestraint, elements: number): ColumnMatrices {
+export function assembleColumn(frame: FeFrame, r: FeRestraint, elements: number, elementStiffness?: (element: number) => number): ColumnMatrices {
   if (!(Number.isInteger(elements) && elements >= 1)) throw new RangeError('elements must be a positive integer');
   const T = frame === 'sway' ? r.lateral ?? 0 : Infinity;
   for (const v of [r.bottom, r.top, T]) if (!(v >= 0)) throw new RangeError('restraint ratios must be >= 0');
@@ -42,9 +43,12 @@ export function assembleColumn(frame: FeFrame, r: FeRestraint, elements: number)
   const Mf = new Float64Array(N * N);
   for (let el = 0; el < elements; el++) {
     const o = 2 * el;
+    // a member of segment-wise stiffness: EI of this element relative to the one R and T refer to
+    const ei = elementStiffness === undefined ? 1 : elementStiffness(el);
+    if (!(ei > 0 && Number.isFinite(ei))) throw new RangeError(`element stiffness must be finite and > 0 (element ${el}: ${ei})`);
     for (let i = 0; i < 4; i++) {
       for (let j = 0; j < 4; j++) {
-        Kf[(o + i) * N + o + j] += ke[i * 4 + j];
+        Kf[(o + i) * N + o + j] += ei * ke[i * 4 + j];
         Gf[(o + i) * N + o + j] += kg[i * 4 + j];
         Mf[(o + i) * N + o + j] += me[i * 4 + j];
       }

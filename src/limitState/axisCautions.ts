@@ -13,10 +13,18 @@ export function axisCautions(s: Scenario): string[] {
   }
   const k = s.column.section.geometry?.corrosion;
   if (k !== undefined) {
-    const zone = k.zoneHeight !== undefined ? `it is stated over the lowest ${(k.zoneHeight * 1e3).toFixed(0)} mm, but ` : '';
-    out.push(
-      `Corrosion loss: ${zone}the reduced section is used over the whole length, for the buckling stiffness as well as the strength (conservative; no credit is taken for sound steel above a corroded zone). Measure the remaining thickness on site; the loss per face is an input, not a prediction.`,
-    );
+    const measure = 'Measure the remaining thickness on site; the loss per face is an input, not a prediction.';
+    const h = k.zoneHeight;
+    if (h === undefined || !(h < s.column.length)) {
+      out.push(`Corrosion loss: the reduced section is used over the whole length, for the buckling stiffness as well as the strength. ${measure}`);
+    } else {
+      const bent = s.loads.some((l) => l.eccentricity || l.moments || l.transverse || l.horizontal) || s.column.outOfPlumb !== undefined;
+      out.push(
+        `Corrosion loss in the lowest ${(h * 1e3).toFixed(0)} mm: the column is taken as a stepped member, the reduced section in the zone and the sound one above it. Its critical load and first mode are exact; first-yield checks each part with its own section, and the code curves take λ̄ from the stepped critical load with the zone's A·fy (the weakest cross-section with the member's true stiffness, an engineering approximation).` +
+          (bent ? ' About the axis bent by eccentric loads, applied moments or transverse actions (y), the reduced section is used over the whole length (conservative: no stepped second-order solution).' : '') +
+          ` ${measure}`,
+      );
+    }
   }
   return out;
 }

@@ -19,6 +19,8 @@ import { flexibleComponents, seriesComponentPath, seriesStiffness } from '../sce
 import { resolveStrengthModel, type ModelFactorUsed } from './strengthChoice.js';
 import { read, slotOf, type Slot } from './slots.js';
 import { makeColumnBlockG, type ColumnBlockG } from './columnBlock.js';
+import { sectionZone } from './sectionZone.js';
+import type { SoundSection } from '../mechanics/types.js';
 
 export interface ColumnModel {
   /** the scenario as its strength model sees it (resolveStrengthModel): default model factor in, ignored bow out */
@@ -75,6 +77,8 @@ interface AxisParts {
   readonly strength: StrengthModel;
   /** the load eccentricities bend about this axis */
   readonly eccentric: boolean;
+  /** the section above a corroded zone (a stepped member), null when the loss covers the whole length */
+  readonly sound: SoundSection | null;
 }
 
 /**
@@ -242,11 +246,12 @@ export function buildColumnModel(given: Scenario, combination: LoadCombination =
     side[1] = sum > 0 ? h / sum + read(plumb, x) : 0;
   };
   const section = sectionSource(s, names);
+  const zone = sectionZone(s);
   const frame = c.frame;
 
   /** One principal axis: its stiffness, modulus, bow, ends and strength model. */
   const makeAxis = (name: AxisName, parts: AxisParts): AxisModel => {
-    const { I, S, bow, bottom, top, lateral, strength } = parts;
+    const { I, S, bow, bottom, top, lateral, strength, sound } = parts;
     const A = section.A;
     const axisEccentric = parts.eccentric && eccentric;
     const fast = makeFastCapacityFromRatio(frame, strength);
@@ -266,6 +271,7 @@ export function buildColumnModel(given: Scenario, combination: LoadCombination =
         L,
         bow: read(bow, x),
         frame,
+        ...(sound !== null ? { sound } : {}),
         r: {
           bottom: bottom(x, EI),
           top: top(x, EI),
@@ -281,6 +287,8 @@ export function buildColumnModel(given: Scenario, combination: LoadCombination =
       // A sample on the zero bound of a stiffness or strength (uniform or truncnormal with min 0, a
       // far tail that underflows) carries no load: capacity 0 is the answer, not an error.
       if (!(EI > 0) || !(A(x) * read(fy, x) > 0)) return 0;
+      // the tabulated path knows only the prismatic column: a stepped member takes the exact one
+      if (sound !== null) return columnCapacity(strength, state(x)).capacity;
       if (axisEccentric) {
         effectiveEccentricity(x);
         // the tabulated path knows only the concentric column: an eccentric sample takes the exact one
@@ -315,6 +323,7 @@ export function buildColumnModel(given: Scenario, combination: LoadCombination =
     lateral: c.ends.lateral === null ? null : slotOf(c.ends.lateral, 'column.ends.lateral', names),
     strength: s.strength,
     eccentric: true,
+    sound: zone?.y ?? null,
   });
   const z = c.axisZ;
   const axisZ =
@@ -330,6 +339,7 @@ export function buildColumnModel(given: Scenario, combination: LoadCombination =
           strength: z.strength,
           // eccentricities act in the plane of bending about y (docs/beam-column.md)
           eccentric: false,
+          sound: zone?.z ?? null,
         });
   const axes: AxisModel[] = axisZ === null ? [axisY] : [axisY, axisZ];
   const only = onlyAxis === undefined ? null : onlyAxis === 'z' ? axisZ : axisY;

@@ -4,7 +4,8 @@
  */
 import { criticalLoad } from '../mechanics/criticalLoad.js';
 import { modeShape } from '../mechanics/modeShape.js';
-import { columnCapacity } from '../mechanics/columnCapacity.js';
+import { columnCapacity, usesSteppedSolver } from '../mechanics/columnCapacity.js';
+import { steppedCriticalLoad, steppedMode } from '../mechanics/steppedColumn.js';
 import { fixityFactor } from '../mechanics/restraint.js';
 import type { ColumnState } from '../mechanics/types.js';
 import type { AxisModel, AxisName, ColumnModel } from './columnModel.js';
@@ -62,7 +63,53 @@ function finiteOrNull(v: number): number | null {
   return Number.isFinite(v) ? v : null;
 }
 
+/**
+ * The first mode of a stepped member (a corroded zone): K = π/φ with φ referred to E·I of the zone, as
+ * R is; inflection points where the moment changes sign (a grid of 400 steps, then bisection). The
+ * stepped solver gives the lowest mode only, so no higher modes are listed.
+ */
+function summariseSteppedMode(state: ColumnState): ModeSummary | null {
+  const sound = state.sound!;
+  const member = { ratio: sound.I / state.I, zone: Math.min(1, sound.from / state.L) };
+  const { Pcr, phi, K } = steppedCriticalLoad(state.E * state.I, state.L, state.frame, state.r, member);
+  if (!(Pcr > 0)) return null;
+  const shape = steppedMode(state.frame, state.r, member, phi);
+  const inflections: number[] = [];
+  const steps = 400;
+  let x0 = 0;
+  let m0 = shape.moment(0);
+  for (let i = 1; i <= steps; i++) {
+    const x1 = i / steps;
+    const m1 = shape.moment(x1);
+    if (m0 !== 0 && m1 !== 0 && (m0 > 0) !== (m1 > 0)) {
+      let lo = x0, hi = x1, mlo = m0;
+      for (let k = 0; k < 60; k++) {
+        const mid = 0.5 * (lo + hi);
+        const mm = shape.moment(mid);
+        if ((mm > 0) === (mlo > 0)) { lo = mid; mlo = mm; } else hi = mid;
+      }
+      inflections.push(0.5 * (lo + hi) * state.L);
+    }
+    x0 = x1;
+    m0 = m1;
+  }
+  return {
+    mode: 1,
+    critical_load: Pcr,
+    effective_length_factor: K,
+    inflection_points: inflections,
+    effective_length: K * state.L,
+    effective_length_from_inflections: false,
+    curvature_factor: Math.max(shape.zoneFactor, shape.upperFactor),
+    shape: Array.from({ length: SHAPE_POINTS }, (_, i) => {
+      const xi = i / (SHAPE_POINTS - 1);
+      return { xi, w: shape.sample(xi) };
+    }),
+  };
+}
+
 function summariseMode(state: ColumnState, mode: number): ModeSummary | null {
+  if (usesSteppedSolver(state)) return mode === 1 ? summariseSteppedMode(state) : null;
   const EI = state.E * state.I;
   const { Pcr, phi, K } = criticalLoad(EI, state.L, state.frame, state.r, mode);
   if (!(Pcr > 0)) return null;

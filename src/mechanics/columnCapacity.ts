@@ -7,6 +7,7 @@ import { equivalentBowCapacity } from './equivalentBow.js';
 import { eccentricFirstYieldCapacity } from './eccentricFirstYield.js';
 import { firstYieldCapacity } from './firstYield.js';
 import { modeShape } from './modeShape.js';
+import { steppedColumnCapacity } from './steppedCapacity.js';
 import { strengthModelKind } from './strengthModelKind.js';
 import type { CapacityResult, ColumnState, StrengthModel } from './types.js';
 
@@ -30,12 +31,28 @@ export function isStrengthModel(s: string): s is StrengthModel {
   return strengthModelKind(s) !== undefined;
 }
 
+/** No eccentricity and no transverse action that acts on this frame. */
+function isConcentric(s: ColumnState): boolean {
+  const e = s.eccentricity;
+  const t = s.transverse;
+  return (e === undefined || (e.bottom === 0 && e.top === 0)) && (t === undefined || (t.line === 0 && (s.frame !== 'sway' || t.top === 0)));
+}
+
+/** A stepped member (corroded zone) under concentric load: the stepped solver gives Pcr, the mode and the capacity. */
+export function usesSteppedSolver(s: ColumnState): boolean {
+  return s.sound !== undefined && isConcentric(s);
+}
+
 /**
  * Axial capacity of the restrained column (docs/mechanics.md), exact path: critical load from the
  * characteristic equation, c from the closed-form first mode. A mechanism gives capacity 0.
+ * A stepped member (`s.sound`, a corroded zone near the base) under concentric load takes the stepped
+ * solver (steppedCapacity.ts); with eccentric or transverse actions the zone's section is used over the
+ * whole length (the conservative reduction: no second-order solution of the stepped beam-column yet).
  */
 export function columnCapacity(model: StrengthModel, s: ColumnState): CapacityResult {
   if (!isStrengthModel(model)) throw new RangeError(`unknown strength model '${String(model)}'`);
+  if (usesSteppedSolver(s)) return steppedColumnCapacity(model, s, s.sound!);
   const { Pcr, phi, K } = criticalLoad(s.E * s.I, s.L, s.frame, s.r);
   const mode = modeShape(s.frame, s.r, phi);
   const c = mode.curvatureFactor;

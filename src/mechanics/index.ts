@@ -15,3 +15,5 @@ export {
 export { en1993EquivalentBow, equivalentBowCapacity } from './equivalentBow.js';
 export { strengthModelKind, strengthUsesBow, type StrengthModelKind } from './strengthModelKind.js';
 export { defaultModelUncertainty, type ModelUncertaintyDefault } from './modelUncertainty.js';
+export { steppedCriticalLoad, steppedCriticalPhi, steppedMode, type SteppedMember, type SteppedMode } from './steppedColumn.js';
+export { steppedColumnCapacity } from './steppedCapacity.js';

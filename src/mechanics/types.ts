@@ -116,6 +116,20 @@ export interface ColumnState {
    * out-of-plumb φ adds φ); absent = none. Applied end moments are in `eccentricity` (M/P).
    */
   transverse?: { line: number; top: number };
+  /**
+   * a stepped member (docs/mechanics.md): A, I and S above hold over the lowest `from` metres (a corroded
+   * zone) and this sound section above it; R and T stay referred to E·I of the zone. Absent = prismatic.
+   */
+  sound?: SoundSection;
+}
+
+/** The section above a corroded zone near the base (SI). */
+export interface SoundSection {
+  /** height of the zone below it (m), 0 < from < L */
+  from: number;
+  A: number;
+  I: number;
+  S: number;
 }
 
 export interface CapacityResult {

@@ -11,6 +11,19 @@ afterAll(() => rmSync(folder, { recursive: true, force: true }));
 const DEMO = 'scenarios/facade-h-column.yaml';
 const demo = () => YAML.parse(readFileSync(join(ROOT, DEMO), 'utf8')) as Record<string, any>;
 
+/**
+ * The demo with its loss over the whole length (no zone): there the weak axis z governs β as well, which
+ * the axis-choice checks of `restraint` need. With the 400 mm zone the stepped member lifts axis z alone
+ * above the target and axis y governs (checked below).
+ */
+function wholeLengthDemo(): string {
+  const d = demo();
+  delete d.column.section.corrosion.zone;
+  const file = join(folder, 'whole-length-demo.yaml');
+  writeFileSync(file, YAML.stringify(d));
+  return file;
+}
+
 async function checkEdited(name: string, edit: (d: Record<string, any>) => void) {
   const d = demo();
   edit(d);
@@ -30,11 +43,29 @@ describe('the facade demo: an H section by its dimensions, two axes, a corroded 
     expect(c.axes.z.strength).toBe('en1993-c');
     expect(c.section_properties.at_mean_loss.A).toBeLessThan(c.section_properties.gross.A);
     expect(c.cautions.join(' ')).toMatch(/lateral-torsional buckling are not checked/);
-    expect(c.cautions.join(' ')).toMatch(/reduced section is used over the whole length/);
+    // the zone of 400 mm makes a stepped member about z (concentric); about y, bent by the eccentric load and the wind, the loss stays over the whole length
+    expect(c.cautions.join(' ')).toMatch(/lowest 400 mm: the column is taken as a stepped member/);
+    expect(c.cautions.join(' ')).toMatch(/\(y\), the reduced section is used over the whole length/);
+  });
+
+  it('the corroded zone changes the numbers about z: between the whole-length loss and no loss', async () => {
+    const r = await runCli(['check', DEMO, '--json']);
+    const whole = await checkEdited('whole-length-loss', (d) => { delete d.column.section.corrosion.zone; });
+    const none = await checkEdited('no-loss', (d) => { delete d.column.section.corrosion; });
+    expect([r.status, whole.status, none.status]).toEqual([0, 0, 0]);
+    const [z, zWhole, zNone] = [r, whole, none].map((x) => JSON.parse(x.stdout).check.axes.z);
+    expect(z.critical_load).toBeGreaterThan(zWhole.critical_load * 1.1);
+    expect(z.critical_load).toBeLessThan(zNone.critical_load);
+    expect(z.capacity).toBeGreaterThan(zWhole.capacity);
+    expect(z.capacity).toBeLessThan(zNone.capacity);
+    // about y the eccentric load keeps the whole-length reduction: the same numbers with or without the zone
+    const [y, yWhole] = [r, whole].map((x) => JSON.parse(x.stdout).check.axes.y);
+    expect(y.capacity).toBe(yWhole.capacity);
+    expect(JSON.parse(whole.stdout).check.cautions.join(' ')).toMatch(/reduced section is used over the whole length, for the buckling stiffness/);
   });
 
   it('restraint studies the governing axis z: a finite requirement about z, the other axis shown', async () => {
-    const r = await runCli(['restraint', DEMO, '--json']);
+    const r = await runCli(['restraint', wholeLengthDemo(), '--json']);
     expect(r.status).toBe(0);
     const j = JSON.parse(r.stdout).restraint;
     expect(j.axis).toBe('z');
@@ -51,12 +82,21 @@ describe('the facade demo: an H section by its dimensions, two axes, a corroded 
   }, 90_000);
 
   it('restraint --axis y: the terminal says that axis z alone keeps the column below the target', async () => {
-    const r = await runCli(['restraint', DEMO, '--axis', 'y']);
+    const r = await runCli(['restraint', wholeLengthDemo(), '--axis', 'y']);
     expect(r.status).toBe(0);
     expect(r.stdout).toMatch(/No stiffness about y reaches the target because axis z alone has β = \d\.\d\d/);
     expect(r.stdout).toMatch(/^result: no mean rotational stiffness about y reaches the target β = 3\.80: axis z alone has β = /m);
     expect(r.stdout).toMatch(/licensed engineer/);
   }, 60_000);
+
+  it('restraint on the demo as given: the corroded zone lifts axis z alone above the target, so y governs', async () => {
+    const r = await runCli(['restraint', DEMO, '--json']);
+    expect(r.status).toBe(0);
+    const j = JSON.parse(r.stdout).restraint;
+    expect(j.axis).toBe('y');
+    expect(j.axis_beta_alone.z).toBeGreaterThan(3.8);
+    expect(j.other_axis).toMatchObject({ axis: 'z', caps_target: false });
+  }, 90_000);
 
   it('restraint --axis with a bad value, or z on a one-axis column: exit 2 naming --axis', async () => {
     for (const args of [['restraint', DEMO, '--axis', 'x'], ['restraint', 'scenarios/braced-base-plate.yaml', '--axis', 'z']]) {
@@ -75,6 +115,7 @@ describe('the facade demo: an H section by its dimensions, two axes, a corroded 
     expect(r.status).toBe(0);
     expect(r.stdout).toMatch(/z \(governs\)/);
     expect(r.stdout).toMatch(/torsional/);
+    expect(r.stdout).toMatch(/Caution: Corrosion loss in the lowest 400 mm: the column is taken as a stepped member/);
     expect(r.stdout).toMatch(/licensed engineer/);
   });
 });

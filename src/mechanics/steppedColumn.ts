@@ -85,12 +85,16 @@ export function steppedChar(phi: number, p: Float64Array): number {
   baseStates(s, p);
   const rho = p[P_RATIO];
   const a = p[P_ZONE];
-  for (const o of [0, 4]) {
-    carry(s, o, phi, 1, a);
-    carry(s, o, phi, rho, 1 - a);
-  }
-  const [r1a, r2a] = topRows(s, 0, p);
-  const [r1b, r2b] = topRows(s, 4, p);
+  carry(s, 0, phi, 1, a);
+  carry(s, 0, phi, rho, 1 - a);
+  carry(s, 4, phi, 1, a);
+  carry(s, 4, phi, rho, 1 - a);
+  // top conditions (hot: written out, no tuples)
+  const tau = p[W_TAU], ups = p[W_UPS], aB = p[W_ALPHA_B], bB = p[W_BETA_B];
+  const r1a = ups * s[3] - tau * s[0];
+  const r2a = bB * s[2] + aB * s[1];
+  const r1b = ups * s[7] - tau * s[4];
+  const r2b = bB * s[6] + aB * s[5];
   return r1a * r2b - r1b * r2a;
 }
 

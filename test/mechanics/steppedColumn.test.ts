@@ -116,6 +116,17 @@ describe('the first mode of the stepped column', () => {
     expect(mode.zoneFactor).toBeLessThan(1);
   });
 
+  it('a stepped cantilever: the base moment is P times the top drift, the largest moment (statics; common practice)', () => {
+    const r = { bottom: Infinity, top: 0 };
+    for (const m of [{ ratio: 1.8, zone: 0.2 }, { ratio: 3, zone: 0.6 }]) {
+      const mode = steppedMode('sway', r, m, steppedCriticalPhi('sway', r, m));
+      expect(mode.sample(1)).toBeCloseTo(1, 12); // the free top moves most
+      expect(Math.abs(mode.moment(0))).toBeCloseTo(1, 9);
+      expect(mode.zoneFactor).toBeCloseTo(1, 9);
+      expect(mode.upperFactor).toBeLessThan(1);
+    }
+  });
+
   it('with equal stiffness gives the prismatic curvature factor', () => {
     for (const [frame, r] of ENDS.filter(([f, e]) => !(f === 'sway' && e.bottom === 0 && e.top === 0))) {
       const m = { ratio: 1 + 1e-12, zone: 0.4 };
@@ -154,6 +165,16 @@ describe('capacity with a corroded zone', () => {
           previous = cap;
         }
         expect(whole).toBeLessThan(none);
+      }
+    }
+  });
+
+  it('a zone whose section equals the sound one gives the prismatic capacity, for every strength model', () => {
+    for (const model of STRENGTH_MODELS) {
+      for (const [frame, r] of ENDS.filter(([f, e]) => !(f === 'sway' && e.bottom === 0 && e.top === 0))) {
+        const plain = state(frame, r);
+        const stepped: ColumnState = { ...plain, sound: { from: 1.3, A: plain.A, I: plain.I, S: plain.S } };
+        expect(rel(columnCapacity(model, stepped).capacity, columnCapacity(model, plain).capacity)).toBeLessThan(1e-9);
       }
     }
   });

@@ -103,5 +103,8 @@ function restraintResultLine(r: ColumnRestraintResult, system: UnitSystem): stri
   if (r.axis?.other.capsTarget) {
     return `result: no mean rotational stiffness${about} reaches the target β = ${formatBeta(r.study.target)}: axis ${r.axis.other.axis} alone has β = ${formatBeta(r.axis.other.beta)}`;
   }
+  if (r.study.outcome === 'pinned-suffices') {
+    return `result: no rotational restraint${about} needs to be relied on: the target β = ${formatBeta(r.study.target)} is met with pinned ${r.study.ends.join(' and ')} connections`;
+  }
   return `result: for the target β = ${formatBeta(r.study.target)} the mean rotational stiffness${about} must be ${parts.join('; ')}`;
 }

@@ -96,6 +96,10 @@ describe('the facade demo: an H section by its dimensions, two axes, a corroded 
     expect(j.axis).toBe('y');
     expect(j.axis_beta_alone.z).toBeGreaterThan(3.8);
     expect(j.other_axis).toMatchObject({ axis: 'z', caps_target: false });
+    // pinned ends about y already reach the target: the last line says so instead of "at least 0"
+    expect(j.outcome).toBe('pinned-suffices');
+    const t = await runCli(['restraint', DEMO]);
+    expect(t.stdout.trim().split('\n').at(-1)).toBe('result: no rotational restraint about y needs to be relied on: the target β = 3.80 is met with pinned bottom and top connections');
   }, 90_000);
 
   it('restraint --axis with a bad value, or z on a one-axis column: exit 2 naming --axis', async () => {

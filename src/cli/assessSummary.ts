@@ -144,6 +144,12 @@ export function formatAssessment(a: Assessment, system: UnitSystem): string {
   lines.push(`  ${assessResultLine(a)}`);
   lines.push(`  ${s.column.frame} column, strength model ${s.strength}; seed ${a.seed}; ${a.model.names.length} random variables`);
   lines.push(`  at the means: capacity ${formatQuantity(a.check.capacity, 'force', system)}, demand ${formatQuantity(a.check.demand, 'force', system)}, mean-value ratio demand / (θ × capacity) ${a.check.utilization.toFixed(3)}, K = ${a.check.effective_length_factor.toFixed(3)}`);
+  if (a.axes) {
+    const ax = a.axes;
+    const other = ax.governing === 'y' ? 'z' : 'y';
+    const means = ax.governingAtMeans === ax.governing ? 'also the smaller capacity at the means' : `at the means axis ${ax.governingAtMeans} has the smaller capacity`;
+    lines.push(`  governing axis: ${ax.governing} (FORM about each axis alone: β ${formatBeta(ax[ax.governing].beta)} about ${ax.governing}, ${formatBeta(ax[other].beta)} about ${other}; ${means}; the column fails when either does)`);
+  }
   lines.push(targetLine(a));
   lines.push(`  ${modelFactorLine(a)}`);
   if (a.scenario.evidence) lines.push(...evidenceLines(evidenceRows(a.scenario), system));

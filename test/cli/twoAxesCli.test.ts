@@ -102,6 +102,15 @@ describe('the facade demo: an H section by its dimensions, two axes, a corroded 
     expect(t.stdout.trim().split('\n').at(-1)).toBe('result: no rotational restraint about y needs to be relied on: the target β = 3.80 is met with pinned bottom and top connections');
   }, 90_000);
 
+  it('assess names the governing axis in the terminal and in result.json', async () => {
+    const t = await runCli(['assess', DEMO, '--methods', 'form', '--no-studies']);
+    expect(t.status).toBe(0);
+    expect(t.stdout).toMatch(/^  governing axis: y \(FORM about each axis alone: β \d\.\d\d about y, \d\.\d\d about z; at the means axis z has the smaller capacity; the column fails when either does\)$/m);
+    const j = JSON.parse((await runCli(['assess', DEMO, '--methods', 'form', '--no-studies', '--json'])).stdout);
+    expect(j.axes.governing).toBe('y');
+    expect(j.axes.z.beta).toBeGreaterThan(j.axes.y.beta);
+  }, 90_000);
+
   it('restraint --axis with a bad value, or z on a one-axis column: exit 2 naming --axis', async () => {
     for (const args of [['restraint', DEMO, '--axis', 'x'], ['restraint', 'scenarios/braced-base-plate.yaml', '--axis', 'z']]) {
       const r = await runCli(args);

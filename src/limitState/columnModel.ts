@@ -15,6 +15,7 @@ import { randomVariables } from '../scenario/variables.js';
 import { restraintRatio } from '../scenario/restraintRatio.js';
 import { flexibleComponents, seriesComponentPath, seriesStiffness } from '../scenario/seriesEnd.js';
 import { resolveStrengthModel, type ModelFactorUsed } from './strengthChoice.js';
+import { plasticZoneCapacityOf } from './plasticZoneStrength.js';
 
 /** Where a value comes from: x[index] when random, else the fixed value. */
 interface Slot {
@@ -163,7 +164,9 @@ export function buildColumnModel(given: Scenario, combination: LoadCombination =
   const top = endRatio(c.ends.top, 'column.ends.top', names, s);
   const frame = c.frame;
   const strength = s.strength;
-  const fast = makeFastCapacityFromRatio(frame, strength);
+  const plasticShape = strength === 'plastic-zone' ? c.section.shape : undefined;
+  if (strength === 'plastic-zone' && plasticShape === undefined) throw new Error('plastic-zone without column.section.shape: buildScenario lets no such scenario through');
+  const fast = plasticShape ? null : makeFastCapacityFromRatio(frame, strength);
   // A lateral spring that is zero everywhere lets the tabulated fast path serve every sample.
   const lateralAlwaysZero = lateral === null || (lateral.index < 0 && lateral.value === 0);
 
@@ -196,12 +199,20 @@ export function buildColumnModel(given: Scenario, combination: LoadCombination =
     // A sample on the zero bound of a stiffness or strength (uniform or truncnormal with min 0, a
     // far tail that underflows) carries no load: capacity 0 is the answer, not an error.
     if (!(EI > 0) || !(read(A, x) * read(fy, x) > 0)) return 0;
+    if (plasticShape) {
+      if (eccentric) effectiveEccentricity(x);
+      return plasticZoneCapacityOf(plasticShape, frame, {
+        E: e, fy: read(fy, x), EI, L, bow: read(bow, x), RBottom: bottom(x, EI), RTop: top(x, EI),
+        lateral: lateral === null ? 0 : (read(lateral, x) * L * L * L) / EI,
+        eccBottom: eccentric ? ecc[0] : 0, eccTop: eccentric ? ecc[1] : 0,
+      });
+    }
     if (eccentric) {
       effectiveEccentricity(x);
       // the tabulated path knows only the concentric column: an eccentric sample takes the exact one
       if (ecc[0] !== 0 || ecc[1] !== 0) return columnCapacity(strength, state(x)).capacity;
     }
-    if (lateralAlwaysZero) {
+    if (lateralAlwaysZero && fast) {
       return fast(e, read(fy, x), read(A, x), i, read(S, x), L, read(bow, x), bottom(x, EI), top(x, EI));
     }
     return columnCapacity(strength, state(x)).capacity;

@@ -75,10 +75,20 @@ function summariseMode(state: ColumnState, mode: number): ModeSummary | null {
   };
 }
 
+/** Pcr, K and c of the elastic column at a state (what columnCapacity returns besides the capacity). */
+function elasticColumn(state: ColumnState): { Pcr: number; K: number; c: number } {
+  const { Pcr, phi, K } = criticalLoad(state.E * state.I, state.L, state.frame, state.r);
+  return { Pcr, K, c: modeShape(state.frame, state.r, phi).curvatureFactor };
+}
+
 export function deterministicCheck(model: ColumnModel, modes = 3): CheckResult {
   const x = model.mean;
   const state = model.state(x);
-  const cap = columnCapacity(model.scenario.strength, state);
+  // plastic-zone is traced, not closed-form: Pcr, K and c are the elastic column's, the capacity the model's
+  const cap =
+    model.scenario.strength === 'plastic-zone'
+      ? { ...elasticColumn(state), capacity: model.capacity(x) }
+      : columnCapacity(model.scenario.strength, state);
   const theta = model.modelFactor(x);
   const demand = model.demand(x);
   const summaries: ModeSummary[] = [];

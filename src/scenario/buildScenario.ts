@@ -4,6 +4,7 @@
  */
 import { readCorrelation } from './readCorrelation.js';
 import { readEnds, type RawEnds } from './readEnds.js';
+import { readSectionShape } from './readSectionShape.js';
 import { fail, readScalar, type ReadContext } from './readScalar.js';
 import { PURE_NUMBER_UNIT, readQuantity, type DisplayUnit } from './quantity.js';
 import { ExpressionError } from './quantityExpression.js';
@@ -134,10 +135,13 @@ export function buildScenario(shape: ScenarioShape, lines: ReadonlyMap<string, n
   if (!(length > 0)) fail(ctx, ['column', 'length'], `must be greater than zero, got ${c.length}`);
 
   const positive = (kind: Parameters<typeof readScalar>[1]['kind']) => ({ kind, domain: 'positive' as const });
+  const area = readScalar(c.section.area, positive('area'), ['column', 'section', 'area'], ctx);
+  const inertia = readScalar(c.section.inertia, positive('inertia'), ['column', 'section', 'inertia'], ctx);
   const section = {
-    area: readScalar(c.section.area, positive('area'), ['column', 'section', 'area'], ctx),
-    inertia: readScalar(c.section.inertia, positive('inertia'), ['column', 'section', 'inertia'], ctx),
+    area,
+    inertia,
     sectionModulus: readScalar(c.section.section_modulus, positive('sectionModulus'), ['column', 'section', 'section_modulus'], ctx),
+    ...readSectionShape(c.section.shape, shape.strength, ctx, { area, inertia }),
   };
   const material = {
     E: readScalar(c.material.E, positive('stress'), ['column', 'material', 'E'], ctx),
@@ -148,7 +152,7 @@ export function buildScenario(shape: ScenarioShape, lines: ReadonlyMap<string, n
   const rawBow = c.imperfection?.bow;
   let bow: Scalar;
   if (rawBow === undefined) {
-    if (shape.strength === 'first-yield' || shape.strength.endsWith('-plus-bow')) {
+    if (shape.strength === 'first-yield' || shape.strength === 'plastic-zone' || shape.strength.endsWith('-plus-bow')) {
       fail(ctx, ['column', 'imperfection', 'bow'], `is required for strength ${shape.strength}: give the bow amplitude of the initial shape, e.g. bow: L/1000`);
     }
     bow = { kind: 'fixed', value: 0 };

@@ -28,6 +28,7 @@ export const STRENGTH_MODELS = [
   'first-yield-en1993-b-plus-bow',
   'first-yield-en1993-c-plus-bow',
   'first-yield-en1993-d-plus-bow',
+  'plastic-zone',
 ] as const;
 export const METHODS = ['form', 'sorm', 'is', 'mc', 'subset'] as const;
 export const DISPLAY_UNITS = ['si', 'us'] as const;
@@ -215,6 +216,20 @@ function choice<const T extends readonly [string, ...string[]]>(values: T, what:
   });
 }
 
+/** The section by its dimensions (scenario/readSectionShape.ts); I/H only for now. */
+const sectionShapeSchema = strict(
+  {
+    type: choice(['i'] as const, 'a section type'),
+    h: quantitySchema('length').meta({ description: 'overall depth' }),
+    b: quantitySchema('length').meta({ description: 'flange width' }),
+    tw: quantitySchema('length').meta({ description: 'web thickness' }),
+    tf: quantitySchema('length').meta({ description: 'flange thickness' }),
+    family: choice(['rolled', 'welded'] as const, 'a section family'),
+    axis: choice(['y', 'z'] as const, 'the buckling axis (y major, z minor)'),
+  },
+  'the section by its dimensions (type, h, b, tw, tf, family, axis)',
+);
+
 /** The beam a spring end connects to, for the joint classification (fixed quantities only). */
 const beamSchema = strict(
   {
@@ -340,8 +355,9 @@ export const scenarioShape = strict(
             area: quantityScalar('area'),
             inertia: quantityScalar('inertia'),
             section_modulus: quantityScalar('sectionModulus'),
+            shape: sectionShapeSchema.optional().meta({ description: 'the section by its dimensions (needed by strength: plastic-zone)' }),
           },
-          'the section (area, inertia, section_modulus about the buckling axis)',
+          'the section (area, inertia, section_modulus about the buckling axis; optional shape)',
         ),
         material: strict({ E: quantityScalar('stress'), fy: quantityScalar('stress') }, 'the material (E, fy)'),
         ends: strict(

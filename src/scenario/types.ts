@@ -26,7 +26,8 @@ export type StrengthModel =
   | 'first-yield-en1993-a-plus-bow'
   | 'first-yield-en1993-b-plus-bow'
   | 'first-yield-en1993-c-plus-bow'
-  | 'first-yield-en1993-d-plus-bow';
+  | 'first-yield-en1993-d-plus-bow'
+  | 'plastic-zone';
 export type Method = 'form' | 'sorm' | 'is' | 'mc' | 'subset';
 
 export type Scalar = { readonly kind: 'fixed'; readonly value: number } | { readonly kind: 'random'; readonly spec: DistSpec };
@@ -118,6 +119,17 @@ export interface AnalysisOptions {
   readonly workers?: number;
 }
 
+/** The section by its dimensions (m), for strength: plastic-zone (docs/plastic-zone.md). */
+export interface SectionShape {
+  readonly type: 'i';
+  readonly h: number;
+  readonly b: number;
+  readonly tw: number;
+  readonly tf: number;
+  readonly family: 'rolled' | 'welded';
+  readonly axis: 'y' | 'z';
+}
+
 export interface Scenario {
   readonly version: 1;
   readonly title: string;
@@ -129,7 +141,7 @@ export interface Scenario {
     /** m; always fixed (it defines the geometry and the meaning of L in expressions). */
     readonly length: number;
     readonly frame: Frame;
-    readonly section: { readonly area: Scalar; readonly inertia: Scalar; readonly sectionModulus: Scalar };
+    readonly section: { readonly area: Scalar; readonly inertia: Scalar; readonly sectionModulus: Scalar; readonly shape?: SectionShape };
     readonly material: { readonly E: Scalar; readonly fy: Scalar };
     readonly ends: {
       readonly bottom: End;

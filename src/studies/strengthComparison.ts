@@ -36,7 +36,9 @@ export interface StrengthModelBeta {
  * result, reused for the chosen model so that the table and the verdict show the same β.
  */
 export function betaByStrengthModel(given: Scenario, chosenForm: FormResult): StrengthModelBeta[] {
-  const models = COMPARED_STRENGTH_MODELS.includes(given.strength) ? COMPARED_STRENGTH_MODELS : [...COMPARED_STRENGTH_MODELS, given.strength];
+  // plastic-zone joins the comparison when the scenario gives the section by its dimensions
+  const compared = given.column.section.shape ? [...COMPARED_STRENGTH_MODELS, 'plastic-zone' as const] : COMPARED_STRENGTH_MODELS;
+  const models = compared.includes(given.strength) ? compared : [...compared, given.strength];
   const noBow = given.column.bow.kind === 'fixed' && given.column.bow.value === 0;
   const eccentric = hasEccentricity(given);
   return models.map((strength) => {

@@ -11,6 +11,7 @@ import { runMechanicsBench } from './mechanicsBench.js';
 import { runReliabilityBench } from './reliabilityBench.js';
 import { runSweepBench } from './sweepBench.js';
 import { runValidBench } from './validBench.js';
+import { runPlasticZoneBench } from './plasticZoneBench.js';
 import { runKernelBench } from './kernelBench.js';
 import { runSweepCostBench } from './sweepCostBench.js';
 import { runFormCallsBench, runStartupBench } from './startupBench.js';
@@ -38,6 +39,12 @@ async function main(): Promise<void> {
     const seed = Number(process.argv[4] ?? 1);
     console.log(`\n## valid scenarios (bench/validScenarios.ts)`);
     for (const line of await runValidBench(count, seed)) console.log(line);
+    return;
+  }
+  if (process.argv[2] === 'plastic-zone') {
+    // `node dist/bench/run.js plastic-zone`: the full model, the table build, a table read and the table's error
+    console.log('\n## plastic-zone strength model (direct and through the table)');
+    runPlasticZoneBench();
     return;
   }
   if (process.argv[2] === 'cost') {
@@ -69,6 +76,8 @@ async function main(): Promise<void> {
     rareColumnRecipe: recipeFor('timber-store-post.yaml'),
   });
   for (const line of lines) console.log(line);
+  console.log('\n## plastic-zone strength model (direct; the table build: `node dist/bench/run.js plastic-zone`)');
+  runPlasticZoneBench({ points: 12, grid: false });
 }
 
 main().catch((err) => {

@@ -15,7 +15,7 @@ import { randomVariables } from '../scenario/variables.js';
 import { restraintRatio } from '../scenario/restraintRatio.js';
 import { flexibleComponents, seriesComponentPath, seriesStiffness } from '../scenario/seriesEnd.js';
 import { resolveStrengthModel, type ModelFactorUsed } from './strengthChoice.js';
-import { plasticZoneCapacityOf } from './plasticZoneStrength.js';
+import { makePlasticZoneCapacity } from './plasticZoneStrength.js';
 
 /** Where a value comes from: x[index] when random, else the fixed value. */
 interface Slot {
@@ -167,6 +167,10 @@ export function buildColumnModel(given: Scenario, combination: LoadCombination =
   const plasticShape = strength === 'plastic-zone' ? c.section.shape : undefined;
   if (strength === 'plastic-zone' && plasticShape === undefined) throw new Error('plastic-zone without column.section.shape: buildScenario lets no such scenario through');
   const fast = plasticShape ? null : makeFastCapacityFromRatio(frame, strength);
+  const plasticCapacity = plasticShape
+    ? makePlasticZoneCapacity(plasticShape, frame, s.analysis.plasticZone ?? 'direct', (n, path) =>
+        process.stderr.write(`stanchion: building the plastic-zone table for this section (${n} full evaluations, once; cached as ${path})\n`))
+    : null;
   // A lateral spring that is zero everywhere lets the tabulated fast path serve every sample.
   const lateralAlwaysZero = lateral === null || (lateral.index < 0 && lateral.value === 0);
 
@@ -199,9 +203,9 @@ export function buildColumnModel(given: Scenario, combination: LoadCombination =
     // A sample on the zero bound of a stiffness or strength (uniform or truncnormal with min 0, a
     // far tail that underflows) carries no load: capacity 0 is the answer, not an error.
     if (!(EI > 0) || !(read(A, x) * read(fy, x) > 0)) return 0;
-    if (plasticShape) {
+    if (plasticCapacity) {
       if (eccentric) effectiveEccentricity(x);
-      return plasticZoneCapacityOf(plasticShape, frame, {
+      return plasticCapacity({
         E: e, fy: read(fy, x), EI, L, bow: read(bow, x), RBottom: bottom(x, EI), RTop: top(x, EI),
         lateral: lateral === null ? 0 : (read(lateral, x) * L * L * L) / EI,
         eccBottom: eccentric ? ecc[0] : 0, eccTop: eccentric ? ecc[1] : 0,

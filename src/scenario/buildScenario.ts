@@ -210,6 +210,7 @@ export function buildScenario(shape: ScenarioShape, lines: ReadonlyMap<string, n
       ...(a.is_samples !== undefined ? { isSamples: a.is_samples } : {}),
       ...(a.subset_samples !== undefined ? { subsetSamples: a.subset_samples } : {}),
       ...(a.workers !== undefined ? { workers: a.workers } : {}),
+      ...(a.plastic_zone !== undefined ? { plasticZone: a.plastic_zone } : {}),
     },
     displayUnits: shape.display_units ?? 'si',
     units,

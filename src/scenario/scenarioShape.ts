@@ -411,8 +411,11 @@ export const scenarioShape = strict(
         is_samples: integer('a number of importance-sampling samples', 1).optional(),
         subset_samples: integer('a number of samples per subset level', 1).optional(),
         workers: integer('a number of worker threads', 1).optional(),
+        plastic_zone: choice(['direct', 'table'] as const, 'how strength: plastic-zone is evaluated')
+          .optional()
+          .meta({ description: 'direct: the full model at every evaluation (default); table: a tabulated response built once per section and cached on disk (docs/plastic-zone.md)' }),
       },
-      'the analysis options (seed, methods, mc_samples, is_samples, subset_samples, workers)',
+      'the analysis options (seed, methods, mc_samples, is_samples, subset_samples, workers, plastic_zone)',
     ).optional(),
     display_units: choice(DISPLAY_UNITS, 'a unit system for reports').optional(),
   },

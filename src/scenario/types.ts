@@ -117,6 +117,8 @@ export interface AnalysisOptions {
   readonly isSamples?: number;
   readonly subsetSamples?: number;
   readonly workers?: number;
+  /** strength: plastic-zone evaluated by the full model (default) or its cached table */
+  readonly plasticZone?: 'direct' | 'table';
 }
 
 /** The section by its dimensions (m), for strength: plastic-zone (docs/plastic-zone.md). */

@@ -69,4 +69,23 @@ describe('strength: plastic-zone in a scenario', () => {
     expect(direct).toBeLessThan(fy.capacity);
     expect(check.critical_load).toBe(fy.critical_load);
   });
+
+  it('check --json runs with the section by its dimensions (exit 0, strength plastic-zone)', () => {
+    const r = runCliProcess(['check', '-', '--json'], plastic(withShape(demo)));
+    expect(r.status).toBe(0);
+    const check = (JSON.parse(r.stdout) as { check: { strength: string; capacity: number; utilization: number } }).check;
+    expect(check.strength).toBe('plastic-zone');
+    expect(check.capacity).toBeGreaterThan(0);
+    expect(check.utilization).toBeCloseTo(620e3 / check.capacity, 12); // the demo's model_factor has mean 1
+  });
+
+  it('reads analysis.plastic_zone (direct by default, or table) and refuses anything else', () => {
+    const s = loadScenario(withShape(demo), 'fy.yaml');
+    expect(s.column.section.shape).toMatchObject({ type: 'i', family: 'rolled', axis: 'z' });
+    expect(s.analysis.plasticZone).toBeUndefined();
+    const t = loadScenario(withShape(demo).replace('  seed: 20261201', '  seed: 20261201\n  plastic_zone: table'), 't.yaml');
+    expect(t.analysis.plasticZone).toBe('table');
+    const e = inputError(withShape(demo).replace('  seed: 20261201', '  seed: 20261201\n  plastic_zone: tabel'));
+    expect(e.field).toBe('analysis.plastic_zone');
+  });
 });

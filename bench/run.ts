@@ -90,7 +90,7 @@ async function main(): Promise<void> {
     rareColumnRecipe: recipeFor('timber-store-post.yaml'),
   });
   for (const line of lines) console.log(line);
-  console.log('\n## plastic-zone strength model (direct; the table build: `node dist/bench/run.js plastic-zone`)');
+  console.log('\n## plastic-zone strength model (direct, and through the table when cached; the table build: `node dist/bench/run.js plastic-zone`)');
   runPlasticZoneBench({ points: 12, grid: false });
 }
 

@@ -19,6 +19,7 @@ import { flexibleComponents, seriesComponentPath, seriesStiffness } from '../sce
 import { resolveStrengthModel, type ModelFactorUsed } from './strengthChoice.js';
 import { read, slotOf, type Slot } from './slots.js';
 import { makeColumnBlockG, type ColumnBlockG } from './columnBlock.js';
+import { PATH_NOISE } from '../plasticZone/plasticZoneCapacity.js';
 import { makePlasticZoneCapacity, makePlasticZoneDirect, type PlasticZoneCapacityFn, type PlasticZoneSample } from './plasticZoneStrength.js';
 
 export interface ColumnModel {
@@ -50,6 +51,8 @@ export interface ColumnModel {
   state(x: Float64Array): ColumnState;
   /** the principal axes checked: y alone, or y and z (capacity is the smaller) */
   readonly axes: readonly AxisModel[];
+  /** relative size of the jumps in `capacity` (0: smooth; plastic-zone traced at every evaluation: PATH_NOISE) */
+  readonly capacityNoise: number;
 }
 
 export type AxisName = 'y' | 'z';
@@ -362,7 +365,7 @@ export function buildColumnModel(given: Scenario, combination: LoadCombination =
     const full = makePlasticZoneDirect(geometry.dimensions, name, frame);
     const sampled = makePlasticZoneCapacity(geometry.dimensions, name, frame, how, (n, path) =>
       process.stderr.write(
-        `stanchion: building the plastic-zone table of this section about ${name} (${n} full evaluations, about 2 minutes, once; cached as ${path})\n`,
+        `stanchion: building the plastic-zone table of this section about ${name} (${n} full evaluations, up to a few minutes, once; cached as ${path})\n`,
       ));
     return { sampled, full };
   }
@@ -465,5 +468,6 @@ export function buildColumnModel(given: Scenario, combination: LoadCombination =
     utilization: (x) => demand(x) / (modelFactor(x) * capacity(x)),
     state,
     axes,
+    capacityNoise: s.strength === 'plastic-zone' && (s.analysis.plasticZone ?? 'table') === 'direct' ? PATH_NOISE : 0,
   };
 }

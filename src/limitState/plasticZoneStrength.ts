@@ -3,7 +3,7 @@
  * `column.section` by its dimensions (sections/): its family chooses the residual stresses (an I/H
  * with a root fillet r > 0 is rolled, r = 0 welded; hollow sections and solid rectangles have none),
  * and the sampled corrosion loss is taken off the dimensions exactly as sections/sectionDimensions.ts
- * does. The fibre model has sharp corners: no root fillets or corner radii (docs/plastic-zone.md §7).
+ * does. The fibre model has sharp corners: no root fillets or corner radii (docs/plastic-zone.md §6).
  * The end springs are the scenario's R = kL/EI turned back into k with the scenario's E·I, so a spring
  * means the same stiffness in every model. The bow's sign is free (|e0|; with eccentricities the worse
  * side), and a bow below MIN_ETA·W/A is raised to it (capacityTable.ts says why).

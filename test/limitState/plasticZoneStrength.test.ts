@@ -13,6 +13,9 @@ import { sectionWriter, type SectionDimensions } from '../../src/sections/sectio
 import { InputError } from '../../src/scenario/inputError.js';
 import { loadScenario } from '../../src/scenario/loadScenario.js';
 import { runCliOnText } from '../cli/runCli.js';
+import { problemFromModel } from '../../src/limitState/columnRecipe.js';
+import { form } from '../../src/reliability/form.js';
+import { betaByStrengthModel } from '../../src/studies/strengthComparison.js';
 
 const demo = readFileSync(new URL('../../scenarios/plastic-zone-column.yaml', import.meta.url), 'utf8');
 const braced = readFileSync(new URL('../../scenarios/braced-base-plate.yaml', import.meta.url), 'utf8');
@@ -145,6 +148,18 @@ describe('strength: plastic-zone with the section by its dimensions', () => {
     expect(check.axes.y.strength).toBe('plastic-zone');
     expect(check.axes.z.strength).toBe('plastic-zone');
     expect(check.capacity).toBeGreaterThan(0);
+  });
+
+  it('joins the β-by-strength-model table of a section by its dimensions; not with a line load', () => {
+    // the chosen model's row reuses the assessment's FORM (here a stand-in), so no plastic-zone run is needed
+    const s = loadScenario(demo, 'pz.yaml');
+    const stand = form(problemFromModel(buildColumnModel(loadScenario(demo.replace(/^strength: plastic-zone/m, 'strength: en1993-b'), 'b.yaml'))));
+    const rows = betaByStrengthModel(s, stand);
+    expect(rows.at(-1)).toMatchObject({ strength: 'plastic-zone', chosen: true, beta: stand.beta });
+    expect(rows.find((r) => r.strength === 'en1993-b')!.beta).toBeCloseTo(stand.beta, 6);
+    const facade = loadScenario(readFileSync(new URL('../../scenarios/facade-h-column.yaml', import.meta.url), 'utf8'), 'f.yaml');
+    const f = form(problemFromModel(buildColumnModel(facade)));
+    expect(betaByStrengthModel(facade, f).find((r) => r.strength === 'plastic-zone')).toMatchObject({ beta: null, note: 'takes no line load, top force or out-of-plumb' });
   });
 
   it('reads analysis.plastic_zone (table by default, or direct) and refuses anything else', () => {

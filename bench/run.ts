@@ -12,6 +12,7 @@ import { runMechanicsBench } from './mechanicsBench.js';
 import { runReliabilityBench } from './reliabilityBench.js';
 import { runSweepBench } from './sweepBench.js';
 import { runValidBench } from './validBench.js';
+import { runPlasticZoneBench } from './plasticZoneBench.js';
 import { runKernelBench } from './kernelBench.js';
 import { runMeasurementBench } from './measurementBench.js';
 import { runSweepCostBench } from './sweepCostBench.js';
@@ -54,6 +55,12 @@ async function main(): Promise<void> {
     for (const line of await runSweepCostBench(join(root, 'scenarios', 'braced-base-plate.yaml'))) console.log(line);
     return;
   }
+  if (process.argv[2] === 'plastic-zone') {
+    // `node dist/bench/run.js plastic-zone`: the full model, the table build, a table read and the table's error
+    console.log('\n## plastic-zone strength model (direct and through the table)');
+    runPlasticZoneBench();
+    return;
+  }
   if (process.argv[2] === 'cost') {
     // `node dist/bench/run.js cost`: the Monte Carlo kernel (with the whole-process ratio) and the sweep cost only
     const demo = join(root, 'scenarios', 'braced-base-plate.yaml');
@@ -83,6 +90,8 @@ async function main(): Promise<void> {
     rareColumnRecipe: recipeFor('timber-store-post.yaml'),
   });
   for (const line of lines) console.log(line);
+  console.log('\n## plastic-zone strength model (direct, and through the table when cached; the table build: `node dist/bench/run.js plastic-zone`)');
+  runPlasticZoneBench({ points: 12, grid: false });
 }
 
 main().catch((err) => {

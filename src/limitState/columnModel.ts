@@ -21,6 +21,8 @@ import { read, slotOf, type Slot } from './slots.js';
 import { makeColumnBlockG, type ColumnBlockG } from './columnBlock.js';
 import { sectionZone } from './sectionZone.js';
 import type { SoundSection } from '../mechanics/types.js';
+import { PATH_NOISE } from '../plasticZone/plasticZoneCapacity.js';
+import { makePlasticZoneCapacity, makePlasticZoneDirect, type PlasticZoneCapacityFn, type PlasticZoneSample } from './plasticZoneStrength.js';
 
 export interface ColumnModel {
   /** the scenario as its strength model sees it (resolveStrengthModel): default model factor in, ignored bow out */
@@ -51,6 +53,8 @@ export interface ColumnModel {
   state(x: Float64Array): ColumnState;
   /** the principal axes checked: y alone, or y and z (capacity is the smaller) */
   readonly axes: readonly AxisModel[];
+  /** relative size of the jumps in `capacity` (0: smooth; plastic-zone traced at every evaluation: PATH_NOISE) */
+  readonly capacityNoise: number;
 }
 
 export type AxisName = 'y' | 'z';
@@ -65,6 +69,8 @@ export interface AxisModel {
   state(x: Float64Array): ColumnState;
   /** capacity when the section is already written for x (the hot path) */
   capacityAfterWrite(x: Float64Array): number;
+  /** capacity at full accuracy: plastic-zone by its full model even when sampling reads its table; else `capacity` */
+  capacityFull(x: Float64Array): number;
 }
 
 interface AxisParts {
@@ -87,6 +93,9 @@ interface AxisParts {
  */
 interface SectionSource {
   write(x: Float64Array): void;
+  /** the corrosion loss per face at x (0 for a section given by its properties) */
+  primaryLoss(x: Float64Array): number;
+  secondaryLoss(x: Float64Array): number;
   A(x: Float64Array): number;
   Iy(x: Float64Array): number;
   Sy(x: Float64Array): number;
@@ -105,6 +114,8 @@ function sectionSource(s: Scenario, names: readonly string[]): SectionSource {
     const Sz = section.sectionModulusZ === undefined ? S : slotOf(section.sectionModulusZ, 'column.section.section_modulus_z', names);
     return {
       write: () => {},
+      primaryLoss: () => 0,
+      secondaryLoss: () => 0,
       A: (x) => read(A, x),
       Iy: (x) => read(I, x),
       Sy: (x) => read(S, x),
@@ -120,6 +131,8 @@ function sectionSource(s: Scenario, names: readonly string[]): SectionSource {
   const secondary = corrosion.length === 0 ? null : corrosion.length === 1 ? primary : slotOf(corrosion[1]!.scalar, corrosion[1]!.path, names);
   return {
     write: (x) => writer(props, primary === null ? 0 : read(primary, x), secondary === null ? 0 : read(secondary, x)),
+    primaryLoss: (x) => (primary === null ? 0 : read(primary, x)),
+    secondaryLoss: (x) => (secondary === null ? 0 : read(secondary, x)),
     A: () => props[AREA],
     Iy: () => props[INERTIA_Y],
     Sy: () => props[ELASTIC_MODULUS_Y],
@@ -254,7 +267,8 @@ export function buildColumnModel(given: Scenario, combination: LoadCombination =
     const { I, S, bow, bottom, top, lateral, strength, sound } = parts;
     const A = section.A;
     const axisEccentric = parts.eccentric && eccentric;
-    const fast = makeFastCapacityFromRatio(frame, strength);
+    const plastic = strength === 'plastic-zone' ? plasticZoneAxis(name) : null;
+    const fast = plastic === null ? makeFastCapacityFromRatio(frame, strength) : null;
     // A lateral spring that is zero everywhere lets the tabulated fast path serve every sample.
     const lateralAlwaysZero = lateral === null || (lateral.index < 0 && lateral.value === 0);
     const state = (x: Float64Array): ColumnState => {
@@ -287,6 +301,8 @@ export function buildColumnModel(given: Scenario, combination: LoadCombination =
       // A sample on the zero bound of a stiffness or strength (uniform or truncnormal with min 0, a
       // far tail that underflows) carries no load: capacity 0 is the answer, not an error.
       if (!(EI > 0) || !(A(x) * read(fy, x) > 0)) return 0;
+      // the plastic-zone model takes the corroded section over the whole length (a zone gives it no credit)
+      if (plastic !== null) return plastic.sampled(plasticSample(x, e, EI));
       // the tabulated path knows only the prismatic column: a stepped member takes the exact one
       if (sound !== null) return columnCapacity(strength, state(x)).capacity;
       if (axisEccentric) {
@@ -294,7 +310,7 @@ export function buildColumnModel(given: Scenario, combination: LoadCombination =
         // the tabulated path knows only the concentric column: an eccentric sample takes the exact one
         if (ecc[0] !== 0 || ecc[1] !== 0 || side[0] !== 0 || side[1] !== 0) return columnCapacity(strength, state(x)).capacity;
       }
-      if (lateralAlwaysZero) {
+      if (lateralAlwaysZero && fast !== null) {
         return fast(e, read(fy, x), A(x), i, S(x), L, read(bow, x), bottom(x, EI), top(x, EI));
       }
       return columnCapacity(strength, state(x)).capacity;
@@ -311,8 +327,57 @@ export function buildColumnModel(given: Scenario, combination: LoadCombination =
         return state(x);
       },
       capacityAfterWrite: capacity,
+      capacityFull:
+        plastic === null
+          ? (x) => {
+              section.write(x);
+              return capacity(x);
+            }
+          : (x) => {
+              section.write(x);
+              const e = read(E, x);
+              const EI = e * I(x);
+              if (!(EI > 0) || !(A(x) * read(fy, x) > 0)) return 0;
+              return plastic.full(plasticSample(x, e, EI));
+            },
     };
+    /** the plastic-zone model's input at x (one object per axis, refilled: no allocation per call) */
+    function plasticSample(x: Float64Array, e: number, EI: number): PlasticZoneSample {
+      if (axisEccentric) effectiveEccentricity(x);
+      const p = plasticInput;
+      p.E = e;
+      p.fy = read(fy, x);
+      p.EI = EI;
+      p.bow = read(bow, x);
+      p.RBottom = bottom(x, EI);
+      p.RTop = top(x, EI);
+      p.lateral = lateral === null ? 0 : (read(lateral, x) * L * L * L) / EI;
+      p.eccBottom = axisEccentric ? ecc[0] : 0;
+      p.eccTop = axisEccentric ? ecc[1] : 0;
+      p.primaryLoss = section.primaryLoss(x);
+      p.secondaryLoss = section.secondaryLoss(x);
+      return p;
+    }
   };
+
+  const plasticInput: PlasticZoneSample = {
+    E: 0, fy: 0, EI: 0, L, bow: 0, RBottom: 0, RTop: 0, lateral: 0, eccBottom: 0, eccTop: 0, primaryLoss: 0, secondaryLoss: 0,
+  };
+  /**
+   * strength: plastic-zone about one axis (docs/plastic-zone.md): `sampled` as analysis.plastic_zone
+   * asks (default the cached table), `full` always the full model (check at the means).
+   */
+  function plasticZoneAxis(name: AxisName): { sampled: PlasticZoneCapacityFn; full: PlasticZoneCapacityFn } {
+    const geometry = c.section.geometry;
+    if (geometry === undefined) throw new Error('plastic-zone without the section by its dimensions: buildScenario lets no such scenario through');
+    const how = s.analysis.plasticZone ?? 'table';
+    const full = makePlasticZoneDirect(geometry.dimensions, name, frame);
+    const sampled = makePlasticZoneCapacity(geometry.dimensions, name, frame, how, (n, path) =>
+      process.stderr.write(
+        `stanchion: building the plastic-zone table of this section about ${name} (${n} full evaluations, up to a few minutes, once; cached as ${path})\n`,
+      ));
+    return { sampled, full };
+  }
 
   const axisY = makeAxis('y', {
     I: section.Iy,
@@ -414,5 +479,6 @@ export function buildColumnModel(given: Scenario, combination: LoadCombination =
     utilization: (x) => demand(x) / (modelFactor(x) * capacity(x)),
     state,
     axes,
+    capacityNoise: s.strength === 'plastic-zone' && (s.analysis.plasticZone ?? 'table') === 'direct' ? PATH_NOISE : 0,
   };
 }

@@ -22,6 +22,8 @@ export function problemFromModel(model: ColumnModel): ReliabilityProblem {
     transform: natafTransform(model.dists, model.correlation, model.names),
     g: model.g,
     ...(model.gBlock ? { gBlock: { of: model.g, evaluate: model.gBlock } } : {}),
+    // a traced capacity jumps a little where its path changes steps: at the mean resistance's scale
+    ...(model.capacityNoise > 0 ? { gNoise: model.capacityNoise * Math.abs(model.modelFactor(model.mean) * model.capacity(model.mean)) } : {}),
   };
 }
 

@@ -7,7 +7,7 @@ import { modeShape } from '../mechanics/modeShape.js';
 import { columnCapacity, usesSteppedSolver } from '../mechanics/columnCapacity.js';
 import { steppedCriticalLoad, steppedMode } from '../mechanics/steppedColumn.js';
 import { fixityFactor } from '../mechanics/restraint.js';
-import type { ColumnState } from '../mechanics/types.js';
+import type { CapacityResult, ColumnState } from '../mechanics/types.js';
 import type { AxisModel, AxisName, ColumnModel } from './columnModel.js';
 import { meanOf } from '../scenario/readScalar.js';
 import { namedProperties, PROPERTY_COUNT, type SectionProperties } from '../sections/sectionProperties.js';
@@ -149,11 +149,26 @@ export interface AxesCheck {
   governing: AxisName;
 }
 
-function axisCheck(axis: AxisModel, x: Float64Array, demand: number, theta: number): { check: AxisCheck; state: ColumnState } {
+/** Pcr, K and c of the elastic column at a state (what columnCapacity returns besides the capacity). */
+function elasticColumn(state: ColumnState): { Pcr: number; K: number; c: number } {
+  const { Pcr, phi, K } = criticalLoad(state.E * state.I, state.L, state.frame, state.r);
+  return { Pcr, K, c: modeShape(state.frame, state.r, phi).curvatureFactor };
+}
+
+/**
+ * The capacity about one axis at x with Pcr, K and c. plastic-zone is traced, not closed-form: Pcr, K
+ * and c are the elastic column's, the capacity the full model's (never its table, which `check` does not build).
+ */
+function axisCapacity(axis: AxisModel, state: ColumnState, x: Float64Array): CapacityResult {
+  return axis.strength === 'plastic-zone' ? { ...elasticColumn(state), capacity: axis.capacityFull(x) } : columnCapacity(axis.strength, state);
+}
+
+function axisCheck(axis: AxisModel, x: Float64Array, demand: number, theta: number): { check: AxisCheck; state: ColumnState; cap: CapacityResult } {
   const state = axis.state(x);
-  const cap = columnCapacity(axis.strength, state);
+  const cap = axisCapacity(axis, state, x);
   return {
     state,
+    cap,
     check: {
       axis: axis.name,
       strength: axis.strength,
@@ -210,6 +225,7 @@ function coreAt(model: ColumnModel, x: Float64Array) {
   let state: ColumnState;
   let strength = model.scenario.strength;
   let axes: AxesCheck | null = null;
+  let cap: CapacityResult;
   if (model.axes.length === 2) {
     const y = axisCheck(model.axes[0]!, x, demand, theta);
     const z = axisCheck(model.axes[1]!, x, demand, theta);
@@ -217,10 +233,11 @@ function coreAt(model: ColumnModel, x: Float64Array) {
     axes = { y: y.check, z: z.check, governing: governing.check.axis };
     state = governing.state;
     strength = governing.check.strength as typeof strength;
+    cap = governing.cap;
   } else {
     state = model.state(x);
+    cap = axisCapacity(model.axes[0]!, state, x);
   }
-  const cap = columnCapacity(strength, state);
   const core: CheckCore = { critical_load: cap.Pcr, effective_length_factor: cap.K, capacity: cap.capacity, demand, utilization: demand / (theta * cap.capacity) };
   return { core, cap, theta, state, strength, axes };
 }

@@ -24,8 +24,13 @@ export function capacityFromPcr(model: StrengthModel, A: number, S: number, fy: 
       return enCapacity(EN_IMPERFECTION[kind.curve!], A, fy, Pcr);
     case 'equivalent-bow':
       return equivalentBowCapacity(EN_IMPERFECTION[kind.curve!], A, S, fy, Pcr, c, kind.usesBow ? bow : 0);
+    case 'plastic-zone':
+      throw new RangeError(PLASTIC_ZONE_ELSEWHERE);
   }
 }
+
+/** plastic-zone needs the section by its dimensions, which ColumnState does not carry. */
+const PLASTIC_ZONE_ELSEWHERE = 'plastic-zone is not a closed-form model: limitState/plasticZoneStrength.ts evaluates it';
 
 export function isStrengthModel(s: string): s is StrengthModel {
   return strengthModelKind(s) !== undefined;
@@ -68,6 +73,8 @@ export function columnCapacity(model: StrengthModel, s: ColumnState): CapacityRe
   const actions = t.line === 0 && topRatio === 0 ? {} : { q: t.line * s.L * s.L, h: topRatio * s.L };
   const kind = strengthModelKind(model)!;
   switch (kind.family) {
+    case 'plastic-zone':
+      throw new RangeError(PLASTIC_ZONE_ELSEWHERE);
     case 'first-yield': {
       const capacity = eccentricFirstYieldCapacity({
         A: s.A, S: s.S, fy: s.fy, EI: s.E * s.I, L: s.L, frame: s.frame, r: s.r, bow: s.bow, eB: e.bottom, eT: e.top, ...actions, Pcr, mode,

@@ -144,6 +144,7 @@ export function makeFastCapacity(frame: Frame, model: StrengthModel): FastCapaci
 
 /** As makeFastCapacity, but the last two arguments are the restraint ratios R = kL/EI. */
 export function makeFastCapacityFromRatio(frame: Frame, model: StrengthModel): FastCapacity {
+  if (model === 'plastic-zone') throw new RangeError('plastic-zone has no tabulated closed form (limitState/plasticZoneStrength.ts evaluates it)');
   fastTable(frame);
   if (model === 'first-yield') {
     if (frame === 'braced') {

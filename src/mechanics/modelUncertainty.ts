@@ -49,6 +49,19 @@ const EN_CURVE: ModelUncertaintyDefault = {
     'background of EN 1993-1-1 6.3.1.2: Beer & Schulz, Construction Métallique 7(3), 1970 (the European column curves); Sedlacek & Müller, J. Constr. Steel Res. 62 (2006) 1047–1059, evaluation of column tests to EN 1990 Annex D supporting γ_M1 = 1.0 (from memory)',
 };
 
+/**
+ * A plastic-zone simulation with the measured bow and the family's residual stresses is a
+ * best-estimate model: no bias, and a scatter against tests of the order of that of the column
+ * tests about the maximum-strength curves themselves.
+ */
+const PLASTIC_ZONE: ModelUncertaintyDefault = {
+  dist: 'lognormal',
+  mean: 1.0,
+  cov: 0.06,
+  source:
+    'maximum-strength columns computed with measured imperfections against tests: Bjorhovde, PhD thesis, Lehigh University 1972, and SSRC Guide (Ziemian ed., 6th ed., 2010) ch. 3; Beer & Schulz, Construction Métallique 7(3), 1970 (from memory; engineering judgement: bias 1.00, CoV 0.06 where the section, bow and residual stresses are those of the column)',
+};
+
 export function defaultModelUncertainty(model: StrengthModel): ModelUncertaintyDefault {
   const kind = strengthModelKind(model);
   if (!kind) throw new RangeError(`unknown strength model '${String(model)}'`);
@@ -59,6 +72,8 @@ export function defaultModelUncertainty(model: StrengthModel): ModelUncertaintyD
       return AISC_E3;
     case 'en1993':
       return EN_CURVE;
+    case 'plastic-zone':
+      return PLASTIC_ZONE;
     case 'equivalent-bow':
       // reproduces curve X exactly (without the measured bow), so it inherits the curve's uncertainty
       return {

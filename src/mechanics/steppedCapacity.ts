@@ -57,6 +57,9 @@ export function steppedColumnCapacity(model: StrengthModel, s: ColumnState, soun
       );
       break;
     }
+    case 'plastic-zone':
+      // the fibre model is not a closed form: limitState routes it before any stepped member
+      throw new Error('the plastic-zone model has no stepped closed form');
   }
   return { capacity, Pcr, K, c };
 }

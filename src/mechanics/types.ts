@@ -74,7 +74,8 @@ export type StrengthModel =
   | 'first-yield-en1993-a-plus-bow'
   | 'first-yield-en1993-b-plus-bow'
   | 'first-yield-en1993-c-plus-bow'
-  | 'first-yield-en1993-d-plus-bow';
+  | 'first-yield-en1993-d-plus-bow'
+  | 'plastic-zone';
 
 /** The models a scenario may name, in the order the outputs list them. */
 export const STRENGTH_MODELS: readonly StrengthModel[] = [
@@ -95,7 +96,14 @@ export const STRENGTH_MODELS: readonly StrengthModel[] = [
   'first-yield-en1993-b-plus-bow',
   'first-yield-en1993-c-plus-bow',
   'first-yield-en1993-d-plus-bow',
+  'plastic-zone',
 ];
+
+/**
+ * The models evaluated here in closed form from Pcr (all but `plastic-zone`, which needs the section
+ * by its dimensions and is traced by plasticZone/ through limitState/plasticZoneStrength.ts).
+ */
+export const CLOSED_FORM_STRENGTH_MODELS: readonly StrengthModel[] = STRENGTH_MODELS.filter((m) => m !== 'plastic-zone');
 
 /** Everything the strength models need (SI). bow = e0, either sign (|e0| is used). */
 export interface ColumnState {

@@ -84,6 +84,21 @@ function noDesignPoint(r: HlrfOutcome, originFails: boolean): boolean {
 }
 
 
+/**
+ * Differences and tolerances for a g with jumps of about `gNoise` (ReliabilityProblem.gNoise), or
+ * null for a smooth g. With ε = gNoise/|g(0)|: central differences with h = ∛ε (the balance of the
+ * truncation h²·g''' against the jump ε/h, for g''' of the order of g(0)), kept within [1e-3, 0.1];
+ * |g|/|g(0)| < 3ε (the search cannot tell g from 0 much closer than its jumps; β moves by about
+ * 3ε·β at most); the distance from the gradient line within 3ε/h, a few times the gradient's own
+ * relative error (β is stationary there, so it moves by the square of that).
+ */
+function noisySettings(gNoise: number | undefined, g0: number): { scheme: DifferenceScheme; step: number; tolG: number; tolU: number } | null {
+  if (!(gNoise !== undefined && gNoise > 0 && Math.abs(g0) > 0)) return null;
+  const eps = gNoise / Math.abs(g0);
+  const step = Math.min(0.1, Math.max(1e-3, Math.cbrt(eps)));
+  return { scheme: 'central', step, tolG: Math.max(1e-8, 3 * eps), tolU: Math.max(1e-7, (3 * eps) / step) };
+}
+
 export function form(problem: ReliabilityProblem, opts: FormOptions = {}): FormResult {
   const n = problem.transform.n;
   if (problem.names.length !== n) throw new Error(`problem has ${problem.names.length} names for ${n} variables`);
@@ -91,13 +106,14 @@ export function form(problem: ReliabilityProblem, opts: FormOptions = {}): FormR
   const origin = new Float64Array(n);
   const g0 = G(origin);
   const originFails = g0 <= 0;
-  const scheme = opts.differences ?? 'forward';
+  const noisy = noisySettings(problem.gNoise, g0);
+  const scheme = opts.differences ?? noisy?.scheme ?? 'forward';
   const settings: HlrfSettings = {
     maxIterations: opts.maxIterations ?? 100,
-    tolG: opts.tolG ?? 1e-8,
-    tolU: opts.tolU ?? 1e-7,
+    tolG: opts.tolG ?? noisy?.tolG ?? 1e-8,
+    tolU: opts.tolU ?? noisy?.tolU ?? 1e-7,
     scheme,
-    step: opts.step ?? DEFAULT_STEP[scheme],
+    step: opts.step ?? noisy?.step ?? DEFAULT_STEP[scheme],
     gScale: Math.abs(g0) > 0 ? Math.abs(g0) : 1,
     betaSign: originFails ? -1 : 1,
     curvature: opts.curvature ?? true,
@@ -173,10 +189,12 @@ export function form(problem: ReliabilityProblem, opts: FormOptions = {}): FormR
   const others: DesignPointCandidate[] = [];
   const x = new Float64Array(n);
   if (!originFails) {
+    // one point found twice lands within the search's own tolerance of itself (wider for a noisy g)
+    const same = Math.max(1e-3, settings.tolU) * b;
     for (const r of found) {
       if (r === best || !r.converged) continue;
-      if (norm(r.u.map((v, i) => v - best.u[i])) <= 1e-3 * b) continue;
-      if (others.some((o) => norm(r.u.map((v, i) => v - o.designPointU[i])) <= 1e-3 * b)) continue;
+      if (norm(r.u.map((v, i) => v - best.u[i])) <= same) continue;
+      if (others.some((o) => norm(r.u.map((v, i) => v - o.designPointU[i])) <= same)) continue;
       const beta = norm(r.u);
       if (!(beta > 0) || normalSf(beta) < SYSTEM_PF_SHARE * normalSf(betaBest)) continue;
       problem.transform.toPhysical(r.u, x);

@@ -19,6 +19,16 @@ export interface SormOptions {
   step?: number;
 }
 
+/**
+ * 1e-3 for a smooth g. For a g with jumps of gNoise (ReliabilityProblem.gNoise) a curvature
+ * κ = g''/|∇g| read from second differences errs by about gNoise/(h²|∇g|): h keeps that below 0.01,
+ * within [1e-3, 0.5].
+ */
+function hessianStep(gNoise: number | undefined, gradientNorm: number): number {
+  if (!(gNoise !== undefined && gNoise > 0 && gradientNorm > 0)) return 1e-3;
+  return Math.min(0.5, Math.max(1e-3, Math.sqrt((100 * gNoise) / gradientNorm)));
+}
+
 /** The three formulas differing by more than this share is worth a warning. */
 const DISAGREEMENT = 0.1;
 
@@ -32,7 +42,7 @@ export function sorm(problem: ReliabilityProblem, formResult: FormResult, opts: 
     return { beta, pf: formResult.pf, used: 'form', breitung: null, hohenbichlerRackwitz: null, tvedt: null, curvatures: [], calls: 0, warnings };
   }
   const G = checkedLimitState(problem, 'SORM');
-  const hessian = finiteDifferenceHessian(G, Float64Array.from(formResult.designPointU), opts.step ?? 1e-3);
+  const hessian = finiteDifferenceHessian(G, Float64Array.from(formResult.designPointU), opts.step ?? hessianStep(problem.gNoise, norm(formResult.gradientU)));
   const curvatures = principalCurvatures(hessian, formResult.alpha, norm(formResult.gradientU));
 
   const b = breitung(beta, curvatures);

@@ -26,6 +26,12 @@ export interface ReliabilityProblem {
   g: LimitState;
   /** Optional block form of g (see BlockLimitState). */
   gBlock?: BlockLimitState;
+  /**
+   * How far g may jump between neighbouring points, in g's own units (0 or absent: smooth to
+   * rounding). A g traced by an iterative model (a path to a peak in steps) is piecewise smooth with
+   * small jumps; FORM then takes central differences with a step and tolerances above the jumps (form.ts).
+   */
+  gNoise?: number;
 }
 
 /**

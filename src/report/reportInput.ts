@@ -44,7 +44,8 @@ export type StrengthModelName =
   | 'first-yield-en1993-a-plus-bow'
   | 'first-yield-en1993-b-plus-bow'
   | 'first-yield-en1993-c-plus-bow'
-  | 'first-yield-en1993-d-plus-bow';
+  | 'first-yield-en1993-d-plus-bow'
+  | 'plastic-zone';
 
 export interface ReportMeta {
   toolVersion: string; // package version, e.g. '0.1.0'

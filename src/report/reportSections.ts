@@ -29,6 +29,8 @@ const STRENGTH_TEXT: Record<StrengthModelName, string> = {
   'en1993-c': 'χ·A·fy of EN 1993-1-1 clause 6.3.1.2, buckling curve c, no partial factor (the bow is not used)',
   'en1993-d': 'χ·A·fy of EN 1993-1-1 clause 6.3.1.2, buckling curve d, no partial factor (the bow is not used)',
   ...equivalentBowTexts(),
+  'plastic-zone':
+    'peak axial load of a plastic-zone simulation about each principal axis: nonlinear beam elements with fibre sections cut from the section\'s dimensions less any corrosion loss (elastic–perfectly plastic, no root fillets or corner radii), the residual stresses of the section family (rolled I/H with a root radius, welded without one, none for hollow and solid sections), the bow affine to the first buckling mode, the end springs and eccentricities (docs/plastic-zone.md)',
 };
 
 /** The first-yield forms with the equivalent bow of EN 1993-1-1 5.3.2(11), with and without the measured bow. */

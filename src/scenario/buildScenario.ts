@@ -73,7 +73,7 @@ const ZERO: Scalar = { kind: 'fixed', value: 0 };
 
 function readBow(raw: Parameters<typeof readScalar>[0] | undefined, strength: string, length: number, path: PathSegment[], ctx: ReadContext): Scalar {
   if (raw !== undefined) return readScalar(raw, { kind: 'length', domain: 'any', columnLength: length }, path, ctx);
-  if (strength === 'first-yield' || strength.endsWith('-plus-bow')) {
+  if (strength === 'first-yield' || strength === 'plastic-zone' || strength.endsWith('-plus-bow')) {
     fail(ctx, path, `is required for strength ${strength}: give the bow amplitude of the initial shape, e.g. bow: L/1000`);
   }
   return ZERO;
@@ -131,6 +131,10 @@ function readActions(raw: RawLoad, name: string, shape: ScenarioShape, ctx: Read
     if (strength.startsWith('first-yield-en1993-')) {
       fail(ctx, path, `strength model '${strength}' has no check for ${what}: use strength: first-yield, en1993-X (EN 1993-1-1 Eq. 6.61) or aisc360-e3 (AISC 360 H1-1), or drop it`);
     }
+    // the plastic-zone model loads the column by its ends only (axial force and end couples)
+    if (strength === 'plastic-zone' && what !== 'applied end moments') {
+      fail(ctx, path, `strength model 'plastic-zone' takes end eccentricities and end moments but not ${what}: use strength: first-yield, en1993-X or aisc360-e3, or drop it`);
+    }
   };
   const out: { moments?: Load['moments']; transverse?: Scalar; horizontal?: Scalar } = {};
   if (raw.moments !== undefined) {
@@ -174,6 +178,9 @@ function readOutOfPlumb(shape: ScenarioShape, length: number, ctx: ReadContext):
   if (raw === 'en1993') ctx.units['column.imperfection.out_of_plumb'] = PURE_NUMBER_UNIT;
   if (nonZero(scalar)) {
     if (shape.column.frame !== 'sway') fail(ctx, path, 'an out-of-plumb applies only to a sway frame (a braced column\'s ends do not move sideways relative to each other; its imperfection is the bow); remove it or set frame: sway');
+    if (shape.strength === 'plastic-zone') {
+      fail(ctx, path, `strength model 'plastic-zone' takes no out-of-plumb (its bow is affine to the first buckling mode, which includes the sway): use strength: first-yield, en1993-X or aisc360-e3, or drop it`);
+    }
     if (shape.strength.startsWith('first-yield-en1993-')) {
       fail(ctx, path, `strength model '${shape.strength}' has no check for an out-of-plumb: use strength: first-yield, en1993-X (EN 1993-1-1 Eq. 6.61) or aisc360-e3 (AISC 360 H1-1), or drop it`);
     }
@@ -234,6 +241,9 @@ export function buildScenario(shape: ScenarioShape, lines: ReadonlyMap<string, n
 
   const positive = (kind: Parameters<typeof readScalar>[1]['kind']) => ({ kind, domain: 'positive' as const });
   const section = readSection(c.section, length, c.axis_z !== undefined, ctx);
+  if (shape.strength === 'plastic-zone' && section.geometry === undefined) {
+    fail(ctx, ['column', 'section', 'shape'], 'is missing: strength plastic-zone needs the section by its dimensions (its fibres and residual stresses), e.g. shape: i, h: 200 mm, b: 200 mm, tw: 9 mm, tf: 15 mm, r: 18 mm (docs/sections.md)');
+  }
   const material = {
     E: readScalar(c.material.E, positive('stress'), ['column', 'material', 'E'], ctx),
     fy: readScalar(c.material.fy, positive('stress'), ['column', 'material', 'fy'], ctx),
@@ -297,6 +307,7 @@ export function buildScenario(shape: ScenarioShape, lines: ReadonlyMap<string, n
       ...(a.is_samples !== undefined ? { isSamples: a.is_samples } : {}),
       ...(a.subset_samples !== undefined ? { subsetSamples: a.subset_samples } : {}),
       ...(a.workers !== undefined ? { workers: a.workers } : {}),
+      ...(a.plastic_zone !== undefined ? { plasticZone: a.plastic_zone } : {}),
     },
     displayUnits: shape.display_units ?? 'si',
     units,

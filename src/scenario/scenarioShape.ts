@@ -28,6 +28,7 @@ export const STRENGTH_MODELS = [
   'first-yield-en1993-b-plus-bow',
   'first-yield-en1993-c-plus-bow',
   'first-yield-en1993-d-plus-bow',
+  'plastic-zone',
 ] as const;
 export const METHODS = ['form', 'sorm', 'is', 'mc', 'subset'] as const;
 export const DISPLAY_UNITS = ['si', 'us'] as const;
@@ -585,8 +586,11 @@ export const scenarioShape = strict(
         is_samples: integer('a number of importance-sampling samples', 1).optional(),
         subset_samples: integer('a number of samples per subset level', 1).optional(),
         workers: integer('a number of worker threads', 1).optional(),
+        plastic_zone: choice(['direct', 'table'] as const, 'how strength: plastic-zone is evaluated')
+          .optional()
+          .meta({ description: 'table (default): a tabulated response built once per section, axis and frame and cached on disk, the full model where the table does not reach; direct: the full model at every evaluation (docs/plastic-zone.md)' }),
       },
-      'the analysis options (seed, methods, mc_samples, is_samples, subset_samples, workers)',
+      'the analysis options (seed, methods, mc_samples, is_samples, subset_samples, workers, plastic_zone)',
     ).optional(),
     display_units: choice(DISPLAY_UNITS, 'a unit system for reports').optional(),
     evidence: z

@@ -71,7 +71,7 @@ loads:                               # axial compression; name them as you like
 
 model_factor: {dist: lognormal, mean: 1.0, cov: 0.06}   # capacity model uncertainty (no unit); leave out for the strength model's default
 
-# strength: first-yield | aisc360-e3 | en1993-a0 | en1993-a | en1993-b | en1993-c | en1993-d
+# strength: first-yield | aisc360-e3 | en1993-a0 | en1993-a | en1993-b | en1993-c | en1993-d | plastic-zone
 # first-yield-en1993-X (equivalent bow of EN 1993-1-1 5.3.2(11)), first-yield-en1993-X-plus-bow (plus the bow above)
 strength: first-yield
 

@@ -27,7 +27,8 @@ export type StrengthModel =
   | 'first-yield-en1993-a-plus-bow'
   | 'first-yield-en1993-b-plus-bow'
   | 'first-yield-en1993-c-plus-bow'
-  | 'first-yield-en1993-d-plus-bow';
+  | 'first-yield-en1993-d-plus-bow'
+  | 'plastic-zone';
 export type Method = 'form' | 'sorm' | 'is' | 'mc' | 'subset';
 
 export type Scalar = { readonly kind: 'fixed'; readonly value: number } | { readonly kind: 'random'; readonly spec: DistSpec };
@@ -148,6 +149,8 @@ export interface AnalysisOptions {
   readonly isSamples?: number;
   readonly subsetSamples?: number;
   readonly workers?: number;
+  /** strength: plastic-zone evaluated through its cached table (default; the full model where the table does not reach) or by the full model at every evaluation */
+  readonly plasticZone?: 'direct' | 'table';
 }
 
 export interface Scenario {

@@ -25,6 +25,11 @@ function hasEccentricity(s: Scenario): boolean {
   );
 }
 
+/** Some load has a line load or a top force that is not a fixed zero, or the column an out-of-plumb (what plastic-zone does not take). */
+function hasSideActions(s: Scenario): boolean {
+  return nonZero(s.column.outOfPlumb) || s.loads.some((l) => nonZero(l.transverse) || nonZero(l.horizontal));
+}
+
 /** The models every assessment compares (the equivalent-bow forms repeat their curve's β; they are added only when chosen). */
 export const COMPARED_STRENGTH_MODELS: readonly StrengthModel[] = ['first-yield', 'aisc360-e3', 'en1993-a0', 'en1993-a', 'en1993-b', 'en1993-c', 'en1993-d'];
 
@@ -46,7 +51,9 @@ export interface StrengthModelBeta {
  * result, reused for the chosen model so that the table and the verdict show the same β.
  */
 export function betaByStrengthModel(given: Scenario, chosenForm: FormResult): StrengthModelBeta[] {
-  const models = COMPARED_STRENGTH_MODELS.includes(given.strength) ? COMPARED_STRENGTH_MODELS : [...COMPARED_STRENGTH_MODELS, given.strength];
+  // plastic-zone joins the comparison when the scenario gives the section by its dimensions
+  const compared = given.column.section.geometry ? [...COMPARED_STRENGTH_MODELS, 'plastic-zone' as const] : COMPARED_STRENGTH_MODELS;
+  const models = compared.includes(given.strength) ? compared : [...compared, given.strength];
   const noBow = given.column.bow.kind === 'fixed' && given.column.bow.value === 0;
   const eccentric = hasEccentricity(given);
   return models.map((strength) => {
@@ -57,6 +64,9 @@ export function betaByStrengthModel(given: Scenario, chosenForm: FormResult): St
     }
     if (eccentric && strengthModelKind(strength)?.family === 'equivalent-bow') {
       return { strength, beta: null, pf: null, converged: false, modelFactor: resolved.modelFactor, chosen, note: 'has no check for eccentric loads or transverse actions' };
+    }
+    if (strength === 'plastic-zone' && hasSideActions(given)) {
+      return { strength, beta: null, pf: null, converged: false, modelFactor: resolved.modelFactor, chosen, note: 'takes no line load, top force or out-of-plumb' };
     }
     const r = chosen ? chosenForm : scenarioForm(resolved.scenario);
     return { strength, beta: r.beta, pf: r.pf, converged: r.converged, modelFactor: resolved.modelFactor, chosen };

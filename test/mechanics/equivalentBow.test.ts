@@ -76,7 +76,7 @@ describe('first yield with the equivalent bow of EN 1993-1-1 5.3.2(11)', () => {
 describe('strength model names and their default model uncertainty', () => {
   // common practice: the code curves and the plain equivalent bow ignore the sampled bow; first yield and the plus-bow forms use it
   it('knows which models use the bow', () => {
-    expect(STRENGTH_MODELS.filter(strengthUsesBow)).toEqual(['first-yield', ...CURVES.map((c) => `first-yield-en1993-${c}-plus-bow`)]);
+    expect(STRENGTH_MODELS.filter(strengthUsesBow)).toEqual(['first-yield', ...CURVES.map((c) => `first-yield-en1993-${c}-plus-bow`), 'plastic-zone']);
     expect(strengthModelKind('en1993-e')).toBeUndefined();
     expect(strengthModelKind('first-yield-en1993-c')).toEqual({ family: 'equivalent-bow', curve: 'c', usesBow: false });
   });

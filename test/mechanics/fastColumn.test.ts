@@ -6,7 +6,7 @@ import {
 } from '../../src/mechanics/fastColumn.js';
 import { modeShape } from '../../src/mechanics/modeShape.js';
 import { ratioFromFixity } from '../../src/mechanics/restraint.js';
-import { STRENGTH_MODELS, type Frame } from '../../src/mechanics/types.js';
+import { CLOSED_FORM_STRENGTH_MODELS, type Frame } from '../../src/mechanics/types.js';
 
 // The oracle is the exact characteristic-equation solver, itself checked against
 // source: Timoshenko & Gere 1961 ch. 2 and docs/verification.md §M2 Tables 2a/2b [V] (criticalLoad.test.ts).
@@ -55,7 +55,7 @@ describe.each(['braced', 'sway'] as Frame[])('fast path, %s', (frame) => {
 
   it('capacity agrees with columnCapacity for every model within 1e-6', () => {
     const E = 200e9, fy = 355e6, A = 7640e-6, I = 25.1e-6, S = 281e-6;
-    for (const model of STRENGTH_MODELS) {
+    for (const model of CLOSED_FORM_STRENGTH_MODELS) {
       const fast = makeFastCapacityFromRatio(frame, model);
       let worst = 0;
       for (let i = 0; i < 2000; i++) {

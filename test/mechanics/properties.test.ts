@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { criticalLoad } from '../../src/mechanics/criticalLoad.js';
 import { columnCapacity } from '../../src/mechanics/columnCapacity.js';
-import { STRENGTH_MODELS, type Frame } from '../../src/mechanics/types.js';
+import { CLOSED_FORM_STRENGTH_MODELS, type Frame } from '../../src/mechanics/types.js';
 
 // Property tests of the solver over generated restraint (fast-check, fixed seed).
 const R = fc.oneof(fc.constant(0), fc.double({ min: 1e-3, max: 1e4, noNaN: true }), fc.constant(Infinity));
@@ -60,7 +60,7 @@ describe('restrained-column properties', () => {
     // common practice: a column's axial resistance never exceeds A·fy
     fc.assert(
       fc.property(
-        fc.constantFrom(...STRENGTH_MODELS),
+        fc.constantFrom(...CLOSED_FORM_STRENGTH_MODELS),
         fc.constantFrom<Frame>('braced', 'sway'),
         R,
         R,

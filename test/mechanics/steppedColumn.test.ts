@@ -3,7 +3,7 @@ import { criticalPhi } from '../../src/mechanics/criticalLoad.js';
 import { columnCapacity } from '../../src/mechanics/columnCapacity.js';
 import { steppedCriticalPhi, steppedMode } from '../../src/mechanics/steppedColumn.js';
 import { feEigenvaluesExtrapolated } from '../../src/fe/feCriticalLoads.js';
-import { STRENGTH_MODELS, type ColumnState, type EndRestraint, type Frame } from '../../src/mechanics/types.js';
+import { CLOSED_FORM_STRENGTH_MODELS, type ColumnState, type EndRestraint, type Frame } from '../../src/mechanics/types.js';
 
 const rel = (a: number, b: number): number => Math.abs(a - b) / Math.abs(b);
 
@@ -152,7 +152,7 @@ describe('capacity with a corroded zone', () => {
   // ~1e-4 as the zone grows (seen at R = 2 at both ends). Every other model falls strictly.
   it('lies between the whole-length loss and no loss, and falls as the zone grows, for every strength model', () => {
     const cases: [Frame, EndRestraint][] = [['braced', { bottom: 0.35, top: 0 }], ['braced', { bottom: 2, top: 2 }], ['sway', { bottom: 20, top: 1 }]];
-    for (const model of STRENGTH_MODELS) {
+    for (const model of CLOSED_FORM_STRENGTH_MODELS) {
       for (const [frame, r] of cases) {
         const none = columnCapacity(model, state(frame, r)).capacity;
         const whole = columnCapacity(model, { ...state(frame, r, { I: 0, height: 0 }) }).capacity;
@@ -170,7 +170,7 @@ describe('capacity with a corroded zone', () => {
   });
 
   it('a zone whose section equals the sound one gives the prismatic capacity, for every strength model', () => {
-    for (const model of STRENGTH_MODELS) {
+    for (const model of CLOSED_FORM_STRENGTH_MODELS) {
       for (const [frame, r] of ENDS.filter(([f, e]) => !(f === 'sway' && e.bottom === 0 && e.top === 0))) {
         const plain = state(frame, r);
         const stepped: ColumnState = { ...plain, sound: { from: 1.3, A: plain.A, I: plain.I, S: plain.S } };

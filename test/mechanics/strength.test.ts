@@ -3,7 +3,7 @@ import { aiscCriticalStress, AISC_BRANCH_LIMIT } from '../../src/mechanics/aisc3
 import { columnCapacity } from '../../src/mechanics/columnCapacity.js';
 import { EN_IMPERFECTION, enReductionFactor, type EnCurve } from '../../src/mechanics/en1993.js';
 import { firstYieldCapacity } from '../../src/mechanics/firstYield.js';
-import { STRENGTH_MODELS, type ColumnState, type EndRestraint, type Frame } from '../../src/mechanics/types.js';
+import { CLOSED_FORM_STRENGTH_MODELS, type ColumnState, type EndRestraint, type Frame } from '../../src/mechanics/types.js';
 
 /** |x − v| within half a unit of the last quoted digit (plus 1 % of it for the rounding of the reference) */
 const nearQuoted = (x: number, v: number, unit: number): void => {
@@ -105,7 +105,7 @@ describe('AISC 360-16 §E3', () => {
 describe('columnCapacity', () => {
   // source: docs/verification.md §M2 Table 2b R = 0 [V]: a sway column with no restraint is a mechanism — every model gives 0
   it('mechanism gives zero capacity for every model', () => {
-    for (const model of STRENGTH_MODELS) {
+    for (const model of CLOSED_FORM_STRENGTH_MODELS) {
       const res = columnCapacity(model, state(4, 0.004, 'sway', { bottom: 0, top: 0 }));
       expect(res.capacity).toBe(0);
       expect(res.Pcr).toBe(0);
@@ -114,7 +114,7 @@ describe('columnCapacity', () => {
   });
   // common practice: more restraint never lowers the capacity
   it('is monotone in restraint for every model', () => {
-    for (const model of STRENGTH_MODELS) {
+    for (const model of CLOSED_FORM_STRENGTH_MODELS) {
       for (const frame of ['braced', 'sway'] as const) {
         let prev = -1;
         for (const R of [0.01, 0.3, 2, 20, 500, Infinity]) {

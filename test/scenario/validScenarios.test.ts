@@ -19,7 +19,11 @@ describe('generated valid scenarios', () => {
     const all = texts.join('\n');
     for (const form of ['dist: normal', 'dist: lognormal', 'dist: gumbel', 'dist: uniform', 'dist: truncnormal', 'dist: weibull', 'dist: beta',
       'fixity:', 'alignment_g:', 'rotation:', 'pinned', 'fixed', 'lateral:', 'frame: sway', 'frame: braced', 'correlation:', 'model_factor:',
-      'first-yield', 'aisc360-e3', 'en1993-a0', 'en1993-a\n', 'en1993-b', 'en1993-c', 'en1993-d']) {
+      'first-yield', 'aisc360-e3', 'en1993-a0', 'en1993-a\n', 'en1993-b', 'en1993-c', 'en1993-d',
+      // sections by dimensions, corrosion, the second axis, load actions, evidence about the structure, test plans
+      'shape: i', 'shape: rhs', 'shape: chs', 'shape: rect', 'corrosion:', 'flange:', 'zone:', 'axis_z:', 'inertia_z:', 'curve:',
+      'eccentricity:', 'moments:', 'transverse:', 'horizontal:', 'out_of_plumb:',
+      'type: survived_load', 'type: rotation_test', 'type: frequency', 'test_plans:']) {
       expect(all, form).toContain(form);
     }
     // nearly all of them pass the reader (the rest must be InputErrors, checked below)

@@ -10,7 +10,9 @@ import { loadScenario } from '../../src/scenario/loadScenario.js';
 import { randomVariables } from '../../src/scenario/variables.js';
 
 const SEED = 20261202;
-const COUNT = 24;
+// fewer than the 24 of the concentric-only generator: a share of these now run the measurement update,
+// survived loads, test plans and a restraint study per axis, each far dearer than a plain scenario
+const COUNT = 16;
 
 describe('generated valid scenarios', () => {
   test('the generator is seeded: same seed, same text; and it covers the input forms', () => {
@@ -45,5 +47,5 @@ describe('generated valid scenarios', () => {
     expect(r.internalErrors.length, report).toBe(0);
     expect(r.results + r.inputErrors).toBe(COUNT);
     expect(r.results).toBeGreaterThan(COUNT / 2);
-  }, 120_000);
+  }, 240_000);
 });

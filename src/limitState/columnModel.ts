@@ -202,6 +202,15 @@ function finiteMargin(g: number): number {
   return g > G_LIMIT ? G_LIMIT : g < -G_LIMIT ? -G_LIMIT : g;
 }
 
+/**
+ * θ·capacity − load, held finite (g, and any other margin on the same resistance: a survived load's h).
+ * θ underflowing to 0 against an overflowing capacity is no resistance, not 0·∞ = NaN.
+ */
+export function resistanceMargin(theta: number, capacity: number, load: number): number {
+  const resistance = theta === 0 ? 0 : theta * capacity;
+  return finiteMargin(finiteMargin(resistance) - finiteMargin(load));
+}
+
 /** `combination` (default: defaultCombination) sets each load's period; see loads/. */
 /**
  * `onlyAxis`: the capacity (and g) about that axis alone, for the failure probability of each axis;
@@ -469,12 +478,7 @@ export function buildColumnModel(given: Scenario, combination: LoadCombination =
     capacity,
     demand,
     modelFactor,
-    g: (x) => {
-      const theta = modelFactor(x);
-      // θ underflowing to 0 against an overflowing capacity is no resistance, not 0·∞ = NaN
-      const resistance = theta === 0 ? 0 : theta * capacity(x);
-      return finiteMargin(finiteMargin(resistance) - finiteMargin(demand(x)));
-    },
+    g: (x) => resistanceMargin(modelFactor(x), capacity(x), demand(x)),
     gBlock,
     utilization: (x) => demand(x) / (modelFactor(x) * capacity(x)),
     state,

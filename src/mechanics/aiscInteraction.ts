@@ -1,6 +1,7 @@
 import { aiscCapacity } from './aisc360.js';
 import { ECC_LENGTH, eccentricCoefficientsInto, maxAbsTwoSinusoids } from './beamColumn.js';
 import { brentRoot } from './brent.js';
+import { SMALL_LOAD } from './eccentricFirstYield.js';
 import type { EccentricColumn } from './eccentricFirstYield.js';
 
 /**
@@ -29,6 +30,9 @@ export type AiscInteractionColumn = Omit<EccentricColumn, 'bow' | 'mode'>;
 /** Largest |M(x)| (N·m) over the height at P (0 < P < Pcr) under the end couples, line load and top force (no bow). scratch: ECC_LENGTH + 1. */
 export function secondOrderEndCoupleMoment(col: AiscInteractionColumn, P: number, scratch: Float64Array): number {
   if (P <= 0) return 0;
+  // linear in P far below Pcr, where the closed form loses its digits (eccentricFirstYield.ts, SMALL_LOAD)
+  const floor = SMALL_LOAD * col.Pcr;
+  if (P < floor) return (P / floor) * secondOrderEndCoupleMoment(col, floor, scratch);
   const phi = col.L * Math.sqrt(P / col.EI);
   const q = col.q ?? 0;
   const k = eccentricCoefficientsInto(scratch, col.frame, col.r, phi, col.eB, col.eT, q, col.h ?? 0);

@@ -69,6 +69,9 @@ export function columnCapacity(model: StrengthModel, s: ColumnState): CapacityRe
   if (e.bottom === 0 && e.top === 0 && t.line === 0 && topRatio === 0) {
     return { capacity: capacityFromPcr(model, s.A, s.S, s.fy, s.bow, Pcr, c), Pcr, K, c };
   }
+  // no section modulus (or no area, no strength) takes no bending: any first-order moment, which grows
+  // with the load, yields it at once (the interaction checks would divide by zero)
+  if (!(s.S > 0 && s.A > 0 && s.fy > 0)) return { capacity: 0, Pcr, K, c };
   // per unit axial load as lengths (every action scaled with the axial load): q = (w/P) L², h = (H/P) L
   const actions = t.line === 0 && topRatio === 0 ? {} : { q: t.line * s.L * s.L, h: topRatio * s.L };
   const kind = strengthModelKind(model)!;

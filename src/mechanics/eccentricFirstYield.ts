@@ -29,6 +29,21 @@ export interface EccentricColumn {
  */
 export function firstYieldMargin(col: EccentricColumn, P: number, scratch: Float64Array): number {
   if (P <= 0) return -col.fy;
+  // far below Pcr the moment is linear in P to within P/Pcr: take it from SMALL_LOAD·Pcr, where the closed
+  // form is still well conditioned (at φ → 0 its terms of order q/φ² cancel to rounding noise)
+  const floor = SMALL_LOAD * col.Pcr;
+  if (P < floor) return P / col.A + (P / floor) * secondOrderMaxMoment(col, floor, scratch) / col.S - col.fy;
+  return P / col.A + secondOrderMaxMoment(col, P, scratch) / col.S - col.fy;
+}
+
+/**
+ * Below this share of Pcr the second-order moment is scaled linearly from its value at this share
+ * (the amplification 1/(1 − P/Pcr) differs from 1 by less than 1e-6 there).
+ */
+export const SMALL_LOAD = 1e-6;
+
+/** max_x |M(x)| at the axial load P > 0: end couples, line load, top force and the amplified bow on its unfavourable side. */
+function secondOrderMaxMoment(col: EccentricColumn, P: number, scratch: Float64Array): number {
   const phi = col.L * Math.sqrt(P / col.EI);
   const q = col.q ?? 0;
   const k = eccentricCoefficientsInto(scratch, col.frame, col.r, phi, col.eB, col.eT, q, col.h ?? 0);
@@ -41,7 +56,7 @@ export function firstYieldMargin(col: EccentricColumn, P: number, scratch: Float
   const m = col.mode;
   const up = maxAbsTwoSinusoids(P, A, B, phi, bowQ, m.A, m.B, m.phi, at, offset);
   const down = bowQ === 0 ? up : maxAbsTwoSinusoids(P, A, B, phi, -bowQ, m.A, m.B, m.phi, at, offset);
-  return P / col.A + Math.max(up, down) / col.S - col.fy;
+  return Math.max(up, down);
 }
 
 const SCAN = 16;

@@ -6,7 +6,7 @@
  * survived load tested that real strength). The loads in g are independent of the survived loads.
  * The survived load acts like the scenario's loads (the same eccentricities, if any).
  */
-import { buildColumnModel } from '../limitState/columnModel.js';
+import { buildColumnModel, resistanceMargin } from '../limitState/columnModel.js';
 import { makeDistribution } from '../probability/makeDistribution.js';
 import { natafTransform } from '../probability/nataf.js';
 import { conditionalCheck, conditionalForm, conditionalMonteCarlo, type ConditionalCheck, type ConditionalMcResult, type ConditionedProblem } from '../reliability/conditionalFailure.js';
@@ -58,7 +58,8 @@ export function survivalProblem(s: Scenario): ConditionedProblem {
       const p = sl.index < 0 ? sl.value : x[sl.index];
       if (p > largest) largest = p;
     }
-    return model.modelFactor(x) * model.capacity(x) - largest;
+    // held finite as g is: far out in u-space θ and the capacity may overflow together
+    return resistanceMargin(model.modelFactor(x), model.capacity(x), largest);
   };
   return { names, transform: natafTransform(dists, correlation, names), g: model.g, h };
 }

@@ -74,7 +74,10 @@ function quantileSorted(xs: readonly number[], p: number): number {
   const pos = p * (xs.length - 1);
   const i = Math.floor(pos);
   const f = pos - i;
-  return i + 1 < xs.length ? xs[i] + f * (xs[i + 1] - xs[i]) : xs[i];
+  if (i + 1 >= xs.length || f === 0 || xs[i] === xs[i + 1]) return xs[i];
+  // β = ±∞ (an outcome with failure certain or impossible) has no straight line to a neighbour: the nearer one
+  if (!Number.isFinite(xs[i]) || !Number.isFinite(xs[i + 1])) return f < 0.5 ? xs[i] : xs[i + 1];
+  return xs[i] + f * (xs[i + 1] - xs[i]);
 }
 
 export function planLabel(p: TestPlan): string {

@@ -141,6 +141,18 @@ function sectionSource(s: Scenario, names: readonly string[]): SectionSource {
   };
 }
 
+/**
+ * R = kL/EI. Far out in u-space both k and EI can overflow (∞/∞) or vanish (0/0): a rigid spring
+ * stays rigid and anything else is taken as no restraint, so R is never NaN.
+ */
+function ratioOf(k: number, L: number, EI: number): number {
+  const R = (k * L) / EI;
+  return R === R ? R : k === Infinity ? Infinity : 0;
+}
+
+/** Beyond this E·I (N·m²) the column's formulas overflow; real columns are below 1e12. */
+const EI_OVERFLOW = 1e250;
+
 /** An end as a function of (x, EI) → R = kL/EI. */
 type EndRatio = (x: Float64Array, EI: number) => number;
 
@@ -153,7 +165,7 @@ function endRatio(end: End, path: string, names: readonly string[], s: Scenario)
       return () => Infinity;
     case 'rotation': {
       const k = slotOf(end.k, `${path}.rotation`, names);
-      return (x, EI) => (read(k, x) * L) / EI;
+      return (x, EI) => ratioOf(read(k, x), L, EI);
     }
     case 'ratio': {
       const input = slotOf(end.input, `${path}.${end.from}`, names);
@@ -172,7 +184,7 @@ function endRatio(end: End, path: string, names: readonly string[], s: Scenario)
       const k = new Float64Array(n); // reused on every call: no allocation on the hot path
       return (x, EI) => {
         for (let i = 0; i < n; i++) k[i] = read(parts[i], x);
-        return (seriesStiffness(k, n) * L) / EI;
+        return ratioOf(seriesStiffness(k, n), L, EI);
       };
     }
   }
@@ -310,6 +322,9 @@ export function buildColumnModel(given: Scenario, combination: LoadCombination =
       // A sample on the zero bound of a stiffness or strength (uniform or truncnormal with min 0, a
       // far tail that underflows) carries no load: capacity 0 is the answer, not an error.
       if (!(EI > 0) || !(A(x) * read(fy, x) > 0)) return 0;
+      // An overflowed stiffness (E or I pushed to the largest doubles by a far FORM step, nowhere
+      // near a design point) cannot buckle: the squash load, rather than ∞/∞ = NaN in the formulas.
+      if (!(EI < EI_OVERFLOW)) return A(x) * read(fy, x);
       // the plastic-zone model takes the corroded section over the whole length (a zone gives it no credit)
       if (plastic !== null) return plastic.sampled(plasticSample(x, e, EI));
       // the tabulated path knows only the prismatic column: a stepped member takes the exact one

@@ -64,6 +64,9 @@ export function endSpringMoments(EI: number, L: number, frame: Frame, r: EndRest
   if (!Number.isFinite(P)) throw new RangeError(`axial load must be finite (got ${P})`);
   if (!Number.isFinite(bow)) throw new RangeError(`bow must be finite (got ${bow})`);
   const e0 = Math.abs(bow);
+  // a section that is gone (a corrosion loss through the plates) or overflowed at a far design point
+  // has no equilibrium to report: the values are written as unknown, not an error
+  if (!(EI > 0 && Number.isFinite(EI))) return unstable(P, e0, 0);
   const { Pcr, phi } = criticalLoad(EI, L, frame, r);
   if (!(Pcr > 0) || P >= Pcr) return unstable(P, e0, Pcr);
   const ratio = P / Pcr;

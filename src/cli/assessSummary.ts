@@ -38,7 +38,7 @@ function characteristicLines(a: Assessment, system: UnitSystem): string[] {
       fmt(r.design, r.variable),
       r.partialFactor === null ? '—' : r.partialFactor.toFixed(3),
       r.code ? `${r.code.symbol} = ${r.code.value.toFixed(2)}` : '',
-      r.designToMean.toFixed(3),
+      r.designToMean === null ? '—' : r.designToMean.toFixed(3),
     ]);
   }
   const rf = c.resistance;

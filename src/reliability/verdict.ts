@@ -120,7 +120,10 @@ export function verdict(input: VerdictInput, opts: VerdictOptions = {}): Verdict
     let deltaBeta: number | null = null;
     if (ref && ref.method !== method) {
       difference = pf / ref.pf - 1;
-      deltaBeta = betaOf(pf) - betaOf(ref.pf);
+      const b = betaOf(pf);
+      const bRef = betaOf(ref.pf);
+      // both certain (pf = 1 or 0: β = ∓∞ alike) differ by nothing, not by ∞ − ∞
+      deltaBeta = b === bRef ? 0 : b - bRef;
       const gap = Math.abs(Math.log(pf / ref.pf));
       const allowed = cov === null ? Math.max(k * ref.s, RELATIVE_FLOOR) : k * Math.hypot(ref.s, logSd(cov));
       consistent = gap <= allowed;

@@ -48,7 +48,7 @@ function characteristicJson(a: Assessment): Record<string, unknown> {
   const c = a.characteristic;
   const characteristic: Record<string, unknown> = {};
   const partial: Record<string, unknown> = {};
-  const designToMean: Record<string, number> = {};
+  const designToMean: Record<string, number | null> = {};
   for (const r of c.rows) {
     characteristic[r.variable] = { value: r.characteristic, side: r.side, fractile: r.fractile, basis: r.basis };
     partial[r.variable] = { gamma: r.partialFactor, side: r.side, code: r.code };

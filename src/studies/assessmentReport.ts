@@ -167,7 +167,7 @@ function partialFactors(a: Assessment): PartialFactorRow[] {
       factor: r.partialFactor,
       note: r.basis,
       side: r.side,
-      designToMean: r.designToMean,
+      ...(r.designToMean !== null ? { designToMean: r.designToMean } : {}),
       code: r.code,
     };
   });

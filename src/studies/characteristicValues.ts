@@ -37,7 +37,7 @@ export interface CharacteristicRow {
   /** null for favourable variables */
   partialFactor: number | null;
   /** x_d / mean: how far FORM moved the variable; not a partial factor */
-  designToMean: number;
+  designToMean: number | null;
   /** the code's own factor for comparison, where the strength model names a code */
   code?: CodeFactor;
 }
@@ -105,7 +105,7 @@ export function characteristicValues(model: ColumnModel, f: FormResult): Charact
     const design = f.designPointX[i];
     const mean = d.mean;
     const z = d.toStandardNormal(design);
-    const base = { variable: path, design, mean, designToMean: design / mean };
+    const base = { variable: path, design, mean, designToMean: Number.isFinite(design / mean) ? design / mean : null };
     const favourable = (why: string): CharacteristicRow => ({ ...base, side: 'favourable', fractile: null, basis: why, characteristic: null, partialFactor: null });
     // a load's moments, line load and top force: actions of that load, which may act on either side
     const action = /^(loads\.[^.]+)\.(moments\.(?:top|bottom)|transverse|horizontal)$/.exec(path);

@@ -65,12 +65,12 @@ export function betaByStrengthModel(given: Scenario, chosenForm: FormResult): St
     if (eccentric && strengthModelKind(strength)?.family === 'equivalent-bow') {
       return { strength, beta: null, pf: null, converged: false, modelFactor: resolved.modelFactor, chosen, note: 'has no check for eccentric loads or transverse actions' };
     }
+    if (strength === 'plastic-zone' && hasSideActions(given)) {
+      return { strength, beta: null, pf: null, converged: false, modelFactor: resolved.modelFactor, chosen, note: 'takes no line load, top force or out-of-plumb' };
+    }
     if (strength === 'plastic-zone' && !chosen) {
       // its table takes a minute or more per section and axis to build: only when asked for
       return { strength, beta: null, pf: null, converged: false, modelFactor: resolved.modelFactor, chosen, note: 'not run here: choose strength: plastic-zone for it (its table is built once per section and axis)' };
-    }
-    if (strength === 'plastic-zone' && hasSideActions(given)) {
-      return { strength, beta: null, pf: null, converged: false, modelFactor: resolved.modelFactor, chosen, note: 'takes no line load, top force or out-of-plumb' };
     }
     const r = chosen ? chosenForm : scenarioForm(resolved.scenario);
     return { strength, beta: r.beta, pf: r.pf, converged: r.converged, modelFactor: resolved.modelFactor, chosen };

@@ -160,6 +160,9 @@ describe('strength: plastic-zone with the section by its dimensions', () => {
     const facade = loadScenario(readFileSync(new URL('../../scenarios/facade-h-column.yaml', import.meta.url), 'utf8'), 'f.yaml');
     const f = form(problemFromModel(buildColumnModel(facade)));
     expect(betaByStrengthModel(facade, f).find((r) => r.strength === 'plastic-zone')).toMatchObject({ beta: null, note: 'takes no line load, top force or out-of-plumb' });
+    // chosen another model on a section by its dimensions: listed, not run (its table takes minutes to build)
+    const other = loadScenario(demo.replace(/^strength: plastic-zone/m, 'strength: en1993-b'), 'b.yaml');
+    expect(betaByStrengthModel(other, stand).find((r) => r.strength === 'plastic-zone')).toMatchObject({ beta: null, chosen: false, note: expect.stringMatching(/^not run here/) });
   });
 
   it('reads analysis.plastic_zone (table by default, or direct) and refuses anything else', () => {

@@ -101,6 +101,7 @@ export function maxAbsTwoSinusoids(
   P: number, Ae: number, Be: number, phi: number, Q: number, Am: number, Bm: number, psi: number, at: Float64Array, offset = 0,
 ): number {
   // offset: a constant moment (the line load's P q/φ²) subtracted; 0 leaves every value unchanged
+  if (Q === 0 || (Am === 0 && Bm === 0)) return maxAbsSinusoid(P * Ae, P * Be, phi, offset, at);
   const val = (x: number) => P * (Ae * Math.sin(phi * x) + Be * Math.cos(phi * x)) + Q * (Am * Math.sin(psi * x) + Bm * Math.cos(psi * x)) - offset;
   const der = (x: number) => P * phi * (Ae * Math.cos(phi * x) - Be * Math.sin(phi * x)) + Q * psi * (Am * Math.cos(psi * x) - Bm * Math.sin(psi * x));
   let best = Math.abs(val(0));
@@ -125,6 +126,33 @@ export function maxAbsTwoSinusoids(
     }
     x0 = x1;
     d0 = d1;
+  }
+  at[0] = bestAt;
+  return best;
+}
+
+/**
+ * Largest |a sin φξ + b cos φξ − offset| over ξ ∈ [0, 1] and where (to at[0]), in closed form: with
+ * a sin θ + b cos θ = ρ sin(θ + δ), ρ = √(a² + b²), δ = atan2(b, a), the interior extremes are at
+ * φξ + δ = π/2 + kπ, worth ±ρ − offset; the ends are the other candidates. The one-frequency case of
+ * maxAbsTwoSinusoids (no bow, or no second term), which otherwise brackets and bisects.
+ */
+export function maxAbsSinusoid(a: number, b: number, phi: number, offset: number, at: Float64Array): number {
+  let best = Math.abs(b - offset);
+  let bestAt = 0;
+  const end = Math.abs(a * Math.sin(phi) + b * Math.cos(phi) - offset);
+  if (end > best) { best = end; bestAt = 1; }
+  const rho = Math.hypot(a, b);
+  if (phi > 0 && rho > 0) {
+    const delta = Math.atan2(b, a);
+    // θ_k = π/2 + kπ inside (δ, φ + δ): sin(θ_k) = (−1)^k
+    for (let k = Math.ceil((delta - 0.5 * Math.PI) / Math.PI); ; k++) {
+      const x = (0.5 * Math.PI + k * Math.PI - delta) / phi;
+      if (x >= 1) break;
+      if (x <= 0) continue;
+      const v = Math.abs((k % 2 === 0 ? rho : -rho) - offset);
+      if (v > best) { best = v; bestAt = x; }
+    }
   }
   at[0] = bestAt;
   return best;

@@ -68,7 +68,7 @@ function drawsOnlyFloor(samples: number): number {
 }
 
 /** Kernel and numpy alternate this many times; each keeps its best round. */
-const ROUNDS = 2;
+const ROUNDS = 3;
 
 function numpyAvailable(): string | null {
   const r = spawnSync('python3', ['-c', 'import numpy'], { encoding: 'utf8' });

@@ -6,6 +6,7 @@ import { formatBeta, formatProbability, formatQuantity, type UnitSystem } from '
 import { describePath, quantityKindOf } from '../limitState/quantityKind.js';
 import { zeroFailureBound } from '../reliability/zeroFailureBound.js';
 import { CAUTION, textTable } from './textTable.js';
+import { ratioText } from './ratioText.js';
 import { designPointConnections } from '../studies/designPointConnections.js';
 import { connectionBasis, connectionLines } from './connectionText.js';
 import { evidenceLines } from './evidenceLines.js';
@@ -143,7 +144,7 @@ export function formatAssessment(a: Assessment, system: UnitSystem): string {
   lines.push(`stanchion assess: ${s.title}`);
   lines.push(`  ${assessResultLine(a)}`);
   lines.push(`  ${s.column.frame} column, strength model ${s.strength}; seed ${a.seed}; ${a.model.names.length} random variables`);
-  lines.push(`  at the means: capacity ${formatQuantity(a.check.capacity, 'force', system)}, demand ${formatQuantity(a.check.demand, 'force', system)}, mean-value ratio demand / (θ × capacity) ${a.check.utilization.toFixed(3)}, K = ${a.check.effective_length_factor.toFixed(3)}`);
+  lines.push(`  at the means: capacity ${formatQuantity(a.check.capacity, 'force', system)}, demand ${formatQuantity(a.check.demand, 'force', system)}, mean-value ratio demand / (θ × capacity) ${ratioText(a.check.utilization)}, K = ${ratioText(a.check.effective_length_factor)}`);
   if (a.axes) {
     const ax = a.axes;
     const other = ax.governing === 'y' ? 'z' : 'y';
@@ -216,7 +217,7 @@ export function formatAssessment(a: Assessment, system: UnitSystem): string {
     lines.push('  what drives it (mean-value ratio at the 5 % / 95 % quantile of one variable, the rest at their means):');
     lines.push(
       textTable(
-        drivers.rows.slice(0, 6).map((t) => [describePath(t.variable), `${t.low.toFixed(3)} … ${t.high.toFixed(3)}`]),
+        drivers.rows.slice(0, 6).map((t) => [describePath(t.variable), `${ratioText(t.low)} … ${ratioText(t.high)}`]),
         '    ',
       ),
     );

@@ -1,3 +1,4 @@
+import { ratioText } from './ratioText.js';
 import { deterministicCheck, checkJson, type AxisCheck, type CheckResult } from '../limitState/deterministicCheck.js';
 import { axisCautions } from '../limitState/axisCautions.js';
 import { buildColumnModel } from '../limitState/columnModel.js';
@@ -63,7 +64,7 @@ function axisLines(s: Scenario, c: CheckResult, system: UnitSystem): string[] {
   lines.push('');
   lines.push('  buckling about each principal axis (the capacity is the smaller):');
   const row = (x: AxisCheck, ends: string): string[] => [
-    x.axis === a.governing ? `${x.axis} (governs)` : x.axis, ends, x.strength, num(x.restraint_ratio.bottom), num(x.restraint_ratio.top), q(x.critical_load, 'force'), kText(x.effective_length_factor), q(x.capacity, 'force'), x.utilization.toFixed(3),
+    x.axis === a.governing ? `${x.axis} (governs)` : x.axis, ends, x.strength, num(x.restraint_ratio.bottom), num(x.restraint_ratio.top), q(x.critical_load, 'force'), kText(x.effective_length_factor), q(x.capacity, 'force'), ratioText(x.utilization),
   ];
   lines.push(
     textTable(
@@ -123,7 +124,7 @@ export function formatCheck(s: Scenario, c: CheckResult, system: UnitSystem): st
   if (c.axes !== null) rows.unshift(['governing axis', `${c.axes.governing} (the values below are about ${c.axes.governing})`]);
   rows.push(['capacity', q(c.capacity, 'force')]);
   rows.push(['demand (sum of loads)', q(c.demand, 'force')]);
-  rows.push(['mean-value ratio', `${c.utilization.toFixed(3)}  = demand / (model factor ${c.model_factor.toPrecision(3)} × capacity), every value at its mean`]);
+  rows.push(['mean-value ratio', `${ratioText(c.utilization)}  = demand / (model factor ${c.model_factor.toPrecision(3)} × capacity), every value at its mean`]);
   lines.push(textTable(rows));
   lines.push('');
   lines.push('  connection moments under the mean loads (second order; the values to check each joint\'s moment resistance M_j,Rd against):');
@@ -145,7 +146,7 @@ export function formatCheck(s: Scenario, c: CheckResult, system: UnitSystem): st
   lines.push(CAUTION);
   lines.push('');
   // every value at its mean, no partial factor: this is not a design check, and the line says so
-  lines.push(`result: mean-value ratio ${c.utilization.toFixed(3)} (demand / resistance at the means; not a design check: use assess for the reliability against a target), K = ${c.effective_length_factor.toFixed(3)}`);
+  lines.push(`result: mean-value ratio ${ratioText(c.utilization)} (demand / resistance at the means; not a design check: use assess for the reliability against a target), K = ${kText(c.effective_length_factor)}`);
   return lines.join('\n') + '\n';
 }
 

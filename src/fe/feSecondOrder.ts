@@ -27,6 +27,8 @@ export interface FeSecondOrderResult {
   /** largest |M| = EI |v''| (N·m) from the nodal moments of element equilibrium, refined by a parabola, and where (m) */
   memberMax: number;
   memberMaxAt: number;
+  /** bending moment M = −EI v'' (N·m) at each node, from element equilibrium (averaged between the two elements at an inner node) */
+  nodeMoment: Float64Array;
 }
 
 function solveCholesky(Lc: Float64Array, n: number, b: Float64Array): Float64Array {
@@ -127,6 +129,8 @@ export function feFirstMode(frame: FeFrame, r: FeRestraint, elements: number, it
  * (a load P at eccentricity e on the +w side gives +P·e at the bottom and −P·e at the top), to a
  * uniform line load `line` (N/m, consistent nodal loads of the Hermite element) and to a horizontal
  * force `top` (N) at the top node (acts only where the top may move: sway), both positive towards +w.
+ * `stiffnessAt(ξ)` (optional): E·I relative to `EI` along the height, piecewise constant (a stepped
+ * member; the steps must fall on element boundaries), R and T referred to `EI`.
  */
 export function feSecondOrder(
   EI: number,
@@ -137,10 +141,13 @@ export function feSecondOrder(
   w0: FeNodalShape,
   endCouples: { bottom: number; top: number } = { bottom: 0, top: 0 },
   actions: { line: number; top: number } = { line: 0, top: 0 },
+  stiffnessAt?: (xi: number) => number,
 ): FeSecondOrderResult {
   const elements = w0.w.length - 1;
   const lambda = (P * L * L) / EI;
-  const { n, K, Kg, keep } = assembleColumn(frame, r, elements);
+  // a stepped member: EI of each element relative to EI (R and T refer to EI), taken at its middle
+  const relative = (el: number): number => (stiffnessAt === undefined ? 1 : stiffnessAt((el + 0.5) / elements));
+  const { n, K, Kg, keep } = assembleColumn(frame, r, elements, relative);
   const N = 2 * (elements + 1);
   const h = 1 / elements;
   const ke = elasticStiffness(h);
@@ -174,9 +181,10 @@ export function feSecondOrder(
   const toMoment = EI / (L * L);
   for (let el = 0; el < elements; el++) {
     const o = 2 * el;
+    const ei = relative(el);
     const fe = [0, 0, 0, 0];
     for (let i = 0; i < 4; i++) {
-      for (let j = 0; j < 4; j++) fe[i] += (ke[i * 4 + j] - lambda * kg[i * 4 + j]) * v[o + j] - lambda * kg[i * 4 + j] * w0f[o + j];
+      for (let j = 0; j < 4; j++) fe[i] += (ei * ke[i * 4 + j] - lambda * kg[i * 4 + j]) * v[o + j] - lambda * kg[i * 4 + j] * w0f[o + j];
       fe[i] -= fl[i]; // the element's own load is not an end force
       fInt[o + i] += fe[i];
     }
@@ -205,5 +213,6 @@ export function feSecondOrder(
     springMoment: { bottom: ((endCouples.bottom * L * L) / EI - fInt[1]) * toMoment, top: ((endCouples.top * L * L) / EI - fInt[N - 1]) * toMoment },
     memberMax,
     memberMaxAt,
+    nodeMoment,
   };
 }

@@ -8,8 +8,35 @@ import { eccentricFirstYieldCapacity } from './eccentricFirstYield.js';
 import { firstYieldCapacity } from './firstYield.js';
 import { modeShape } from './modeShape.js';
 import { steppedColumnCapacity } from './steppedCapacity.js';
+import { steppedEccentricFirstYieldCapacity } from './steppedBeamColumn.js';
+import { steppedCriticalLoad, steppedMode, type SteppedMember } from './steppedColumn.js';
 import { strengthModelKind } from './strengthModelKind.js';
-import type { CapacityResult, ColumnState, StrengthModel } from './types.js';
+import type { CapacityResult, ColumnState, SoundSection, StrengthModel } from './types.js';
+
+/**
+ * first-yield of a stepped member under end couples, a line load or a top force: the exact stepped
+ * second-order solution, each segment checked with its own section (steppedBeamColumn.ts). A section
+ * with no modulus, area or strength anywhere takes no bending (as for the prismatic column).
+ */
+function steppedEccentricCapacity(s: ColumnState, sound: SoundSection): CapacityResult {
+  const member: SteppedMember = { ratio: sound.I / s.I, zone: Math.min(1, Math.max(0, sound.from / s.L)) };
+  const EI1 = s.E * s.I;
+  const { Pcr, phi, K } = steppedCriticalLoad(EI1, s.L, s.frame, s.r, member);
+  const mode = steppedMode(s.frame, s.r, member, phi);
+  const c = Math.max(mode.zoneFactor, mode.upperFactor);
+  if (!(s.S > 0 && s.A > 0 && s.fy > 0 && sound.S > 0 && sound.A > 0)) return { capacity: 0, Pcr, K, c };
+  const e = s.eccentricity ?? { bottom: 0, top: 0 };
+  const t = s.transverse ?? { line: 0, top: 0 };
+  const topRatio = s.frame === 'sway' ? t.top : 0;
+  const capacity = steppedEccentricFirstYieldCapacity(
+    {
+      frame: s.frame, r: s.r, L: s.L, EI1, ratio: member.ratio, zone: member.zone, eB: e.bottom, eT: e.top,
+      q: t.line * s.L * s.L, h: topRatio * s.L, bow: s.bow, Pcr, mode,
+    },
+    { A1: s.A, S1: s.S, A2: sound.A, S2: sound.S, fy: s.fy },
+  );
+  return { capacity, Pcr, K, c };
+}
 
 /** Capacity from Pcr and c for a strength model (shared by the exact and the fast path). */
 export function capacityFromPcr(model: StrengthModel, A: number, S: number, fy: number, bow: number, Pcr: number, c: number): number {
@@ -52,12 +79,14 @@ export function usesSteppedSolver(s: ColumnState): boolean {
  * Axial capacity of the restrained column (docs/mechanics.md), exact path: critical load from the
  * characteristic equation, c from the closed-form first mode. A mechanism gives capacity 0.
  * A stepped member (`s.sound`, a corroded zone near the base) under concentric load takes the stepped
- * solver (steppedCapacity.ts); with eccentric or transverse actions the zone's section is used over the
- * whole length (the conservative reduction: no second-order solution of the stepped beam-column yet).
+ * solver (steppedCapacity.ts); with eccentric or transverse actions first-yield takes the exact stepped
+ * beam-column (steppedBeamColumn.ts), while the interaction checks (en1993-*, aisc360-e3) use the zone's
+ * section over the whole length (the conservative reduction: their member formulas are for prismatic members).
  */
 export function columnCapacity(model: StrengthModel, s: ColumnState): CapacityResult {
   if (!isStrengthModel(model)) throw new RangeError(`unknown strength model '${String(model)}'`);
   if (usesSteppedSolver(s)) return steppedColumnCapacity(model, s, s.sound!);
+  if (s.sound !== undefined && strengthModelKind(model)!.family === 'first-yield') return steppedEccentricCapacity(s, s.sound);
   const { Pcr, phi, K } = criticalLoad(s.E * s.I, s.L, s.frame, s.r);
   const mode = modeShape(s.frame, s.r, phi);
   const c = mode.curvatureFactor;

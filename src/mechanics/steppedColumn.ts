@@ -178,6 +178,20 @@ export interface SteppedMode {
   readonly zoneFactor: number;
   /** the same over the upper segment */
   readonly upperFactor: number;
+  /**
+   * moment(ξ) on each segment as a sinusoid of its own: for `from` ≤ ξ ≤ `from` + `length`,
+   * moment(ξ) = cos·cos(κ(ξ − from)) + sin·sin(κ(ξ − from)), κ = φ/√(I/I₁) (the lower segment first)
+   */
+  readonly segments: readonly ModeSegment[];
+}
+
+/** One segment of the stepped mode's moment (see SteppedMode.segments). */
+export interface ModeSegment {
+  readonly from: number;
+  readonly length: number;
+  readonly kappa: number;
+  readonly cos: number;
+  readonly sin: number;
 }
 
 /** Candidate u ∈ [0, uEnd] where c0 + p cos u + q sin u = 0 (closed form). */
@@ -201,7 +215,7 @@ function sinusoidZeros(c0: number, p: number, q: number, uEnd: number, out: numb
 export function steppedMode(frame: Frame, r: EndRestraint, m: SteppedMember, phi: number): SteppedMode {
   checkMember(m);
   if (!(phi >= 0 && Number.isFinite(phi))) throw new RangeError(`phi must be finite and >= 0 (got ${phi})`);
-  if (phi === 0) return { phi, sample: (xi) => xi, moment: () => 0, zoneFactor: 0, upperFactor: 0 };
+  if (phi === 0) return { phi, sample: (xi) => xi, moment: () => 0, zoneFactor: 0, upperFactor: 0, segments: [] };
   const p = steppedParams(frame, r, m);
   const s = new Float64Array(8);
   baseStates(s, p);
@@ -270,11 +284,17 @@ export function steppedMode(frame: Frame, r: EndRestraint, m: SteppedMember, phi
   };
   const zoneFactor = a > 0 ? maxMoment(mLower) : 0;
   const upperFactor = a < 1 ? maxMoment(mUpper) : 0;
+  // M(u) = M₀ cos u + (V₀ − φ² v'₀) sin u/κ over a segment (carry), u = κ·(ξ − from)
+  const segment = (s0: Float64Array, e: number, from: number, length: number): ModeSegment => {
+    const kappa = phi / Math.sqrt(e);
+    return { from, length, kappa, cos: s0[2] / scaleM, sin: (s0[3] - phi * phi * s0[1]) / (kappa * scaleM) };
+  };
   return {
     phi,
     sample: (xi) => at(xi)[0] / wMax,
     moment: (xi) => at(xi)[2] / scaleM,
     zoneFactor,
     upperFactor,
+    segments: [segment(base, 1, 0, a), segment(atZone, rho, a, 1 - a)],
   };
 }

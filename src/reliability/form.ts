@@ -220,9 +220,14 @@ export function form(problem: ReliabilityProblem, opts: FormOptions = {}): FormR
   const beta = unreachable ? (originFails ? -Infinity : Infinity) : (originFails ? -1 : 1) * betaBest;
   const gradNorm = norm(best.gradient);
   const uNorm = norm(best.u);
-  const alpha = unreachable
+  const rawAlpha = unreachable
     ? Array.from(best.u, (v) => (originFails ? -v : v) / uNorm) // the direction the search went
     : beta !== 0 ? Array.from(best.u, (v) => v / beta) : Array.from(best.gradient, (v) => -v / gradNorm);
+  // a search that never left the origin on a g with no slope there (a column that is a mechanism
+  // whatever the variables) has no direction: no variable matters, rather than 0/0
+  const flat = rawAlpha.some((a) => !Number.isFinite(a));
+  const alpha = flat ? rawAlpha.map(() => 0) : rawAlpha;
+  if (flat) warnings.push('g has no slope at the point the search ended (every variable leaves it unchanged there): the importance factors α are set to 0');
   problem.transform.toPhysical(best.u, x);
   const governing: DesignPointCandidate = { beta, designPointU: Array.from(best.u), designPointX: Array.from(x), alpha };
   const system = formSystem(governing, others, opts.seed);

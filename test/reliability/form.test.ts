@@ -252,3 +252,19 @@ describe('FORM when no design point exists', () => {
     expect(r.pf).toBe(1);
   });
 });
+
+describe('a limit state with no slope where the search stops', () => {
+  // common practice: a column that is a mechanism whatever the variables (capacity ~1e-28 N against a fixed
+  // load; a valid generated scenario, bench/validScenarios.ts seed 11 no. 24) leaves g flat: importance
+  // factors are 0, never 0/0 = NaN in the terminal's α² column
+  it('α is finite (0) and FORM says why', () => {
+    const transform = natafTransform([makeDistribution({ dist: 'normal', mean: 1, sd: 0.1 }), makeDistribution({ dist: 'normal', mean: 2, sd: 0.1 })], null, ['a', 'b']);
+    for (const g of [() => -1, () => 1, (x: Float64Array) => 1e-30 * x[0] - 1]) {
+      const r = form({ names: ['a', 'b'], transform, g });
+      expect(r.alpha.every(Number.isFinite)).toBe(true);
+      expect(r.importance.every(Number.isFinite)).toBe(true);
+      expect(Number.isNaN(r.beta)).toBe(false);
+      expect(r.warnings.some((w) => /no slope/.test(w))).toBe(true);
+    }
+  });
+});

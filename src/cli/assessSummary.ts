@@ -131,7 +131,14 @@ function measurementEffectLines(a: Assessment, m: NonNullable<Assessment['measur
   for (const st of m.steps) out.push(`    ${st.label.padEnd(width)}  β = ${formatBeta(st.beta)} (${st.meets ? 'meets' : 'short of'} the target)`);
   if (m.survival) {
     out.push(`    P(survival of the largest survived load) beforehand ${m.survival.pSurvival.toFixed(4)}`);
-    if (m.survival.mc) out.push(`    Monte Carlo check of the last step: β = ${formatBeta(m.survival.mc.beta)} (${m.survival.mc.failures} failures among ${m.survival.mc.survived} survivors)${m.survival.check ? `, ${m.survival.check.agrees ? 'agrees' : 'DISAGREES'}` : ''}`);
+    const sv = m.survival;
+    const verdictWord = (c: typeof sv.check) => (c ? `, ${c.agrees ? 'agrees' : 'DISAGREES'}` : '');
+    if (sv.importance) {
+      const r = sv.importance;
+      const estimate = r.joint.hits > 0 ? `β = ${formatBeta(r.beta)} (CoV ${(100 * r.cov).toFixed(0)} %, ${r.samples} samples)` : `no failure in ${r.samples} samples (no estimate)`;
+      out.push(`    importance-sampling check of the last step: ${estimate}${verdictWord(sv.importanceCheck)}`);
+    }
+    if (sv.mc) out.push(`    Monte Carlo check of the last step: β = ${formatBeta(sv.mc.beta)} (${sv.mc.failures} failures among ${sv.mc.survived} survivors)${verdictWord(sv.mcCheck)}${sv.importanceCheck ? ' (importance sampling decides)' : ''}`);
     const u = a.governingUnconditional;
     out.push(`    the verdict rests on the β given the survived loads${u ? ` (without them: β = ${formatBeta(u.beta)}, ${LABEL[u.method]})` : ''}; the methods below do not use the survived loads`);
   }

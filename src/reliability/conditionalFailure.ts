@@ -10,7 +10,8 @@
  *     P(g ≤ 0 ∩ h > 0) = P(Y_g ≥ β_g, Y_h < β_h)      (seriesSystem.ts, one-dimensional quadrature)
  *     P(h > 0) = Φ(β_h).
  * Exact when g and h are linear in u (a normal resistance and a fixed proof load, for example).
- * Monte Carlo: the ratio of the two counts, seeded on its own stream range.
+ * Monte Carlo: the ratio of the two counts, seeded on its own stream range. Importance sampling
+ * of the same ratio, the check at small probabilities: conditionalImportance.ts.
  */
 import { form, type FormOptions } from './form.js';
 import { firstOutsideSecondInside } from './seriesSystem.js';
@@ -127,9 +128,11 @@ export function conditionalMonteCarlo(problem: ConditionedProblem, opts: { sampl
 }
 
 export interface ConditionalCheck {
-  /** FORM's conditional β lies within the Monte Carlo estimate's CHECK_SIGMAS interval widened by BETA_TOLERANCE */
+  /** FORM's conditional β lies within the sampling estimate's CHECK_SIGMAS interval widened by BETA_TOLERANCE */
   agrees: boolean;
-  /** the estimate to rest on when they disagree: the Monte Carlo ratio, or its one-sided bound with no failure */
+  /** the estimate checked against: crude Monte Carlo or importance sampling (conditionalImportance.ts) */
+  method: 'mc' | 'is';
+  /** the estimate to rest on when they disagree: the sampled ratio, or the Monte Carlo one-sided bound with no failure */
   estimate: { beta: number; pf: number; upperBound: boolean };
   reason: string;
 }
@@ -146,6 +149,7 @@ export function conditionalCheck(formBeta: number, mc: ConditionalMcResult): Con
     const agrees = formBeta >= bound.beta - BETA_TOLERANCE;
     return {
       agrees,
+      method: 'mc',
       estimate: { beta: bound.beta, pf: bound.pf, upperBound: true },
       reason: `Monte Carlo saw no failure among ${mc.survived} survivors (β above ${bound.beta.toFixed(2)} at 95 %), ${agrees ? 'consistent with' : 'which contradicts'} FORM's β = ${formBeta.toFixed(2)}`,
     };
@@ -154,6 +158,7 @@ export function conditionalCheck(formBeta: number, mc: ConditionalMcResult): Con
   const agrees = formBeta >= low - BETA_TOLERANCE && formBeta <= high + BETA_TOLERANCE;
   return {
     agrees,
+    method: 'mc',
     estimate: { beta: mc.beta, pf: mc.pf, upperBound: false },
     reason: `Monte Carlo gives β = ${mc.beta.toFixed(2)} (${mc.failures} failures among ${mc.survived} survivors, CoV ${(100 * mc.cov).toFixed(0)} %), ${agrees ? 'which agrees with' : 'which disagrees with'} FORM's β = ${formBeta.toFixed(2)}`,
   };

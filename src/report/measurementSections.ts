@@ -77,13 +77,17 @@ export function measurementsSection(input: ReportInput, system: UnitSystem, char
     const mcText = s.mc
       ? ` Crude Monte Carlo check (${s.mc.samples} samples, seed ${s.mc.seed}): ${s.mc.failures} failures among ${s.mc.survived} survivors, pf = ${formatProbability(s.mc.pf)}${Number.isFinite(s.mc.cov) ? ` (CoV ${formatNumber(s.mc.cov, 2)})` : ' (no failure: no estimate)'}.`
       : '';
+    const isText = s.importance
+      ? ` Importance sampling (${s.importance.samples} samples centred at ${s.importance.centre}, P(h > 0) by ${s.importance.survivalMethod === 'is' ? 'importance sampling at h’s design point' : 'crude Monte Carlo'}, seed ${s.importance.seed}): ` +
+        (s.importance.hits > 0 ? `pf = ${formatProbability(s.importance.pf)}, β = ${formatBeta(s.importance.beta)} (CoV ${formatNumber(s.importance.cov, 2)}).` : 'no sample in the joint domain (no estimate).')
+      : '';
     blocks.push({
       kind: 'paragraph',
       text:
         `Survived load: P(failure | survived) = P(g ≤ 0 and h > 0) / P(h > 0), with h = θ·capacity − the largest survived load. ` +
         `The column, the model and its model factor θ are the same in g and h; the loads in g are independent of the survived load. ` +
         `FORM on g and on h, with the exact bivariate normal of the two linearised margins (ρ = ${formatNumber(s.rho, 3)}): ` +
-        `P(h > 0) = ${formatNumber(s.pSurvival, 4)} beforehand, conditional pf = ${formatProbability(s.pf)}${s.converged ? '' : ' (a FORM search did not converge: treat with care)'}.${mcText}`,
+        `P(h > 0) = ${formatNumber(s.pSurvival, 4)} beforehand, conditional pf = ${formatProbability(s.pf)}${s.converged ? '' : ' (a FORM search did not converge: treat with care)'}.${isText}${mcText}`,
     });
   }
   if (s) {
@@ -91,7 +95,7 @@ export function measurementsSection(input: ReportInput, system: UnitSystem, char
       kind: 'callout',
       tone: m.after.meets ? 'ok' : 'warn',
       text:
-        `The verdict of this report rests on the β given the survived loads (FORM on the two margins, checked by its Monte Carlo ratio; on the Monte Carlo ratio when they disagree)` +
+        `The verdict of this report rests on the β given the survived loads (FORM on the two margins, checked by its importance-sampling ratio, or by the Monte Carlo ratio when importance sampling saw no failure; on the sampled ratio when they disagree)` +
         `${s.unconditional ? `; without them β = ${formatBeta(s.unconditional.beta)} (${s.unconditional.basis ?? methodLabel(s.unconditional.method)})` : ''}.` +
         `${s.check ? ` ${s.check.reason.charAt(0).toUpperCase()}${s.check.reason.slice(1)}.` : ''} The sampling methods, sensitivities and studies of this report do not use the survived loads.`,
     });

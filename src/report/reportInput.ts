@@ -186,8 +186,10 @@ export interface MeasurementsReport {
     rho: number;
     converged: boolean;
     mc?: { pf: number; cov: number; samples: number; survived: number; failures: number; seed: number };
-    /** the Monte Carlo check's verdict on FORM's conditional β */
-    check?: { agrees: boolean; reason: string };
+    /** importance sampling of the same ratio; `centre` in words, `hits` samples in the joint domain */
+    importance?: { pf: number; beta: number; cov: number; samples: number; hits: number; centre: string; survivalMethod: 'mc' | 'is'; seed: number };
+    /** the check's verdict on FORM's conditional β (importance sampling's, else Monte Carlo's) */
+    check?: { agrees: boolean; reason: string; method?: 'mc' | 'is' };
     /** the estimate without the survived loads (the main result rests on the conditional one) */
     unconditional?: { beta: number; method: MethodName; basis?: string };
   };

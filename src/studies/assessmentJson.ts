@@ -14,6 +14,7 @@ import type { Assessment } from './columnAssessment.js';
 import { restraintJson } from './columnRestraint.js';
 import { connectionJson } from '../limitState/connectionResponse.js';
 import { designPointConnections } from './designPointConnections.js';
+import type { ConditionalImportanceResult } from '../reliability/conditionalImportance.js';
 
 export interface RunMeta {
   version: string;
@@ -233,6 +234,17 @@ function evidenceJson(s: Assessment['scenario']): unknown {
 }
 
 /** The steps of the evidence (FORM), each with β and the verdict, and the survival study (SI). */
+/** The importance-sampling estimate of P(failure | survived) (docs/evidence.md §5). */
+function importanceJson(r: ConditionalImportanceResult): unknown {
+  const part = (p: ConditionalImportanceResult['joint']) => ({ p: p.p, cov: p.cov, samples: p.samples, hits: p.hits, method: p.method });
+  return {
+    pf: r.pf, beta: r.beta, cov: r.cov, samples: r.samples, calls: r.calls,
+    centre: r.centre, centre_u: r.centreU, centre_converged: r.centreConverged,
+    joint: part(r.joint), survival: part(r.survival),
+    target_cov: r.targetCov, reached_target: r.reachedTarget, seed: r.seed,
+  };
+}
+
 function measurementsJson(m: MeasurementEffect, s: Assessment['scenario']): unknown {
   const state = (b: { beta: number; pf: number; meets: boolean }) => ({ beta: b.beta, pf: b.pf, meets_target: b.meets });
   return {
@@ -250,7 +262,10 @@ function measurementsJson(m: MeasurementEffect, s: Assessment['scenario']): unkn
             beta: m.survival.beta, pf: m.survival.pf, probability_of_survival: m.survival.pSurvival, rho: m.survival.rho, converged: m.survival.converged,
             model_factor_shared: true,
             ...(m.survival.mc ? { mc: { pf: m.survival.mc.pf, cov: m.survival.mc.cov, samples: m.survival.mc.samples, survived: m.survival.mc.survived, failures: m.survival.mc.failures, seed: m.survival.mc.seed } } : {}),
-            ...(m.survival.check ? { mc_agrees: m.survival.check.agrees, check: m.survival.check.reason } : {}),
+            ...(m.survival.importance ? { importance: importanceJson(m.survival.importance) } : {}),
+            ...(m.survival.mcCheck ? { mc_agrees: m.survival.mcCheck.agrees } : {}),
+            ...(m.survival.importanceCheck ? { importance_agrees: m.survival.importanceCheck.agrees } : {}),
+            ...(m.survival.check ? { check: m.survival.check.reason, check_method: m.survival.check.method } : {}),
           },
         }
       : {}),

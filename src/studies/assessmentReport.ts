@@ -67,7 +67,15 @@ function measurementsReport(m: MeasurementEffect, a: Assessment): MeasurementsRe
             })),
             beta: sv.beta, pf: sv.pf, pSurvival: sv.pSurvival, rho: sv.rho, converged: sv.converged,
             ...(sv.mc ? { mc: { pf: sv.mc.pf, cov: sv.mc.cov, samples: sv.mc.samples, survived: sv.mc.survived, failures: sv.mc.failures, seed: sv.mc.seed } } : {}),
-            ...(sv.check ? { check: { agrees: sv.check.agrees, reason: sv.check.reason } } : {}),
+            ...(sv.importance
+              ? {
+                  importance: {
+                    pf: sv.importance.pf, beta: sv.importance.beta, cov: sv.importance.cov, samples: sv.importance.samples, hits: sv.importance.joint.hits,
+                    centre: CENTRE_WORDS[sv.importance.centre], survivalMethod: sv.importance.survival.method, seed: sv.importance.seed,
+                  },
+                }
+              : {}),
+            ...(sv.check ? { check: { agrees: sv.check.agrees, reason: sv.check.reason, method: sv.check.method } } : {}),
             ...(u ? { unconditional: { beta: u.beta, method: u.method, ...(u.basis ? { basis: u.basis } : {}) } } : {}),
           },
         }
@@ -77,6 +85,7 @@ function measurementsReport(m: MeasurementEffect, a: Assessment): MeasurementsRe
 import { strengthUsesBow } from '../mechanics/strengthModelKind.js';
 import { makeDistribution } from '../probability/makeDistribution.js';
 import { zeroFailureBound } from '../reliability/zeroFailureBound.js';
+import { CENTRE_WORDS } from '../reliability/conditionalImportance.js';
 
 function connectionValues(m: ConnectionResponse): ConnectionValues {
   const e = m.eccentricity;

@@ -304,8 +304,9 @@ export async function assessColumn(original: Scenario, opts: AssessOptions = {})
 
 /**
  * With survived loads the verdict rests on P(failure | survived) (docs/evidence.md §8): FORM on
- * the two margins, checked by its Monte Carlo ratio; when they disagree, on the Monte Carlo ratio
- * (or its one-sided bound). The unconditional estimate is kept beside it.
+ * the two margins, checked by its importance-sampling ratio (by the Monte Carlo ratio when
+ * importance sampling saw no failure); when they disagree, on the sampled ratio (or the Monte
+ * Carlo one-sided bound). The unconditional estimate is kept beside it.
  */
 function survivalGoverning(
   sv: SurvivalStudy,
@@ -314,10 +315,11 @@ function survivalGoverning(
   target: number,
 ): { governing: Assessment['governing']; verdict: Verdict; unconditional: Assessment['governing']; warning?: string } {
   const check = sv.check;
-  const restOnMc = check !== undefined && !check.agrees;
-  const governing: Assessment['governing'] = restOnMc
-    ? { method: 'mc', beta: check.estimate.beta, pf: check.estimate.pf, basis: `Monte Carlo given the survived loads${check.estimate.upperBound ? ', upper bound' : ''}` }
-    : { method: 'form', beta: sv.beta, pf: sv.pf, basis: check ? 'FORM given the survived loads, checked by Monte Carlo' : 'FORM given the survived loads' };
+  const restOnSampling = check !== undefined && !check.agrees;
+  const checkName = check?.method === 'is' ? 'importance sampling' : 'Monte Carlo';
+  const governing: Assessment['governing'] = restOnSampling
+    ? { method: check.method, beta: check.estimate.beta, pf: check.estimate.pf, basis: `${check.method === 'is' ? 'Importance sampling' : 'Monte Carlo'} given the survived loads${check.estimate.upperBound ? ', upper bound' : ''}` }
+    : { method: 'form', beta: sv.beta, pf: sv.pf, basis: check ? `FORM given the survived loads, checked by ${checkName}` : 'FORM given the survived loads' };
   const line =
     `Given the survived loads β = ${governing.beta.toFixed(2)} (${governing.basis}); without them β = ${plain.beta.toFixed(2)} (${plain.basis ?? plain.method.toUpperCase()}). ` +
     `The verdict rests on the conditional β, ${governing.beta >= target ? 'which meets' : 'which falls short of'} the target${check ? `; ${check.reason}` : ''}.`;
@@ -325,7 +327,7 @@ function survivalGoverning(
     governing,
     verdict: { ...v, trust: governing.method, reason: `${v.reason} ${line}` },
     unconditional: plain,
-    ...(restOnMc ? { warning: `FORM given the survived loads disagrees with its Monte Carlo check: ${check.reason}; the verdict rests on the Monte Carlo estimate.` } : {}),
+    ...(restOnSampling ? { warning: `FORM given the survived loads disagrees with its ${checkName} check: ${check.reason}; the verdict rests on the ${checkName} estimate.` } : {}),
   };
 }
 
@@ -493,7 +495,7 @@ async function assessUpdated(given: Scenario, opts: AssessOptions, original: Sce
   let finalVerdict = checked.verdict;
   let unconditional: Assessment['governing'] | undefined;
   if (!interrupted && !opts.reliabilityOnly && (s.evidence || s.survivedLoads || update)) {
-    const r = countEvaluations(() => measurementEffect(original, seed, update));
+    const r = countEvaluations(() => measurementEffect(original, seed, update, { targetCov: opts.targetCov }));
     measurements = r.result;
     calls.measurements = r.calls;
     if (measurements.survival) {

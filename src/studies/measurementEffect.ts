@@ -129,7 +129,12 @@ const state = (beta: number, pf: number, target: number): BetaState => ({ beta, 
  * and, when it has measurements, their update (measurementUpdate.ts): the update's own FORM runs
  * are the "with the test results" and "and the measurements" steps, so nothing is computed twice.
  */
-export function measurementEffect(original: Scenario, seed: number, update?: { scenario: Scenario; result: MeasurementUpdateResult } | null): MeasurementEffect {
+export function measurementEffect(
+  original: Scenario,
+  seed: number,
+  update?: { scenario: Scenario; result: MeasurementUpdateResult } | null,
+  opts: { targetCov?: number } = {},
+): MeasurementEffect {
   const target = original.targetBeta;
   const steps: EvidenceStep[] = [];
   const push = (step: EvidenceStepName, beta: number, pf: number): BetaState => {
@@ -151,7 +156,7 @@ export function measurementEffect(original: Scenario, seed: number, update?: { s
   const last = update ? update.scenario : original;
   let survival: SurvivalStudy | undefined;
   if (last.survivedLoads && last.survivedLoads.length > 0) {
-    survival = survivalStudy(last, { seed });
+    survival = survivalStudy(last, { seed, targetCov: opts.targetCov });
     push('survival', survival.beta, survival.pf);
   }
   const after = steps[steps.length - 1];

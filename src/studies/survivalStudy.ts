@@ -10,6 +10,7 @@ import { buildColumnModel, resistanceMargin } from '../limitState/columnModel.js
 import { makeDistribution } from '../probability/makeDistribution.js';
 import { natafTransform } from '../probability/nataf.js';
 import { conditionalCheck, conditionalForm, conditionalMonteCarlo, type ConditionalCheck, type ConditionalMcResult, type ConditionedProblem } from '../reliability/conditionalFailure.js';
+import { conditionalImportance, importanceCheck, type ConditionalImportanceResult } from '../reliability/conditionalImportance.js';
 import { InputError } from '../scenario/inputError.js';
 import type { Scenario } from '../scenario/types.js';
 
@@ -27,7 +28,13 @@ export interface SurvivalStudy {
   calls: number;
   /** crude Monte Carlo of the same conditional probability, a check */
   mc?: ConditionalMcResult;
+  /** importance sampling of the same conditional probability, the check at small probabilities */
+  importance?: ConditionalImportanceResult;
   /** does the Monte Carlo ratio confirm FORM's conditional β (absent without Monte Carlo) */
+  mcCheck?: ConditionalCheck;
+  /** does the importance-sampling ratio confirm it (absent without a sample in the joint domain) */
+  importanceCheck?: ConditionalCheck;
+  /** the check the verdict uses: importance sampling's, else Monte Carlo's */
   check?: ConditionalCheck;
 }
 
@@ -64,7 +71,12 @@ export function survivalProblem(s: Scenario): ConditionedProblem {
   return { names, transform: natafTransform(dists, correlation, names), g: model.g, h };
 }
 
-export function survivalStudy(s: Scenario, opts: { seed: number; samples?: number }): SurvivalStudy {
+/**
+ * FORM, then its checks: importance sampling first (it sees failures at 1e-7 as well), crude
+ * Monte Carlo beside it (no centre to choose, and the only estimate when importance sampling saw
+ * no failure). `samples: 0` leaves Monte Carlo out, `importance: false` importance sampling.
+ */
+export function survivalStudy(s: Scenario, opts: { seed: number; samples?: number; importance?: boolean; targetCov?: number }): SurvivalStudy {
   const problem = survivalProblem(s);
   const field = s.survivedLoads![0].path;
   if (problem.names.length === 0) {
@@ -85,8 +97,14 @@ export function survivalStudy(s: Scenario, opts: { seed: number; samples?: numbe
   }
   const samples = opts.samples ?? SURVIVAL_MC_SAMPLES;
   const mc = samples > 0 ? conditionalMonteCarlo(problem, { samples, seed: opts.seed }) : undefined;
+  const importance = opts.importance === false ? undefined : conditionalImportance(problem, r, { seed: opts.seed, targetCov: opts.targetCov });
+  const mcCheck = mc ? conditionalCheck(r.beta, mc) : undefined;
+  const isCheck = importance ? importanceCheck(r.beta, importance) : undefined;
+  const check = isCheck ?? mcCheck;
   return {
     beta: r.beta, pf: r.pf, betaBefore: r.betaBefore, pfBefore: r.pfBefore, pSurvival: r.pSurvival, rho: r.rho,
-    converged: r.converged, calls: r.calls + (mc ? 2 * mc.samples : 0), ...(mc ? { mc, check: conditionalCheck(r.beta, mc) } : {}),
+    converged: r.converged, calls: r.calls + (mc ? 2 * mc.samples : 0) + (importance ? importance.calls : 0),
+    ...(mc ? { mc } : {}), ...(importance ? { importance } : {}),
+    ...(mcCheck ? { mcCheck } : {}), ...(isCheck ? { importanceCheck: isCheck } : {}), ...(check ? { check } : {}),
   };
 }

@@ -18,7 +18,9 @@ function withEvidence(): ReportInput {
       before: { beta: 3.1, pf: 1e-3, meets: false },
       afterTests: { beta: 3.6, pf: 1.6e-4, meets: false },
       after: { beta: 3.9, pf: 4.8e-5, meets: true },
-      survival: { loads: [{ path: 'evidence[0].load', mean: 1e6, random: false, date: 'winter' }], beta: 3.9, pf: 4.8e-5, pSurvival: 0.97, rho: 0.5, converged: true, mc: { pf: 5e-5, cov: 0.2, samples: 400000, survived: 390000, failures: 20, seed: 1 } },
+      survival: { loads: [{ path: 'evidence[0].load', mean: 1e6, random: false, date: 'winter' }], beta: 3.9, pf: 4.8e-5, pSurvival: 0.97, rho: 0.5, converged: true, mc: { pf: 5e-5, cov: 0.2, samples: 400000, survived: 390000, failures: 20, seed: 1 },
+        importance: { pf: 4.6e-5, beta: 3.91, cov: 0.09, samples: 1536, hits: 700, centre: 'the design point of failure and survival together', survivalMethod: 'mc', seed: 1 },
+        check: { agrees: true, reason: 'importance sampling gives β = 3.91 (…), which agrees with FORM’s β = 3.90', method: 'is' } },
       densities: [{ path: 'column.ends.bottom.rotation', description: 'bottom connection rotational stiffness', kind: 'rotationalStiffness', points, tests: [1.6e6, 1.8e6, 1.9e6] }],
     },
     testPlans: {
@@ -58,6 +60,14 @@ describe('measurement sections', () => {
     const p = doc.sections.find((s) => s.id === 'testPlans')!;
     const ptable = p.blocks.find((b) => b.kind === 'table');
     expect(ptable && ptable.kind === 'table' ? ptable.rows.map((r) => r[1]) : []).toEqual(['two coupons', 'three base tests']);
+  });
+  it('states the importance-sampling check of the survival step beside the Monte Carlo one', () => {
+    const m = buildReportDocument(input, 'si', charts).sections.find((s) => s.id === 'measurements')!;
+    const texts = m.blocks.flatMap((b) => (b.kind === 'paragraph' || b.kind === 'callout' ? [b.text] : []));
+    const survival = texts.find((t) => t.startsWith('Survived load'))!;
+    expect(survival).toMatch(/Importance sampling \(1536 samples centred at the design point of failure and survival together, P\(h > 0\) by crude Monte Carlo, seed 1\): pf = .*β = 3\.91 \(CoV 0\.09\)/);
+    expect(survival).toMatch(/Crude Monte Carlo check \(400000 samples/);
+    expect(texts.some((t) => /checked by its importance-sampling ratio.*Importance sampling gives β = 3\.91/.test(t))).toBe(true);
   });
   it('leaves both out without evidence', () => {
     const doc = buildReportDocument(demoReportInput(), 'si', buildCharts(demoReportInput(), 'si'));

@@ -81,6 +81,27 @@ describe('the steps of the evidence (example scenario)', () => {
     expect(a.verdict.reason).toMatch(/The verdict rests on the conditional β/);
   });
 
+  it('checks the conditional FORM β of the example by importance sampling, which agrees with it', async () => {
+    const a = await assessed();
+    const sv = a.measurements!.survival!;
+    // the example's conditional FORM β (README's worked example; unchanged by the new check)
+    expect(sv.beta).toBeCloseTo(3.83, 2);
+    const r = sv.importance!;
+    expect(r.cov).toBeLessThanOrEqual(0.1); // the default target CoV
+    expect(r.reachedTarget).toBe(true);
+    expect(r.joint.hits).toBeGreaterThan(10);
+    // the importance-sampling check decides, and agrees: FORM's β within 4 standard errors + 0.1 of it (formCheck.ts rule)
+    expect(sv.check!.method).toBe('is');
+    expect(sv.importanceCheck!.agrees).toBe(true);
+    expect(Math.abs(r.beta - sv.beta)).toBeLessThan(0.2);
+    // the crude Monte Carlo check is kept beside it, with its own verdict
+    expect(sv.mcCheck!.method).toBe('mc');
+    expect(a.governing.basis).toBe('FORM given the survived loads, checked by importance sampling');
+    // importance sampling of the ratio with P(h > 0) ≈ 0.92 by crude sampling: a few thousand calls, not 800 000
+    expect(r.survival.method).toBe('mc');
+    expect(r.calls).toBeLessThan(20_000);
+  });
+
   it('writes the steps to result.json under measurements, beside evidence_update', async () => {
     const a = await assessed();
     const doc = JSON.parse(JSON.stringify(assessmentJson(a, META)));
@@ -93,6 +114,10 @@ describe('the steps of the evidence (example scenario)', () => {
     expect(doc.evidence_update.beta_prior).toBe(m.after_tests.beta);
     expect(doc.evidence_update.beta_posterior).toBe(m.after_measurements.beta);
     expect(typeof m.survival.mc_agrees).toBe('boolean');
+    expect(typeof m.survival.importance_agrees).toBe('boolean');
+    expect(m.survival.check_method).toBe('is');
+    expect(Object.keys(m.survival.importance)).toEqual(['pf', 'beta', 'cov', 'samples', 'calls', 'centre', 'centre_u', 'centre_converged', 'joint', 'survival', 'target_cov', 'reached_target', 'seed']);
+    expect(m.survival.importance.beta).toBe(a.measurements!.survival!.importance!.beta);
     expect(doc.reliability.governing.beta).toBe(a.governing.beta);
     expect(doc.reliability.governing_unconditional.beta).toBe(a.governingUnconditional!.beta);
     expect(doc.reliability.meets_target).toBe(a.governing.beta >= doc.reliability.target_beta);

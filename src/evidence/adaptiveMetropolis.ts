@@ -17,7 +17,7 @@ import { throwIfInterrupted } from '../runtime/interruptFlag.js';
 import { EvidenceError } from './evidenceError.js';
 
 /** Stream range of the posterior sampler: chain c draws normals from base + 2c, uniforms from base + 2c + 1. */
-export const POSTERIOR_STREAM_BASE = 7 * 2 ** 32; // after the ranges of reliability/streams.ts (0 … 6·2³²)
+export const POSTERIOR_STREAM_BASE = 7 * 2 ** 32; // between the ranges of reliability/streams.ts (0 … 6·2³², then 8·2³²)
 
 export interface PosteriorSamplerOptions {
   seed: number;

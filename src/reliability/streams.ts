@@ -14,8 +14,11 @@ export const FORM_CHECK_STREAM_BASE = 4 * 2 ** 32;
 export const CONDITIONAL_STREAM_BASE = 5 * 2 ** 32;
 /** Simulated outcomes of planned tests (studies/testPlanning.ts): stream base + plan index. */
 export const TEST_PLAN_STREAM_BASE = 6 * 2 ** 32;
+/*
+ * 7·2³² is the posterior sampler's (evidence/adaptiveMetropolis.ts POSTERIOR_STREAM_BASE: + chain index).
+ */
 /**
  * Importance sampling of a failure given a survived proof load (conditionalImportance.ts):
  * stream base for the joint event, base + 1 for the probability of the survival.
  */
-export const CONDITIONAL_IS_STREAM_BASE = 7 * 2 ** 32;
+export const CONDITIONAL_IS_STREAM_BASE = 8 * 2 ** 32;

@@ -1,10 +1,13 @@
 /**
  * What the end connections carry, and how stiff they are by EN 1993-1-8's joint classes, at one point
  * x of the variables (the means for `check`, the FORM design point for `assess`). The numbers come
- * from mechanics/endSpringMoments.ts and mechanics/jointClassification.ts; this file only picks the
- * inputs out of the scenario.
+ * from mechanics/endSpringMoments.ts, mechanics/beamColumn.ts (mechanics/steppedBeamColumn.ts for a corroded
+ * zone) and mechanics/jointClassification.ts; this file only picks the inputs out of the scenario.
  */
 import { beamColumnResponse } from '../mechanics/beamColumn.js';
+import { steppedResponse } from '../mechanics/steppedBeamColumn.js';
+import { steppedCriticalLoad, steppedMode } from '../mechanics/steppedColumn.js';
+import type { ColumnState, SoundSection } from '../mechanics/types.js';
 import { endSpringMoments, type EndSpringMoments } from '../mechanics/endSpringMoments.js';
 import {
   beamJointBoundaries, classifyJoint, columnBaseBoundaries, pinnedRelativeSlenderness,
@@ -35,6 +38,7 @@ export type ConnectionResponse = EndSpringMoments & {
 export function connectionResponseAt(model: ColumnModel, x: Float64Array): ConnectionResponse {
   const st = model.state(x);
   const P = model.demand(x);
+  if (st.sound !== undefined && P > 0 && st.E * st.I > 0 && Number.isFinite(st.E * st.I)) return steppedConnectionResponse(st, st.sound, P);
   const bowed = endSpringMoments(st.E * st.I, st.L, st.frame, st.r, st.bow, P);
   const e = st.eccentricity;
   if (e === undefined) return bowed;
@@ -53,6 +57,39 @@ export function connectionResponseAt(model: ColumnModel, x: Float64Array): Conne
     drift: b.drift,
     eccentricity: e,
     ...(actions ? { transverse: actions } : {}),
+  };
+}
+
+/**
+ * A stepped member (a corroded zone near the base): the exact stepped response (mechanics/steppedBeamColumn.ts)
+ * under the bow and any end couples, line load and top force, rather than the zone's section over the whole length.
+ */
+function steppedConnectionResponse(st: ColumnState, sound: SoundSection, P: number): ConnectionResponse {
+  const member = { ratio: sound.I / st.I, zone: Math.min(1, Math.max(0, sound.from / st.L)) };
+  const EI1 = st.E * st.I;
+  const { Pcr, phi } = steppedCriticalLoad(EI1, st.L, st.frame, st.r, member);
+  const e = st.eccentricity ?? { bottom: 0, top: 0 };
+  const t = st.transverse;
+  const actions = t === undefined ? undefined : { line: t.line * P, top: st.frame === 'sway' ? t.top * P : 0 };
+  const bow = Math.abs(st.bow);
+  const extra = { ...(st.eccentricity ? { eccentricity: e } : {}), ...(actions ? { transverse: actions } : {}) };
+  const base = { load: P, bow, Pcr };
+  if (!(Pcr > 0) || !(P < Pcr)) {
+    return {
+      stable: false, ...base, amplification: Infinity, rotation: { bottom: Infinity, top: Infinity }, springMoment: { bottom: Infinity, top: Infinity },
+      memberMax: Infinity, memberMaxAt: NaN, drift: Infinity, ...extra,
+    };
+  }
+  const r = steppedResponse(
+    {
+      frame: st.frame, r: st.r, L: st.L, EI1, ratio: member.ratio, zone: member.zone, eB: e.bottom, eT: e.top,
+      q: ((actions?.line ?? 0) / P) * st.L * st.L, h: ((actions?.top ?? 0) / P) * st.L, bow, Pcr, mode: steppedMode(st.frame, st.r, member, phi),
+    },
+    P,
+  );
+  return {
+    stable: r.stable, ...base, amplification: 1 / (1 - P / Pcr), rotation: r.rotation, springMoment: r.springMoment,
+    memberMax: r.memberMax, memberMaxAt: r.memberMaxAt, drift: r.drift, ...extra,
   };
 }
 

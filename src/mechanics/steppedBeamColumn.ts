@@ -215,3 +215,73 @@ export function steppedEccentricFirstYieldCapacity(c: SteppedBeamColumn, sec: St
   }
   return c.Pcr;
 }
+
+/** What the stepped member's end springs carry at P (as mechanics/endSpringMoments.ts and beamColumn.ts). */
+export interface SteppedResponse {
+  /** false when P ≥ Pcr (or a mechanism): every value is Infinity */
+  stable: boolean;
+  /** end rotations θ (rad) */
+  rotation: { bottom: number; top: number };
+  /** moment taken by each end spring, k·θ (N·m): P e_B − M(0) at the bottom, M(L) − P e_T at the top, 0 at a pinned end */
+  springMoment: { bottom: number; top: number };
+  /** largest |M| over the height (N·m) and where (m above the base) */
+  memberMax: number;
+  memberMaxAt: number;
+  /** the top's added sideways displacement v(L) (m); 0 when braced */
+  drift: number;
+  /** +1 or −1: the side of the bow (its deflection ±|e0|·ŵ) that gives memberMax */
+  bowSide: number;
+}
+
+/**
+ * The full response of the stepped member at 0 < P: end rotations, spring moments, the largest moment
+ * and the top's drift, the bow on the side that gives the larger moment over the whole member (as
+ * beamColumnResponse does for the prismatic column).
+ */
+export function steppedResponse(c: SteppedBeamColumn, P: number): SteppedResponse {
+  if (!(c.Pcr > 0) || !(P < c.Pcr) || !(P > 0)) {
+    return { stable: false, rotation: { bottom: Infinity, top: Infinity }, springMoment: { bottom: Infinity, top: Infinity }, memberMax: Infinity, memberMaxAt: NaN, drift: Infinity, bowSide: 1 };
+  }
+  const scratch = steppedScratch();
+  const phi = c.L * Math.sqrt(P / c.EI1);
+  fillSystem(scratch.system, c, phi);
+  const k = scratch.coefficients;
+  solve8(scratch.system, k);
+  const ratio = P / c.Pcr;
+  const a = (Math.abs(c.bow) * ratio) / (1 - ratio);
+  const amp = c.Pcr * a;
+  const lambda = 1 - c.zone;
+  const k1 = phi, k2 = phi / Math.sqrt(c.ratio);
+  // the larger moment over both segments decides the bow's side. SteppedMode.moment is E·I ŵ''
+  // (steppedColumn.ts), the bending moment of a deflection +ŵ is −E·I ŵ'': the bow's part of M carries −side
+  let best = -1, bestAt = 0, side = 1;
+  for (const s of [1, -1]) {
+    for (let seg = 0; seg < 2; seg++) {
+      const length = seg === 0 ? c.zone : lambda;
+      const mode = c.mode.segments[seg];
+      if (!(length > 0) || mode === undefined) continue;
+      const e = seg === 0 ? 1 : c.ratio;
+      const kappa = seg === 0 ? k1 : k2;
+      const offset = (P * c.q * e) / (phi * phi);
+      const v = maxAbsTwoSinusoids(P, k[4 * seg], k[4 * seg + 1], kappa * length, -s * amp, mode.sin, mode.cos, mode.kappa * length, scratch.at, offset);
+      if (v > best) { best = v; bestAt = (mode.from + scratch.at[0] * length) * c.L; side = s; }
+    }
+  }
+  const offset1 = (P * c.q) / (phi * phi);
+  const offset2 = (P * c.q * c.ratio) / (phi * phi);
+  const s2 = Math.sin(k2 * lambda), c2 = Math.cos(k2 * lambda);
+  const m0 = P * k[1] - offset1 - side * amp * c.mode.moment(0);
+  const m1 = P * (k[4] * s2 + k[5] * c2) - offset2 - side * amp * c.mode.moment(1);
+  const slope0 = k[0] * k1 + k[2] + side * a * c.mode.slope(0);
+  const slope1 = k[4] * k2 * c2 - k[5] * k2 * s2 + k[6] + c.q * lambda + side * a * c.mode.slope(1);
+  const top = k[4] * s2 + k[5] * c2 + k[6] * lambda + k[7] + 0.5 * c.q * lambda * lambda + side * a * c.mode.sample(1);
+  return {
+    stable: true,
+    rotation: { bottom: slope0 / c.L, top: slope1 / c.L },
+    springMoment: { bottom: c.r.bottom === 0 ? 0 : P * c.eB - m0, top: c.r.top === 0 ? 0 : m1 - P * c.eT },
+    memberMax: best,
+    memberMaxAt: bestAt,
+    drift: c.frame === 'sway' ? top : 0,
+    bowSide: side,
+  };
+}

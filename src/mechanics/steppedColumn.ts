@@ -172,6 +172,8 @@ export interface SteppedMode {
   readonly phi: number;
   /** w(ξ), ξ = x/L, normalised so that the largest |w| is +1 (deviation from the vertical through the base) */
   sample(xi: number): number;
+  /** dw/dξ of the same normalised shape */
+  slope(xi: number): number;
   /** M(ξ)/(Pcr · max|w|): the bending moment of the mode per unit of axial load and bow amplitude */
   moment(xi: number): number;
   /** max over the lower segment of |M|/(Pcr max|w|): the curvature factor of the zone */
@@ -215,7 +217,7 @@ function sinusoidZeros(c0: number, p: number, q: number, uEnd: number, out: numb
 export function steppedMode(frame: Frame, r: EndRestraint, m: SteppedMember, phi: number): SteppedMode {
   checkMember(m);
   if (!(phi >= 0 && Number.isFinite(phi))) throw new RangeError(`phi must be finite and >= 0 (got ${phi})`);
-  if (phi === 0) return { phi, sample: (xi) => xi, moment: () => 0, zoneFactor: 0, upperFactor: 0, segments: [] };
+  if (phi === 0) return { phi, sample: (xi) => xi, slope: () => 1, moment: () => 0, zoneFactor: 0, upperFactor: 0, segments: [] };
   const p = steppedParams(frame, r, m);
   const s = new Float64Array(8);
   baseStates(s, p);
@@ -292,6 +294,7 @@ export function steppedMode(frame: Frame, r: EndRestraint, m: SteppedMember, phi
   return {
     phi,
     sample: (xi) => at(xi)[0] / wMax,
+    slope: (xi) => at(xi)[1] / wMax,
     moment: (xi) => at(xi)[2] / scaleM,
     zoneFactor,
     upperFactor,

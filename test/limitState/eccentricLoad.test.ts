@@ -162,3 +162,26 @@ describe('eccentricity input errors: exit 2, the field named', () => {
     expect(r.status).toBe(0);
   });
 });
+
+describe('connection moments of a column with a corroded zone', () => {
+  // common practice: the stepped member is solved as such (mechanics/steppedBeamColumn.ts, checked against finite
+  // elements with segment-wise E·I in test/mechanics/steppedBeamColumn.test.ts), not with the zone's section over the
+  // whole length: the stiffer sound part above the zone turns less, so the springs carry less than with the whole-length loss
+  it('the facade demo: the stepped response at the means, below the whole-length loss at both ends', () => {
+    const text = readFileSync(new URL('../../scenarios/facade-h-column.yaml', import.meta.url), 'utf8');
+    const zoned = loadScenario(text, 'f.yaml');
+    const whole = loadScenario(text.replace(/\n\s*zone: \{height: 400 mm\}/, ''), 'f.yaml');
+    expect(whole.column.section.geometry?.corrosion?.zoneHeight).toBeUndefined();
+    const mZ = buildColumnModel(zoned);
+    const mW = buildColumnModel(whole);
+    const rZ = connectionResponseAt(mZ, Float64Array.from(mZ.mean));
+    const rW = connectionResponseAt(mW, Float64Array.from(mW.mean));
+    expect(rZ.stable && rW.stable).toBe(true);
+    for (const end of ['bottom', 'top'] as const) {
+      expect(Math.abs(rZ.springMoment[end])).toBeLessThan(Math.abs(rW.springMoment[end]));
+      expect(Math.abs(rZ.rotation[end])).toBeLessThan(Math.abs(rW.rotation[end]));
+    }
+    expect(rZ.Pcr).toBeGreaterThan(rW.Pcr);
+    expect(rZ.eccentricity).toEqual(rW.eccentricity);
+  });
+});

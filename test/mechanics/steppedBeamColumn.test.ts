@@ -11,7 +11,7 @@ import { criticalLoad } from '../../src/mechanics/criticalLoad.js';
 import { eccentricFirstYieldCapacity } from '../../src/mechanics/eccentricFirstYield.js';
 import { modeShape } from '../../src/mechanics/modeShape.js';
 import {
-  steppedEccentricFirstYieldCapacity, steppedFirstYieldMargin, steppedMaxMoments, steppedScratch, type SteppedBeamColumn,
+  steppedEccentricFirstYieldCapacity, steppedFirstYieldMargin, steppedMaxMoments, steppedResponse, steppedScratch, type SteppedBeamColumn,
 } from '../../src/mechanics/steppedBeamColumn.js';
 import { steppedCriticalLoad, steppedMode } from '../../src/mechanics/steppedColumn.js';
 import type { ColumnState, EndRestraint, Frame } from '../../src/mechanics/types.js';
@@ -178,5 +178,40 @@ describe('first-yield capacity of the stepped member', () => {
     for (const model of ['en1993-b', 'aisc360-e3'] as const) {
       expect(columnCapacity(model, state('sway', r, 0.4, actions)).capacity).toBe(columnCapacity(model, state('sway', r, 'whole', actions)).capacity);
     }
+  });
+});
+
+describe('what the end springs of a stepped member carry', () => {
+  // common practice: equal stiffness in both segments is the prismatic member (beamColumn.ts)
+  it.each(CASES)('no step: the prismatic response, %s %o %o', (frame, r, a) => {
+    const { Pcr } = criticalLoad(EI1, L, frame, r);
+    const P = 0.55 * Pcr;
+    const bow = L / 900;
+    const prismatic = beamColumnResponse(EI1, L, frame, r, bow, a.eB, a.eT, P, { line: a.w, top: a.H });
+    const got = steppedResponse(member(frame, r, 1, 0.35, a, bow, P), P);
+    const scale = prismatic.memberMax;
+    for (const end of ['bottom', 'top'] as const) {
+      expect(Math.abs(got.springMoment[end] - prismatic.springMoment[end]) / scale).toBeLessThan(1e-9);
+      expect(Math.abs(got.rotation[end] - prismatic.rotation[end]) / ((scale * L) / EI1)).toBeLessThan(1e-9);
+    }
+    expect(rel(got.memberMax, prismatic.memberMax)).toBeLessThan(1e-9);
+    expect(Math.abs(got.drift - prismatic.drift) / ((scale * L * L) / EI1)).toBeLessThan(1e-9);
+  });
+
+  // source: finite elements with segment-wise E·I as above (Przemieniecki 1968, from memory)
+  it.each(CASES)('a real step against finite elements, %s %o %o', (frame, r, a) => {
+    const ratio = 1.6, zone = 0.25, elements = 240;
+    const { Pcr } = steppedCriticalLoad(EI1, L, frame, r, { ratio, zone });
+    const P = 0.6 * Pcr;
+    const bow = L / 1000;
+    const c = member(frame, r, ratio, zone, a, bow, P);
+    const got = steppedResponse(c, P);
+    const fe = feSecondOrder(EI1, L, frame, r, P, modeNodes(c, elements, got.bowSide * bow), { bottom: P * a.eB, top: -P * a.eT }, { line: a.w, top: a.H }, (xi) => (xi < zone ? 1 : ratio));
+    const scale = got.memberMax;
+    for (const end of ['bottom', 'top'] as const) {
+      expect(Math.abs(fe.springMoment[end] - got.springMoment[end]) / scale).toBeLessThan(2e-4);
+      expect(Math.abs(fe.rotation[end] - got.rotation[end]) / ((scale * L) / EI1)).toBeLessThan(2e-4);
+    }
+    expect(rel(fe.memberMax, got.memberMax)).toBeLessThan(2e-4);
   });
 });

@@ -53,6 +53,8 @@ export async function runRestraint(file: string, opts: RestraintOptions): Promis
   }
   const ends = r.study.ends;
   const betaLabel = r.verification.method === 'form' ? 'FORM β' : 'β (IS check)';
+  // survived loads: every β shown is the one given them (docs/evidence.md §8)
+  const given = r.survival ? ' given the survived loads' : '';
   const rows: string[][] = [[...ends.map((e) => `${e} mean k`), betaLabel, 'pf', '']];
   // the root solve adds its iterates to the curve: show the grid once, plus the point nearest the root
   const required = r.study.requiredFactor;
@@ -76,7 +78,7 @@ export async function runRestraint(file: string, opts: RestraintOptions): Promis
   }
   const out = [
     `stanchion restraint: ${scenario.title}`,
-    `  ${betaLabel} as the mean stiffness of the ${ends.join(' and ')} connection${ends.length > 1 ? 's' : ''}${r.axis ? ` about ${r.axis.axis}` : ''} is scaled (coefficient of variation kept); target β = ${r.study.target}`,
+    `  ${betaLabel}${given} as the mean stiffness of the ${ends.join(' and ')} connection${ends.length > 1 ? 's' : ''}${r.axis ? ` about ${r.axis.axis}` : ''} is scaled (coefficient of variation kept); target β = ${r.study.target}`,
     ...(r.axis ? [`  axis ${r.axis.axis} ${r.axis.basis === 'asked' ? 'as asked (--axis)' : 'governs'}; β is the whole column's (min over both axes); axis ${r.axis.other.axis} alone: β = ${formatBeta(r.axis.other.beta)}, the same at every stiffness studied`] : []),
     '',
     textTable(rows),
@@ -100,11 +102,12 @@ function restraintResultLine(r: ColumnRestraintResult, system: UnitSystem): stri
   });
   // with two axes the study varies the ends about one of them (docs/sections.md)
   const about = r.axis ? ` about ${r.axis.axis}` : '';
+  const given = r.survival ? ' given the survived loads' : '';
   if (r.axis?.other.capsTarget) {
-    return `result: no mean rotational stiffness${about} reaches the target β = ${formatBeta(r.study.target)}: axis ${r.axis.other.axis} alone has β = ${formatBeta(r.axis.other.beta)}`;
+    return `result: no mean rotational stiffness${about} reaches the target β = ${formatBeta(r.study.target)}${given}: axis ${r.axis.other.axis} alone has β = ${formatBeta(r.axis.other.beta)}`;
   }
   if (r.study.outcome === 'pinned-suffices') {
-    return `result: no rotational restraint${about} needs to be relied on: the target β = ${formatBeta(r.study.target)} is met with pinned ${r.study.ends.join(' and ')} connections`;
+    return `result: no rotational restraint${about} needs to be relied on: the target β = ${formatBeta(r.study.target)}${given} is met with pinned ${r.study.ends.join(' and ')} connections`;
   }
-  return `result: for the target β = ${formatBeta(r.study.target)} the mean rotational stiffness${about} must be ${parts.join('; ')}`;
+  return `result: for the target β = ${formatBeta(r.study.target)}${given} the mean rotational stiffness${about} must be ${parts.join('; ')}`;
 }

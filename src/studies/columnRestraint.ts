@@ -1,7 +1,8 @@
 /**
  * The restraint justification for a column: FORM β as the mean rotational stiffness of the studied
  * ends is multiplied by one common factor (docs/json-output.md `restraint`), the least stiffness that
- * reaches the target, and a sentence a reviewer can read.
+ * reaches the target, and a sentence a reviewer can read. With survived loads every β of the study
+ * is the one given the survival (docs/evidence.md §8), as in the verdict of `assess`.
  */
 import { buildColumnModel, type AxisName } from '../limitState/columnModel.js';
 import { endsAbout, endsPath, scaleScalar, withEndStiffness, withScalar } from '../limitState/scenarioEdits.js';
@@ -19,6 +20,7 @@ import { restraintStudy, type RestraintStudyInput, type RestraintStudyResult } f
 import { EQUIVALENT_K_LABEL, restraintSentence, type ShortfallFacts } from './restraintSentence.js';
 import { designAlpha, endRequirement, type DesignAlphaChoice, type EndRequirement } from './restraintRequirement.js';
 import { restraintMaps, restraintMapsJson, type RestraintMaps } from './restraintMaps.js';
+import { requirePossibleSurvival, survivalForm, survivalFormChecked, survivalGoverningBeta } from './survivalForm.js';
 
 export type EndChoice = 'bottom' | 'top' | 'both';
 type EndName = 'bottom' | 'top';
@@ -70,8 +72,26 @@ export interface ColumnRestraintResult {
   maps?: RestraintMaps;
   /** How the requirement's β was established and checked. */
   verification: RestraintVerification;
+  /**
+   * Present when the scenario has survived loads: every β of the study is given the survival
+   * (conditional FORM, checked by conditional importance sampling), with the stiffness edited in
+   * both the failure and the survival margin.
+   */
+  survival?: RestraintSurvivalFacts;
   sentence: string;
   notes: string[];
+}
+
+/** What the study conditioned on, and the assessed β without it. */
+export interface RestraintSurvivalFacts {
+  /** the evidence entries of the survived loads (e.g. `evidence[2]`) */
+  paths: string[];
+  /** FORM β at the assessed stiffness without the survived loads, for comparison */
+  formBetaWithout: number;
+  /** P(the column carries the survived load) by FORM, beforehand, at the reported requirement (null: none reached) */
+  pSurvivalAtRequired: number | null;
+  /** the largest stiffness factor studied at which the column could not have carried the survived load (β taken as −∞); null: none */
+  impossibleUpTo: number | null;
 }
 
 /** One FORM β that decides the study, against its sampling check. */
@@ -94,10 +114,19 @@ export interface RestraintVerification {
 }
 
 
+/** A β with its sampling check: the unconditional one (columnForm.ts) or the one given survived loads (survivalForm.ts). */
+export interface RestraintCheckedPoint extends BetaPoint {
+  check?: { agrees: boolean; method: string };
+  checkBeta: number;
+  checkPf: number;
+  /** why there is no check (default: nothing random) */
+  noCheck?: string;
+}
+
 /** FORM β and its sampling check at one factor of a study. */
 export interface RestraintEvaluators {
   form: (factor: number) => BetaPoint;
-  checked: (factor: number) => CheckedBetaPoint;
+  checked: (factor: number) => RestraintCheckedPoint | CheckedBetaPoint;
 }
 
 /**
@@ -114,7 +143,8 @@ export function verifiedRestraintStudy(
   const checkAt = (role: RestraintCheckPoint['role'], factor: number): RestraintCheckPoint => {
     const p = evaluate.checked(factor);
     const agrees = p.check ? p.check.agrees : true;
-    return { role, factor, formBeta: p.beta, checkBeta: p.checkBeta, checkMethod: p.check?.method ?? 'none (nothing random)', agrees };
+    const none = ('noCheck' in p && p.noCheck) || 'none (nothing random)';
+    return { role, factor, formBeta: p.beta, checkBeta: p.checkBeta, checkMethod: p.check?.method ?? none, agrees };
   };
   const checks = decidingPoints(formStudy).map(([role, f]) => checkAt(role, f));
   const required = checks.find((c) => c.role === 'required');
@@ -135,6 +165,18 @@ function scenarioEvaluators(build: (factor: number) => Scenario, seed: number): 
   return { form: (f) => scenarioForm(build(f)), checked: (f) => scenarioFormChecked(build(f), seed) };
 }
 
+/**
+ * Conditional FORM and its conditional importance-sampling check at each factor (survived loads).
+ * `impossible` collects the factors at which the survival could not have happened.
+ */
+function survivalEvaluators(build: (factor: number) => Scenario, seed: number, impossible: Set<number>): RestraintEvaluators {
+  const seen = <T extends { impossible: boolean }>(f: number, p: T): T => {
+    if (p.impossible) impossible.add(f);
+    return p;
+  };
+  return { form: (f) => seen(f, survivalForm(build(f))), checked: (f) => seen(f, survivalFormChecked(build(f), seed)) };
+}
+
 /** The factors whose β decides the outcome of a study, and the assessed one. */
 function decidingPoints(study: RestraintStudyResult): [RestraintCheckPoint['role'], number][] {
   const out: [RestraintCheckPoint['role'], number][] = [];
@@ -145,13 +187,20 @@ function decidingPoints(study: RestraintStudyResult): [RestraintCheckPoint['role
   return out;
 }
 
-function verificationSentence(v: RestraintVerification): string {
+function verificationSentence(v: RestraintVerification, conditioned = false): string {
   const bad = v.checks.filter((c) => !c.agrees);
+  const given = conditioned ? ` ${GIVEN_SURVIVAL}` : '';
   if (v.method === 'form') {
-    return `FORM's β was confirmed by a sampling check at ${v.checks.map((c) => roleText(c)).join(' and ')}.`;
+    if (!conditioned) return `FORM's β was confirmed by a sampling check at ${v.checks.map((c) => roleText(c)).join(' and ')}.`;
+    // given survived loads a point may have no check at all (no sample survived the load there)
+    const checked = v.checks.filter((c) => !c.checkMethod.startsWith('none'));
+    const unchecked = v.checks.filter((c) => c.checkMethod.startsWith('none'));
+    const confirmed = checked.length ? `FORM's β${given} was confirmed by a sampling check of the same conditional probability at ${checked.map((c) => roleText(c)).join(' and ')}.` : '';
+    const open = unchecked.length ? `${confirmed ? ' ' : ''}At ${unchecked.map((c) => `${roleText(c)} (${c.checkMethod})`).join(' and ')} FORM's β${given} stands unchecked.` : '';
+    return confirmed + open;
   }
   const where = bad.map((c) => `${roleText(c)} (FORM β ${c.formBeta.toFixed(2)}, check ${c.checkBeta.toFixed(2)})`).join(' and ');
-  return `FORM disagreed with its sampling check at ${where}, so the requirement could not be established by FORM: the study above uses the check's importance-sampling β at every point (common random numbers).`;
+  return `FORM${given} disagreed with its sampling check at ${where}, so the requirement could not be established by FORM: the study above uses the check's ${conditioned ? 'estimate' : 'importance-sampling β'} at every point (common random numbers).`;
 }
 
 function roleText(c: RestraintCheckPoint): string {
@@ -299,6 +348,8 @@ export interface RestraintConfirmation {
 }
 
 const MAX_RAISES = 8;
+/** β short of the target by less than this is the root solve's own rounding, not a shortfall (a root by the governing method itself). */
+const ROOT_BETA_SLACK = 1e-6;
 /** the largest single raise, in ln(factor): ×4 */
 const MAX_RAISE_STEP = Math.log(4);
 
@@ -319,7 +370,7 @@ async function confirmRequirement(
   let f = root;
   let g = await governing(edited(f));
   let previous: { lnF: number; beta: number } | null = null;
-  for (let k = 0; k < MAX_RAISES && g.beta < study.target; k++) {
+  for (let k = 0; k < MAX_RAISES && g.beta < study.target - ROOT_BETA_SLACK; k++) {
     // from the second raise on, the governing method's own slope (secant) where it is flatter than
     // the study curve's: near a cap set by the other axis the governing β rises ever more slowly
     const secant = previous === null ? 0 : (g.beta - previous.beta) / (Math.log(f) - previous.lnF);
@@ -329,7 +380,7 @@ async function confirmRequirement(
     f *= Math.exp(step);
     g = await governing(edited(f));
   }
-  return { method: g.method, beta: g.beta, rootFactor: root, raisedBy: f / root, confirmed: g.beta >= study.target };
+  return { method: g.method, beta: g.beta, rootFactor: root, raisedBy: f / root, confirmed: g.beta >= study.target - ROOT_BETA_SLACK };
 }
 
 export async function columnRestraint(s: Scenario, opts: ColumnRestraintOptions = {}): Promise<ColumnRestraintResult> {
@@ -343,6 +394,14 @@ export async function columnRestraint(s: Scenario, opts: ColumnRestraintOptions 
       `no end of this column${where} is given as a rotational spring ({rotation: ...}); choose the end to study with --end bottom|top|both${s.column.axisZ === undefined ? '' : ' or the axis with --axis y|z'}`,
     );
   }
+  // survived loads: every β below is the one given the survival (docs/evidence.md §8)
+  const conditioned = (s.survivedLoads?.length ?? 0) > 0;
+  if (conditioned) {
+    if (opts.method === 'sorm') throw new InputError('--method', 'expected form or is: this scenario has survived loads, and β given the survival is computed by FORM (two margins) or importance sampling, not by SORM');
+    requirePossibleSurvival(s);
+  }
+  // factors of the study (not of the known-stiffness variant) at which the survival could not have happened
+  const impossible = new Set<number>();
   const notes: string[] = [];
   const base: Record<string, Scalar> = {};
   for (const e of ends) base[e] = baseScalar(s, e, axis, notes);
@@ -356,21 +415,27 @@ export async function columnRestraint(s: Scenario, opts: ColumnRestraintOptions 
   for (const e of ends) baseStiffness[e] = meanValue(base[e]);
   const seed = s.analysis.seed ?? 1;
   const target = s.targetBeta;
+  // given survived loads β need not rise with the stiffness: the requirement is the crossing above which it stays reached
+  const crossing = conditioned ? { crossing: 'last' as const } : {};
 
-  const solve = (build: (f: number) => Scenario) => {
-    const evaluate = scenarioEvaluators(build, seed);
-    if (!opts.method) return verifiedRestraintStudy(evaluate, { baseStiffness, target });
-    const betaAt = methodEvaluator(opts.method, build, seed);
-    const study = restraintStudy({ baseStiffness, target, betaAtFactor: betaAt });
+  const solve = (build: (f: number) => Scenario, seen = impossible) => {
+    const evaluate = conditioned ? survivalEvaluators(build, seed, seen) : scenarioEvaluators(build, seed);
+    if (!opts.method) return verifiedRestraintStudy(evaluate, { baseStiffness, target, ...crossing });
+    const betaAt = methodEvaluator(opts.method, build, seed, conditioned);
+    const study = restraintStudy({ baseStiffness, target, betaAtFactor: betaAt, ...crossing });
     return { study, verification: { method: opts.method, checks: [], verifiedBeta: null } as RestraintVerification };
   };
   const solved = solve((f) => edited(f));
   let study = solved.study;
   const verification = solved.verification;
+  // the verdict's own rule given the survived loads replaces the unconditional assessment
+  const governing: GoverningAssessor | undefined = opts.governing && conditioned
+    ? async (t) => survivalGoverningBeta(t, seed)
+    : opts.governing;
 
   let confirmation: RestraintConfirmation | null = null;
-  if (opts.governing && study.outcome === 'reached' && study.requiredFactor !== null) {
-    confirmation = await confirmRequirement(study, (f) => edited(f), opts.governing);
+  if (governing && study.outcome === 'reached' && study.requiredFactor !== null) {
+    confirmation = await confirmRequirement(study, (f) => edited(f), governing);
     if (confirmation.raisedBy !== 1) {
       const f = confirmation.rootFactor * confirmation.raisedBy;
       const required = Object.fromEntries(ends.map((e) => [e, f * baseStiffness[e]]));
@@ -424,14 +489,15 @@ export async function columnRestraint(s: Scenario, opts: ColumnRestraintOptions 
   // the same study with the studied springs known exactly: the reliability-equivalent K
   const fixedBase: Record<string, Scalar> = {};
   for (const e of ends) fixedBase[e] = { kind: 'fixed', value: baseStiffness[e] };
-  const exact = solve((fct) => edited(fct, fixedBase));
+  // known exactly, a stiffness too low to carry the survived load is simply refuted: not noted
+  const exact = solve((fct) => edited(fct, fixedBase), new Set<number>());
   if (exact.verification.method === 'is' && !opts.method) {
     notes.push('with the connections known exactly, FORM disagreed with its sampling check; that K comes from importance sampling');
   }
   let kDeterministic = exact.study.requiredFactor === null ? null : kWith(edited(exact.study.requiredFactor, fixedBase));
   // never print a K that contradicts the verdict at the assessed stiffness
   const kAssessed = kWith(s);
-  const assessed = opts.governing ? await opts.governing(s) : null;
+  const assessed = governing ? await governing(s) : null;
   const assessedBeta = assessed ? assessed.beta : study.curve.find((p) => p.factor === 1)?.beta ?? NaN;
   if (kDeterministic !== null && Number.isFinite(kDeterministic) && Number.isFinite(assessedBeta)) {
     const meets = assessedBeta >= target;
@@ -445,10 +511,10 @@ export async function columnRestraint(s: Scenario, opts: ColumnRestraintOptions 
   if (kDeterministic !== null && !Number.isFinite(kDeterministic)) kDeterministic = null;
 
   let shortfall: ShortfallFacts | undefined;
-  if (study.outcome === 'unreachable') shortfall = loadsForTarget(edited(Infinity), target, opts.method ?? verification.method, seed);
+  if (study.outcome === 'unreachable') shortfall = loadsForTarget(edited(Infinity), target, opts.method ?? verification.method, seed, conditioned);
 
   const system = opts.units ?? s.displayUnits;
-  const wording = { formatStiffness: (k: number) => formatQuantity(k, 'rotationalStiffness', system) };
+  const wording = { formatStiffness: (k: number) => formatQuantity(k, 'rotationalStiffness', system), ...(conditioned ? { condition: GIVEN_SURVIVAL } : {}) };
   const facts = reached && requirement && kAtRequired !== null && kDesign !== null
     ? { reached: { requirement, k: kAtRequired, kDesign, factor: f as number } }
     : { shortfall };
@@ -468,14 +534,52 @@ export async function columnRestraint(s: Scenario, opts: ColumnRestraintOptions 
   const parts = [...(axisFacts ? [axisLead(axisFacts, ends)] : []), restraintSentence(study, wording, facts)];
   if (axisFacts) parts.push(otherAxisSentence(axisFacts, target));
   if (kDeterministic !== null) parts.push(`${EQUIVALENT_K_LABEL}: ${kDeterministic.toFixed(2)}.`);
-  parts.push(opts.method ? methodSentence(opts.method, confirmation) : `${verificationSentence(verification)}${confirmation ? ` ${confirmationSentence(confirmation)}` : ''}`);
+  parts.push(opts.method ? methodSentence(opts.method, confirmation, conditioned) : `${verificationSentence(verification, conditioned)}${confirmation ? ` ${confirmationSentence(confirmation, conditioned)}` : ''}`);
   const sentence = parts.join(' ');
 
-  const maps = opts.maps === false ? undefined : restraintMaps(s, { ends, base, edited, target, required: reached ? study.required as Record<string, number> : null, axis });
+  const maps = opts.maps === false
+    ? undefined
+    : restraintMaps(s, { ends, base, edited, target, required: reached ? study.required as Record<string, number> : null, axis, ...(conditioned ? { betaOf: survivalForm, ...crossing } : {}) });
+  let survival: RestraintSurvivalFacts | undefined;
+  if (conditioned) {
+    const refuted = [...impossible].filter((x) => Number.isFinite(x));
+    survival = {
+      paths: s.survivedLoads!.map((l) => l.path),
+      formBetaWithout: scenarioForm(s).beta,
+      pSurvivalAtRequired: reached ? survivalForm(edited(study.requiredFactor as number)).pSurvival : null,
+      impossibleUpTo: refuted.length ? Math.max(...refuted) : null,
+    };
+    notes.push(...survivalNotes(survival, reached, axisFacts !== undefined));
+    const early = reached ? study.curve.filter((p) => p.factor > 0 && p.factor < (f as number) && p.beta >= target) : [];
+    if (early.length > 0) {
+      notes.push(
+        `β given the survived loads also reaches the target at some lower stiffnesses (${early.length === 1 ? 'one point' : `${early.length} points`} of the curve, up to ${wording.formatStiffness(Math.max(...early.map((p) => p.factor)) * (baseStiffness[ends[0]] ?? 0))} at the ${ends[0]} connection): there the survival was unlikely and so proves much; the requirement is the stiffness above which β stays at the target`,
+      );
+    }
+  }
   return {
     study, ...(axisFacts ? { axis: axisFacts } : {}), base, fixityAtRequired, kAtRequired, kAtCharacteristic, kDeterministic, kDesign, kAssessed, requirement,
-    method: opts.method ?? verification.method, confirmation, shortfall: shortfall ?? null, verification, sentence, notes, maps,
+    method: opts.method ?? verification.method, confirmation, shortfall: shortfall ?? null, verification, ...(survival ? { survival } : {}), sentence, notes, maps,
   };
+}
+
+/** The phrase every conditioned sentence carries. */
+const GIVEN_SURVIVAL = 'given the survived loads';
+
+/** What the conditioned study leaves unconditioned, and where the survival could not have happened. */
+function survivalNotes(f: RestraintSurvivalFacts, reached: boolean, twoAxes: boolean): string[] {
+  const out = [
+    `every β of this study is given the survived loads (${listText(f.paths)}), with the studied stiffness changed in the column that carried them as well; without them FORM gives β = ${f.formBetaWithout.toFixed(2)} at the assessed stiffness`,
+  ];
+  // a small value says the survival, not the stiffness, carries the reliability there: that stiffness is hardly consistent with the survival
+  if (f.pSurvivalAtRequired !== null) out.push(`with the reported stiffness the column would have carried the survived load with probability ${f.pSurvivalAtRequired.toPrecision(2)} (FORM, before knowing it did)`);
+  if (reached) out.push("the design stiffness's α is FORM's α of the failure margin alone (before the survival): the design-value method has no α for a conditional probability");
+  if (twoAxes) out.push('the choice of axis and the other axis\'s own β are without the survived loads');
+  if (f.impossibleUpTo !== null) {
+    const where = f.impossibleUpTo === 0 ? 'with pinned ends' : `at ${f.impossibleUpTo.toPrecision(3)} times the stiffness assumed and below`;
+    out.push(`${where} the column could not have carried the survived load (its survival has probability zero there), so such a stiffness is refuted by it; β is taken as −∞ there`);
+  }
+  return out;
 }
 
 /** How far above the target the other axis's own β must be before its mode stops adding to the column's pf (in β). */
@@ -502,8 +606,18 @@ function otherAxisSentence(a: RestraintAxisFacts, target: number): string {
   return `Axis ${o.axis} alone has β = ${o.beta.toFixed(2)} whatever the stiffness about ${a.axis} (its own ends as given), above the target ${target.toFixed(2)}.${close}`;
 }
 
-/** β of a scenario by the chosen method; IS is the self-check's importance sampling with one seed at every factor (common random numbers). */
-function methodEvaluator(method: RestraintMethod, build: (f: number) => Scenario, seed: number): (f: number) => BetaPoint {
+/**
+ * β of a scenario by the chosen method; IS is the self-check's importance sampling with one seed at
+ * every factor (common random numbers). `conditioned`: given the survived loads (no SORM there).
+ */
+function methodEvaluator(method: RestraintMethod, build: (f: number) => Scenario, seed: number, conditioned = false): (f: number) => BetaPoint {
+  if (conditioned) {
+    if (method === 'form') return (f) => survivalForm(build(f));
+    return (f) => {
+      const p = survivalFormChecked(build(f), seed);
+      return { beta: p.checkBeta, pf: p.checkPf, converged: p.converged };
+    };
+  }
   if (method === 'form') return (f) => scenarioForm(build(f));
   if (method === 'sorm') return (f) => scenarioSorm(build(f));
   return (f) => {
@@ -513,7 +627,7 @@ function methodEvaluator(method: RestraintMethod, build: (f: number) => Scenario
 }
 
 /** The load factor at which the target is met with the studied ends rigid (bisection-safe root in ln λ). */
-function loadsForTarget(rigid: Scenario, target: number, method: RestraintMethod, seed: number): ShortfallFacts {
+function loadsForTarget(rigid: Scenario, target: number, method: RestraintMethod, seed: number, conditioned: boolean): ShortfallFacts {
   const scaled = (lambda: number): Scenario => {
     let t = rigid;
     for (const l of rigid.loads) t = withScalar(t, l.path, scaleScalar(l.value, lambda));
@@ -521,7 +635,7 @@ function loadsForTarget(rigid: Scenario, target: number, method: RestraintMethod
   };
   const model = buildColumnModel(rigid);
   const utilizationRigid = model.utilization(model.mean);
-  const betaAt = methodEvaluator(method, scaled, seed);
+  const betaAt = methodEvaluator(method, scaled, seed, conditioned);
   const lo = Math.log(0.01);
   if (!(betaAt(Math.exp(lo)).beta >= target)) return { loadFactor: null, utilizationRigid };
   const root = findRootBracketed((t) => betaAt(Math.exp(t)).beta - target, lo, 0, { xTolerance: 1e-4 });
@@ -530,15 +644,16 @@ function loadsForTarget(rigid: Scenario, target: number, method: RestraintMethod
 
 const METHOD_LABEL: Record<string, string> = { form: 'FORM', sorm: 'SORM', is: 'importance sampling', mc: 'Monte Carlo', subset: 'subset simulation' };
 
-function confirmationSentence(c: RestraintConfirmation): string {
+function confirmationSentence(c: RestraintConfirmation, conditioned = false): string {
   const label = METHOD_LABEL[c.method] ?? c.method;
   const pct = (c.raisedBy - 1) * 100;
   const raised = c.raisedBy > 1 ? ` after the requirement was raised ${pct >= 10 ? pct.toFixed(0) : pct.toPrecision(2)} % above the root, because at the root it fell short` : '';
-  return `Assessed at the reported stiffness, the governing method (${label}) gives β = ${c.beta.toFixed(2)}${raised}.`;
+  return `Assessed at the reported stiffness, the governing method (${label}) gives β = ${c.beta.toFixed(2)}${conditioned ? ` ${GIVEN_SURVIVAL}` : ''}${raised}.`;
 }
 
-function methodSentence(method: RestraintMethod, c: RestraintConfirmation | null): string {
-  return `The requirement was solved with ${METHOD_LABEL[method]}${method === 'is' ? ' (one seed at every stiffness: common random numbers)' : ''}.${c ? ` ${confirmationSentence(c)}` : ''}`;
+function methodSentence(method: RestraintMethod, c: RestraintConfirmation | null, conditioned = false): string {
+  const how = conditioned ? `${METHOD_LABEL[method]} ${GIVEN_SURVIVAL}` : METHOD_LABEL[method];
+  return `The requirement was solved with ${how}${method === 'is' ? ' (one seed at every stiffness: common random numbers)' : ''}.${c ? ` ${confirmationSentence(c, conditioned)}` : ''}`;
 }
 
 const finite = (v: number): number | null => (Number.isFinite(v) ? v : null);
@@ -595,6 +710,13 @@ export function restraintJson(r: ColumnRestraintResult): Record<string, unknown>
       other_axis: { axis: r.axis.other.axis, beta: finite(r.axis.other.beta), pf: r.axis.other.pf, caps_target: r.axis.other.capsTarget },
     } : {}),
     ...(r.maps ? { maps: restraintMapsJson(r.maps) } : {}),
+    // survived loads (docs/evidence.md §8): whether every β above is given them
+    conditioned_on_survived_loads: r.survival !== undefined,
+    ...(r.survival ? {
+      survived_loads: r.survival.paths,
+      form_beta_assessed_without_survived_loads: finite(r.survival.formBetaWithout),
+      survival_probability_at_required: r.survival.pSurvivalAtRequired,
+    } : {}),
     sentence: r.sentence,
     notes: r.notes,
   };

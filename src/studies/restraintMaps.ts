@@ -8,6 +8,8 @@
  *   other is rigid). Cost: 49 FORM analyses and two root solves.
  * - the required mean stiffness (and its 5 % fractile) against the stiffness's coefficient of
  *   variation: "how precisely must this connection be known". One root solve per CoV.
+ *
+ * With survived loads the caller passes their conditional FORM as `betaOf` (about twice a FORM).
  */
 import { supportInsideDomain } from '../scenario/readScalar.js';
 import { withMoments, withEndStiffness } from '../limitState/scenarioEdits.js';
@@ -60,6 +62,10 @@ export interface RestraintMapsInput {
   required: Record<string, number> | null;
   /** the principal axis whose ends are varied (default y) */
   axis?: 'y' | 'z';
+  /** β of an edited scenario (default FORM, `scenarioForm`; given survived loads, their conditional FORM) */
+  betaOf?: (s: Scenario) => { beta: number; pf: number };
+  /** which crossing of the target is a requirement (restraintStudy.ts; default 'first') */
+  crossing?: 'first' | 'last';
 }
 
 const GRID_POINTS = 7;
@@ -86,7 +92,7 @@ function contourMap(s: Scenario, input: RestraintMapsInput): RestraintContourMap
     throwIfInterrupted('the restraint map');
     let t = withEndStiffness(s, 'bottom', input.base.bottom, fb, axis);
     t = withEndStiffness(t, 'top', input.base.top, ft, axis);
-    const b = scenarioForm(t).beta;
+    const b = (input.betaOf ?? scenarioForm)(t).beta;
     return Math.min(BETA_CLAMP[1], Math.max(BETA_CLAMP[0], b));
   };
   const beta = factors.map((fb) => factors.map((ft) => at(fb, ft)));
@@ -99,7 +105,8 @@ function contourMap(s: Scenario, input: RestraintMapsInput): RestraintContourMap
       target: input.target,
       grid: { min: 0.01, max: 100, points: 7 },
       tolerance: 1e-4,
-      betaAtFactor: (f) => scenarioForm(withEndStiffness(rigidOther, end, input.base[end], f, axis)),
+      crossing: input.crossing,
+      betaAtFactor: (f) => (input.betaOf ?? scenarioForm)(withEndStiffness(rigidOther, end, input.base[end], f, axis)),
     });
     calls += r.calls;
     return r.outcome === 'reached' ? (r.required[end] as number) : null;
@@ -245,7 +252,8 @@ function covCurve(input: RestraintMapsInput, random: ('bottom' | 'top')[]): NonN
       target: input.target,
       grid: { min: 0.01, max: 100, points: 7 },
       tolerance: 1e-4,
-      betaAtFactor: (f) => scenarioForm(input.edited(f, bases)),
+      crossing: input.crossing,
+      betaAtFactor: (f) => (input.betaOf ?? scenarioForm)(input.edited(f, bases)),
     });
     calls += r.calls;
     const f = r.outcome === 'reached' ? (r.requiredFactor as number) : null;

@@ -9,6 +9,8 @@ import type { EndRequirement } from './restraintRequirement.js';
 export interface RestraintWording {
   /** A stiffness in N·m/rad shown with its display unit, e.g. `2.41 MN·m/rad`. */
   formatStiffness: (stiffness: number) => string;
+  /** What every β is conditioned on, e.g. `given the survived loads` (absent: nothing). */
+  condition?: string;
 }
 
 /** What the caller computed at the reported requirement (study outcome 'reached'). */
@@ -51,7 +53,8 @@ export function restraintSentence(
   wording: RestraintWording,
   facts: { reached?: RequirementFacts; shortfall?: ShortfallFacts },
 ): string {
-  const goal = `The target β = ${two(result.target)}`;
+  const given = wording.condition ? ` ${wording.condition}` : '';
+  const goal = `The target β = ${two(result.target)}${given}`;
   switch (result.outcome) {
     case 'pinned-suffices':
       return `${goal} is already met with ${idealEndsPhrase(result.ends, 'pinned')} (β = ${two(result.pinned.beta)}), so no rotational restraint needs to be relied on.`;
@@ -63,7 +66,7 @@ export function restraintSentence(
         sf && sf.loadFactor !== null
           ? `; the target would be met with the loads at ${three(100 * sf.loadFactor)} % of those given (utilization ${two(sf.utilizationRigid * sf.loadFactor)} at the means instead of ${two(sf.utilizationRigid)})`
           : '; reducing the load or strengthening the column is needed, not restraint';
-      return `Even ${idealEndsPhrase(result.ends, 'rigid')} reach${result.ends.length === 1 ? 'es' : ''} only β = ${two(result.fixed.beta)}, short of the target ${two(result.target)}${change}.`;
+      return `Even ${idealEndsPhrase(result.ends, 'rigid')} reach${result.ends.length === 1 ? 'es' : ''} only β = ${two(result.fixed.beta)}${given}, short of the target ${two(result.target)}${change}.`;
     }
     case 'reached': {
       const f = facts.reached;

@@ -29,6 +29,14 @@ export interface RestraintStudyInput {
   grid?: RestraintGrid;
   /** Absolute tolerance on ln(factor) of the root (default 1e-6). */
   tolerance?: number;
+  /**
+   * Which crossing of the target is the requirement: 'first' (default), the least factor that
+   * reaches it; 'last', the one above which every grid point reaches it. They agree when β rises
+   * with the stiffness. β given a survived load need not (a low stiffness makes the survival
+   * unlikely, and so proves much once it happened): 'last' keeps "at least this stiffness" true
+   * for every stiffness above it on the grid.
+   */
+  crossing?: 'first' | 'last';
 }
 
 export type RestraintIdeal = 'pinned' | 'fixed';
@@ -120,11 +128,13 @@ export function restraintStudy(input: RestraintStudyInput): RestraintStudyResult
 
   let outcome: RestraintOutcome;
   let requiredFactor: number | null;
-  if (pinned.beta >= target) {
+  // 'last': the last grid point (pinned included) short of the target, if any
+  const lastShort = input.crossing === 'last' ? [0, ...grid].filter((f) => !reaches(f)).pop() : undefined;
+  if (input.crossing === 'last' ? lastShort === undefined : pinned.beta >= target) {
     outcome = 'pinned-suffices';
     requiredFactor = 0;
   } else {
-    let hi = grid.find(reaches);
+    let hi = lastShort === undefined || lastShort === 0 ? grid.find(reaches) : grid.find((f) => f > lastShort);
     let lo: number | undefined;
     if (hi === undefined) {
       for (let f = grid[grid.length - 1], k = 0; k < EXTRA_DECADES && fixed.beta >= target; k++) {

@@ -96,3 +96,30 @@ describe('restraintSentence', () => {
     for (const t of [1.5, 5, 5.5]) expect(say(t)).not.toMatch(/—/);
   });
 });
+
+describe('which crossing of the target is the requirement', () => {
+  // own construction, the shape β given a survived load can take: −10 + 15 000 f up to f = 0.001
+  // (reaches 3 at f = 13/15 000), 5 up to 0.05, then a dip to 2 + ln(1 + f) (reaches 3 at f = e − 1)
+  const dip = (f: number): BetaPoint => {
+    const beta = f === Infinity ? 10 : f <= 0.001 ? -10 + 15_000 * f : f <= 0.05 ? 5 : 2 + Math.log1p(f);
+    return { beta, pf: 0.5 * Math.exp(-Math.max(beta, -30)) };
+  };
+  it("'first' takes the least factor that reaches the target; 'last' the one above which β stays reached", () => {
+    const first = restraintStudy({ betaAtFactor: dip, baseStiffness: { bottom: 1e6 }, target: 3 });
+    const last = restraintStudy({ betaAtFactor: dip, baseStiffness: { bottom: 1e6 }, target: 3, crossing: 'last' });
+    expect(first.outcome).toBe('reached');
+    expect(first.requiredFactor as number).toBeCloseTo(13 / 15_000, 8);
+    expect(last.outcome).toBe('reached');
+    // common practice: 2 + ln(1 + f) = 3 at f = e − 1
+    expect(last.requiredFactor as number).toBeCloseTo(Math.E - 1, 5);
+  });
+  it("agree when β rises with the stiffness, and 'last' gives pinned-suffices only when every point reaches the target", () => {
+    const { betaAtFactor } = synthetic(1, 4);
+    const a = restraintStudy({ betaAtFactor, baseStiffness: base, target: 3 });
+    const b = restraintStudy({ betaAtFactor, baseStiffness: base, target: 3, crossing: 'last' });
+    expect(b.requiredFactor).toBe(a.requiredFactor);
+    expect(b.requiredFactor as number).toBeCloseTo(root(1, 4, 3), 5);
+    const high = restraintStudy({ betaAtFactor: (f) => ({ beta: f === 0 ? 4 : 3.5, pf: 1e-4 }), baseStiffness: base, target: 3, crossing: 'last' });
+    expect(high.outcome).toBe('pinned-suffices');
+  });
+});

@@ -71,7 +71,10 @@ export function conditionalForm(problem: ConditionedProblem, opts: FormOptions =
   const calls = failure.calls + proof.calls;
   const converged = failure.converged && proof.converged;
   const betaG = failure.beta;
-  const betaH = proof.beta;
+  // a survival margin with no slope anywhere the search went (every variable leaves it unchanged:
+  // nothing random acts on it) is certain or impossible, decided by its sign, not FORM's β = 0 of a flat g
+  const flatProof = !proof.converged && proof.alpha.every((a) => a === 0) && Number.isFinite(proof.g0);
+  const betaH = flatProof ? (proof.g0 > 0 ? Infinity : -Infinity) : proof.beta;
   const base = { betaBefore: betaG, pfBefore: failure.pf, betaProof: betaH, converged, calls, failure, proof };
   const pSurvival = normalCdf(betaH);
   if (betaH === -Infinity || !(pSurvival > 0)) throw new Error('the survived event has probability zero under the model');

@@ -370,6 +370,8 @@ export interface RestraintCurvePoint {
 export interface RestraintStudy {
   ends: EndName[]; // the studied ends
   targetBeta: number;
+  /** every β of the study is given the survived loads (docs/evidence.md §8); absent or false otherwise */
+  givenSurvivedLoads?: boolean;
   curve: RestraintCurvePoint[]; // increasing stiffness; the ideal cases may be included
   /** Mean stiffness of each studied end at which β = target; null when even rigid ends fall short. */
   required: { bottom?: number | null; top?: number | null };

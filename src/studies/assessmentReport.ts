@@ -301,6 +301,7 @@ export function assessmentReportInput(a: Assessment, meta: RunMeta): ReportInput
       effectiveLengthFactor: r.kAtRequired,
       equivalentK: r.kDeterministic,
       sentence: r.sentence,
+      givenSurvivedLoads: r.survival !== undefined,
       requirement: r.requirement
         ? Object.fromEntries(Object.entries(r.requirement).map(([e, q]) => [e, { mean: q.mean, cov: q.cov, characteristic: q.characteristic, design: q.design, alphaBasis: q.alphaBasis }]))
         : undefined,

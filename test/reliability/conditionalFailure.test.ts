@@ -104,3 +104,17 @@ describe('the Monte Carlo check of a conditional β (the rule of formCheck.ts)',
     expect(conditionalCheck(betaOf(1e-3), m).agrees).toBe(false);
   });
 });
+
+describe('a survival margin that no random variable acts on', () => {
+  // common practice: P(F | h > 0) = P(F) when h > 0 everywhere, and a survival that cannot have happened is refused
+  const transform = natafTransform([makeDistribution({ dist: 'normal', mean: 100, sd: 10 })], null, ['R']);
+  const g = (x: Float64Array) => x[0] - 75;
+  it('h > 0 everywhere: the survival was certain, pf is the unconditional one', () => {
+    const r = conditionalForm({ names: ['R'], transform, g, h: () => 5 });
+    expect(r.pSurvival).toBe(1);
+    expect(Math.abs(r.pf / normalCdf(-2.5) - 1)).toBeLessThan(1e-6); // exact: β = (100 − 75)/10 = 2.5, to FORM's tolerance
+  });
+  it('h ≤ 0 everywhere: refused as impossible', () => {
+    expect(() => conditionalForm({ names: ['R'], transform, g, h: () => -5 })).toThrow(/probability zero/);
+  });
+});

@@ -70,7 +70,7 @@ export function restraintContourChart(input: ReportInput, study: RestraintStudy,
   const title = 'Reliability over the stiffness of both ends';
   const subtitle = [
     `Lines of equal β; bold red: the target β = ${formatBeta(target)}; dashed: the target's asymptotes with the other end rigid.`,
-    `FORM β on a 7 × 7 grid (${c.formAnalyses} FORM analyses with the asymptotes), interpolated; each end keeps its CoV.`,
+    `FORM β${study.givenSurvivedLoads ? ' given the survived loads' : ''} on a 7 × 7 grid (${c.formAnalyses} FORM analyses with the asymptotes), interpolated; each end keeps its CoV.`,
   ];
   return { name: 'restraint-contour', title, spec: { ...chartBase(title, subtitle), width: 400, height: 320, layer: layers } };
 }

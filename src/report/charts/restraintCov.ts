@@ -39,7 +39,7 @@ export function restraintCovChart(input: ReportInput, study: RestraintStudy, sys
   ];
   const title = 'How precisely must the connection be known';
   const subtitle = [
-    `Mean ${c.end} stiffness at which FORM β meets the target ${formatNumber(input.reliability.target.beta, 3)}, and its 5 % fractile, for each CoV.`,
+    `Mean ${c.end} stiffness at which FORM β${input.restraint?.givenSurvivedLoads ? ' given the survived loads' : ''} meets the target ${formatNumber(input.reliability.target.beta, 3)}, and its 5 % fractile, for each CoV.`,
     `One FORM root solve per CoV (${c.formAnalyses} FORM analyses in all).`,
   ];
   return { name: 'restraint-cov', title, spec: { ...chartBase(title, subtitle), width: 420, height: 260, layer: layers } };

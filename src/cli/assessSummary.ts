@@ -7,6 +7,7 @@ import { describePath, quantityKindOf } from '../limitState/quantityKind.js';
 import { zeroFailureBound } from '../reliability/zeroFailureBound.js';
 import { CAUTION, textTable } from './textTable.js';
 import { ratioText } from './ratioText.js';
+import { groupedNotes } from '../report/groupedNotes.js';
 import { designPointConnections } from '../studies/designPointConnections.js';
 import { connectionBasis, connectionLines } from './connectionText.js';
 import { evidenceLines } from './evidenceLines.js';
@@ -72,7 +73,9 @@ function strengthModelLines(a: Assessment): string[] {
       m.modelFactor.source === 'default' ? 'default' : 'scenario',
     ]);
   }
-  return ['', '  β by strength model (same column; each with its own model factor):', textTable(rows, '    ')];
+  // notes on rows that have a β (how a corroded zone is treated): under the table, not in the number column
+  const notes = groupedNotes(a.byStrengthModel).map((n) => `    ${n}`);
+  return ['', '  β by strength model (same column; each with its own model factor):', textTable(rows, '    '), ...notes];
 }
 
 function years(y: number): string {

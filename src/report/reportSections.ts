@@ -3,6 +3,7 @@
  * formatted and compared here, never computed.
  */
 import { measurementsSection, testPlansSection } from './measurementSections.js';
+import { groupedNotes } from './groupedNotes.js';
 import type { ConnectionValues, EndDescription, EvidenceMoments, InputRow, JointClassRow, MethodName, ReportInput, StrengthModelName } from './reportInput.js';
 import { displayUnit, formatBeta, formatFixedColumn, formatNumber, formatProbability, formatProbabilityColumn, formatQuantity, type UnitSystem } from './displayUnits.js';
 import { SECTION_TITLES, sectionOrder, type Block, type ReportDocument, type Section, type SectionId } from './reportDocument.js';
@@ -565,7 +566,7 @@ function strengthModelBlocks(input: ReportInput): Block[] {
   return [
     {
       kind: 'table',
-      caption: 'β (FORM) of the same column under each strength model, each with its own model factor',
+      caption: ['β (FORM) of the same column under each strength model, each with its own model factor', ...groupedNotes(rows)].join('; ') + '.',
       head: ['strength model', 'β (FORM)', 'model factor mean', 'model factor CoV', 'model factor from'],
       rows: rows.map((r) => [
         `${r.strength}${r.chosen ? ' (chosen)' : ''}`,

@@ -56,6 +56,8 @@ export function betaByStrengthModel(given: Scenario, chosenForm: FormResult): St
   const models = compared.includes(given.strength) ? compared : [...compared, given.strength];
   const noBow = given.column.bow.kind === 'fixed' && given.column.bow.value === 0;
   const eccentric = hasEccentricity(given);
+  const h = given.column.section.geometry?.corrosion?.zoneHeight;
+  const zoned = h !== undefined && h < given.column.length;
   return models.map((strength) => {
     const resolved = resolveStrengthModel(given, strength);
     const chosen = strength === given.strength;
@@ -73,6 +75,18 @@ export function betaByStrengthModel(given: Scenario, chosenForm: FormResult): St
       return { strength, beta: null, pf: null, converged: false, modelFactor: resolved.modelFactor, chosen, note: 'not run here: choose strength: plastic-zone for it (its table is built once per section and axis)' };
     }
     const r = chosen ? chosenForm : scenarioForm(resolved.scenario);
-    return { strength, beta: r.beta, pf: r.pf, converged: r.converged, modelFactor: resolved.modelFactor, chosen };
+    const zoneNote = zoned && eccentric ? zoneTreatment(strength) : undefined;
+    return { strength, beta: r.beta, pf: r.pf, converged: r.converged, modelFactor: resolved.modelFactor, chosen, ...(zoneNote ? { note: zoneNote } : {}) };
   });
+}
+
+/**
+ * A corroded zone about the axis the actions bend: first-yield solves the stepped member, the code
+ * checks take the loss over the whole length (docs/sections.md); their β differ for that reason too.
+ */
+function zoneTreatment(strength: StrengthModel): string | undefined {
+  const family = strengthModelKind(strength)?.family;
+  if (family === 'first-yield') return 'corroded zone: the stepped member solved to second order';
+  if (family === 'en1993' || family === 'aisc360-e3' || family === 'plastic-zone') return 'corroded zone: the loss taken over the whole length about the bent axis (conservative)';
+  return undefined;
 }

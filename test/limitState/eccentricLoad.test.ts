@@ -185,3 +185,15 @@ describe('connection moments of a column with a corroded zone', () => {
     expect(rZ.eccentricity).toEqual(rW.eccentricity);
   });
 });
+
+describe('the β-by-model table says how each model treats a corroded zone under bending', () => {
+  // common practice: first-yield solves the stepped member, the code checks take the loss over the whole length
+  // (docs/sections.md); without that remark a reader would compare β values computed on different members
+  it('facade demo: a note on the first-yield row and on the code-check rows', () => {
+    const facade = loadScenario(readFileSync(new URL('../../scenarios/facade-h-column.yaml', import.meta.url), 'utf8'), 'f.yaml');
+    const rows = betaByStrengthModel(facade, form(problemFromModel(buildColumnModel(facade))));
+    expect(rows.find((r) => r.strength === 'first-yield')?.note).toMatch(/stepped member/);
+    expect(rows.find((r) => r.strength === 'en1993-b')?.note).toMatch(/whole length/);
+    expect(rows.find((r) => r.strength === 'aisc360-e3')?.note).toMatch(/whole length/);
+  });
+});

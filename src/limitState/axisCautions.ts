@@ -23,7 +23,7 @@ export function axisCautions(s: Scenario): string[] {
       out.push(
         `Corrosion loss in the lowest ${(h * 1e3).toFixed(0)} mm: the column is taken as a stepped member, the reduced section in the zone and the sound one above it. Its critical load and first mode are exact; first-yield checks each part with its own section, and the code curves take λ̄ from the stepped critical load with the zone's A·fy (the weakest cross-section with the member's true stiffness, an engineering approximation).` +
           (bent
-            ? strengthModelKind(s.strength)?.family === 'first-yield'
+            ? ['first-yield', 'equivalent-bow'].includes(strengthModelKind(s.strength)?.family ?? '')
               ? ' About the axis bent by eccentric loads, applied moments or transverse actions (y), the stepped member is solved to second order and each part checked for first yield with its own section.'
               : ' About the axis bent by eccentric loads, applied moments or transverse actions (y), the reduced section is used over the whole length (conservative: the interaction check\'s member formulas are for prismatic members).'
             : '') +

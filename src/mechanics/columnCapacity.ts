@@ -3,7 +3,7 @@ import { aiscEccentricCapacity } from './aiscInteraction.js';
 import { criticalLoad } from './criticalLoad.js';
 import { EN_IMPERFECTION, enCapacity } from './en1993.js';
 import { enEccentricCapacity } from './en1993Interaction.js';
-import { equivalentBowCapacity } from './equivalentBow.js';
+import { equivalentBowAmplitude, equivalentBowCapacity } from './equivalentBow.js';
 import { eccentricFirstYieldCapacity } from './eccentricFirstYield.js';
 import { firstYieldCapacity } from './firstYield.js';
 import { modeShape } from './modeShape.js';
@@ -18,20 +18,30 @@ import type { CapacityResult, ColumnState, SoundSection, StrengthModel } from '.
  * second-order solution, each segment checked with its own section (steppedBeamColumn.ts). A section
  * with no modulus, area or strength anywhere takes no bending (as for the prismatic column).
  */
-function steppedEccentricCapacity(s: ColumnState, sound: SoundSection): CapacityResult {
+function steppedEccentricCapacity(model: StrengthModel, s: ColumnState, sound: SoundSection): CapacityResult {
   const member: SteppedMember = { ratio: sound.I / s.I, zone: Math.min(1, Math.max(0, sound.from / s.L)) };
   const EI1 = s.E * s.I;
   const { Pcr, phi, K } = steppedCriticalLoad(EI1, s.L, s.frame, s.r, member);
   const mode = steppedMode(s.frame, s.r, member, phi);
   const c = Math.max(mode.zoneFactor, mode.upperFactor);
   if (!(s.S > 0 && s.A > 0 && s.fy > 0 && sound.S > 0 && sound.A > 0)) return { capacity: 0, Pcr, K, c };
+  // the equivalent bow of EN 1993-1-1 §5.3.2(11) for each segment as the critical cross-section, the larger
+  // amplitude taken (conservative); plus the measured bow in the -plus-bow form
+  const kind = strengthModelKind(model)!;
+  const bow =
+    kind.family === 'first-yield'
+      ? s.bow
+      : Math.max(
+          equivalentBowAmplitude(EN_IMPERFECTION[kind.curve!], s.A, s.S, s.fy, Pcr, mode.zoneFactor),
+          equivalentBowAmplitude(EN_IMPERFECTION[kind.curve!], sound.A, sound.S, s.fy, Pcr, mode.upperFactor),
+        ) + (kind.usesBow ? Math.abs(s.bow) : 0);
   const e = s.eccentricity ?? { bottom: 0, top: 0 };
   const t = s.transverse ?? { line: 0, top: 0 };
   const topRatio = s.frame === 'sway' ? t.top : 0;
   const capacity = steppedEccentricFirstYieldCapacity(
     {
       frame: s.frame, r: s.r, L: s.L, EI1, ratio: member.ratio, zone: member.zone, eB: e.bottom, eT: e.top,
-      q: t.line * s.L * s.L, h: topRatio * s.L, bow: s.bow, Pcr, mode,
+      q: t.line * s.L * s.L, h: topRatio * s.L, bow, Pcr, mode,
     },
     { A1: s.A, S1: s.S, A2: sound.A, S2: sound.S, fy: s.fy },
   );
@@ -86,7 +96,8 @@ export function usesSteppedSolver(s: ColumnState): boolean {
 export function columnCapacity(model: StrengthModel, s: ColumnState): CapacityResult {
   if (!isStrengthModel(model)) throw new RangeError(`unknown strength model '${String(model)}'`);
   if (usesSteppedSolver(s)) return steppedColumnCapacity(model, s, s.sound!);
-  if (s.sound !== undefined && strengthModelKind(model)!.family === 'first-yield') return steppedEccentricCapacity(s, s.sound);
+  const family = strengthModelKind(model)!.family;
+  if (s.sound !== undefined && (family === 'first-yield' || family === 'equivalent-bow')) return steppedEccentricCapacity(model, s, s.sound);
   const { Pcr, phi, K } = criticalLoad(s.E * s.I, s.L, s.frame, s.r);
   const mode = modeShape(s.frame, s.r, phi);
   const c = mode.curvatureFactor;
@@ -125,7 +136,15 @@ export function columnCapacity(model: StrengthModel, s: ColumnState): CapacityRe
       });
       return { capacity, Pcr, K, c };
     }
-    case 'equivalent-bow':
-      throw new RangeError(`strength model '${model}' takes no load eccentricity or transverse action (first-yield, en1993-* and aisc360-e3 do)`);
+    case 'equivalent-bow': {
+      // EN 1993-1-1 §5.2.2(3)a: second-order analysis with the member imperfection of §5.3.2(11) (the
+      // equivalent bow affine to the first mode, amplitude e0/c) and the elastic cross-section check:
+      // the first-yield beam-column with that bow (plus the measured bow in the -plus-bow form)
+      const bow = equivalentBowAmplitude(EN_IMPERFECTION[kind.curve!], s.A, s.S, s.fy, Pcr, c) + (kind.usesBow ? Math.abs(s.bow) : 0);
+      const capacity = eccentricFirstYieldCapacity({
+        A: s.A, S: s.S, fy: s.fy, EI: s.E * s.I, L: s.L, frame: s.frame, r: s.r, bow, eB: e.bottom, eT: e.top, ...actions, Pcr, mode,
+      });
+      return { capacity, Pcr, K, c };
+    }
   }
 }

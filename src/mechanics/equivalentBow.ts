@@ -28,7 +28,15 @@ export function en1993EquivalentBow(alpha: number, A: number, S: number, fy: num
  */
 export function equivalentBowCapacity(alpha: number, A: number, S: number, fy: number, Pcr: number, c: number, measuredBow: number): number {
   if (!(Pcr > 0)) return 0;
-  const e0 = en1993EquivalentBow(alpha, A, S, fy, Pcr);
-  const amplitude = c > 0 ? e0 / c : 0;
-  return firstYieldCapacity(A, S, fy, Pcr, amplitude + Math.abs(measuredBow), c);
+  return firstYieldCapacity(A, S, fy, Pcr, equivalentBowAmplitude(alpha, A, S, fy, Pcr, c) + Math.abs(measuredBow), c);
+}
+
+/**
+ * The amplitude e0/c (m) of the equivalent bow η_init affine to the first mode (max|η_cr| = 1), c the
+ * curvature factor of the cross-section checked: the bow the beam-column under combined actions takes
+ * in place of the measured one (EN 1993-1-1 §5.2.2(3)a with §5.3.2(11)). 0 for a mechanism or c = 0.
+ */
+export function equivalentBowAmplitude(alpha: number, A: number, S: number, fy: number, Pcr: number, c: number): number {
+  if (!(Pcr > 0) || !(c > 0)) return 0;
+  return en1993EquivalentBow(alpha, A, S, fy, Pcr) / c;
 }

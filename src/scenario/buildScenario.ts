@@ -94,21 +94,16 @@ function readAxisZ(raw: NonNullable<ScenarioShape['column']['axis_z']>, frame: S
 }
 
 /**
- * A load's end eccentricities (docs/beam-column.md), or undefined when the file gives none. first-yield,
- * en1993-* and aisc360-e3 have a combined-action check; the equivalent-bow models refuse a non-zero eccentricity.
+ * A load's end eccentricities (docs/beam-column.md), or undefined when the file gives none. Every closed-form
+ * strength model has a combined-action check (the equivalent-bow models: second-order analysis with their bow).
  */
-function readEccentricity(raw: RawLoad, name: string, strength: string, columnLength: number, ctx: ReadContext): Load['eccentricity'] {
+function readEccentricity(raw: RawLoad, name: string, columnLength: number, ctx: ReadContext): Load['eccentricity'] {
   if (typeof raw === 'string' || raw.eccentricity === undefined) return undefined;
   const read = (end: 'top' | 'bottom'): Scalar => {
     const given = raw.eccentricity![end];
     if (given === undefined) return ZERO;
     const path = ['loads', name, 'eccentricity', end];
-    const scalar = readScalar(given, { kind: 'length', domain: 'any', columnLength }, path, ctx);
-    // the equivalent-bow models (first-yield-en1993-X[-plus-bow]) have no combined-action check
-    if (strength.startsWith('first-yield-en1993-') && !(scalar.kind === 'fixed' && scalar.value === 0)) {
-      fail(ctx, path, `strength model '${strength}' has no check for eccentric loads: use strength: first-yield, en1993-X (EN 1993-1-1 Eq. 6.61) or aisc360-e3 (AISC 360 H1-1), or drop the eccentricity`);
-    }
-    return scalar;
+    return readScalar(given, { kind: 'length', domain: 'any', columnLength }, path, ctx);
   };
   return { top: read('top'), bottom: read('bottom') };
 }
@@ -128,9 +123,6 @@ function readActions(raw: RawLoad, name: string, shape: ScenarioShape, ctx: Read
   const strength = shape.strength;
   const refuse = (path: PathSegment[], scalar: Scalar, what: string): void => {
     if (!nonZero(scalar)) return;
-    if (strength.startsWith('first-yield-en1993-')) {
-      fail(ctx, path, `strength model '${strength}' has no check for ${what}: use strength: first-yield, en1993-X (EN 1993-1-1 Eq. 6.61) or aisc360-e3 (AISC 360 H1-1), or drop it`);
-    }
     // the plastic-zone model loads the column by its ends only (axial force and end couples)
     if (strength === 'plastic-zone' && what !== 'applied end moments') {
       fail(ctx, path, `strength model 'plastic-zone' takes end eccentricities and end moments but not ${what}: use strength: first-yield, en1993-X or aisc360-e3, or drop it`);
@@ -180,9 +172,6 @@ function readOutOfPlumb(shape: ScenarioShape, length: number, ctx: ReadContext):
     if (shape.column.frame !== 'sway') fail(ctx, path, 'an out-of-plumb applies only to a sway frame (a braced column\'s ends do not move sideways relative to each other; its imperfection is the bow); remove it or set frame: sway');
     if (shape.strength === 'plastic-zone') {
       fail(ctx, path, `strength model 'plastic-zone' takes no out-of-plumb (its bow is affine to the first buckling mode, which includes the sway): use strength: first-yield, en1993-X or aisc360-e3, or drop it`);
-    }
-    if (shape.strength.startsWith('first-yield-en1993-')) {
-      fail(ctx, path, `strength model '${shape.strength}' has no check for an out-of-plumb: use strength: first-yield, en1993-X (EN 1993-1-1 Eq. 6.61) or aisc360-e3 (AISC 360 H1-1), or drop it`);
     }
   }
   if (scalar.kind === 'fixed' && !(Math.abs(scalar.value) < 0.1)) fail(ctx, path, `must be a small angle in radians (|φ| < 0.1), got ${scalar.value}`);
@@ -263,7 +252,7 @@ export function buildScenario(shape: ScenarioShape, lines: ReadonlyMap<string, n
     }
     const time = readLoadTime(shape.loads[name]!, ['loads', name], ctx);
     const value = readScalar(time.value, { kind: 'force', domain: 'load' }, ['loads', name], ctx);
-    const eccentricity = readEccentricity(shape.loads[name]!, name, shape.strength, length, ctx);
+    const eccentricity = readEccentricity(shape.loads[name]!, name, length, ctx);
     const actions = readActions(shape.loads[name]!, name, shape, ctx);
     return {
       name, path: `loads.${name}`, value, ...(time.kind !== undefined ? { kind: time.kind } : {}), basis: time.basis,

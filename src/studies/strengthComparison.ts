@@ -64,9 +64,6 @@ export function betaByStrengthModel(given: Scenario, chosenForm: FormResult): St
     if (strengthUsesBow(strength) && noBow) {
       return { strength, beta: null, pf: null, converged: false, modelFactor: resolved.modelFactor, chosen, note: 'needs a bow; the scenario gives none' };
     }
-    if (eccentric && strengthModelKind(strength)?.family === 'equivalent-bow') {
-      return { strength, beta: null, pf: null, converged: false, modelFactor: resolved.modelFactor, chosen, note: 'has no check for eccentric loads or transverse actions' };
-    }
     if (strength === 'plastic-zone' && hasSideActions(given)) {
       return { strength, beta: null, pf: null, converged: false, modelFactor: resolved.modelFactor, chosen, note: 'takes no line load, top force or out-of-plumb' };
     }
@@ -86,7 +83,7 @@ export function betaByStrengthModel(given: Scenario, chosenForm: FormResult): St
  */
 function zoneTreatment(strength: StrengthModel): string | undefined {
   const family = strengthModelKind(strength)?.family;
-  if (family === 'first-yield') return 'corroded zone: the stepped member solved to second order';
+  if (family === 'first-yield' || family === 'equivalent-bow') return 'corroded zone: the stepped member solved to second order';
   if (family === 'en1993' || family === 'aisc360-e3' || family === 'plastic-zone') return 'corroded zone: the loss taken over the whole length about the bent axis (conservative)';
   return undefined;
 }

@@ -130,11 +130,6 @@ describe('eccentricity input errors: exit 2, the field named', () => {
     ['a force for a length', withEccentricity(base, () => ({ top: '80 kN' })), /loads\.dead\.eccentricity\.top.*length/],
     ['an unknown end', withEccentricity(base, () => ({ left: '8 mm' })), /loads\.dead\.eccentricity\.left.*unknown key/],
     [
-      'an equivalent-bow model with an eccentricity',
-      withEccentricity(base, (l) => (l === 'imposed' ? { bottom: '5 mm' } : {})).replace('strength: first-yield', 'strength: first-yield-en1993-b'),
-      /loads\.imposed\.eccentricity\.bottom.*first-yield-en1993-b.*no check for eccentric loads/,
-    ],
-    [
       'a period on a fixed load',
       base.replace(/ {2}imposed: .*\n/, '  imposed: {value: 190 kN, maximum_over: 50 years, eccentricity: {top: 5 mm}}\n'),
       /loads\.imposed\.maximum_over/,

@@ -168,10 +168,23 @@ describe('bad input: exit 2, one message naming the field', () => {
     ['an out-of-plumb on a braced column', edited(braced, () => ({}), (d) => { d.column.imperfection = { ...(d.column.imperfection ?? {}), out_of_plumb: 0.004 }; }), /column\.imperfection\.out_of_plumb.*sway frame/],
     ['a line load in the wrong unit', edited(braced, (n) => (n === 'dead' ? { transverse: '2 kN' } : {})), /loads\.dead\.transverse/],
     ['an end moment in the wrong unit', edited(braced, (n) => (n === 'dead' ? { moments: { top: '2 kN/m' } } : {})), /loads\.dead\.moments\.top/],
-    ['an equivalent-bow model with a line load', edited(braced, (n) => (n === 'dead' ? { transverse: '1 kN/m' } : {}), (d) => { d.strength = 'first-yield-en1993-b'; }), /loads\.dead\.transverse.*no check/],
-    ['an equivalent-bow model with an out-of-plumb', edited(demoText('sway-canopy-post'), () => ({}), (d) => { d.strength = 'first-yield-en1993-b'; d.column.imperfection = { ...(d.column.imperfection ?? {}), out_of_plumb: 0.003 }; }), /out_of_plumb.*no check/],
     ['an out-of-plumb that is not small', edited(demoText('sway-canopy-post'), () => ({}), (d) => { d.strength = 'first-yield'; d.column.imperfection = { ...(d.column.imperfection ?? {}), out_of_plumb: 0.5 }; }), /out_of_plumb.*small angle/],
   ];
+  // common practice: EN 1993-1-1 §5.2.2(3)a, second-order analysis with the §5.3.2(11) bow, so the equivalent-bow
+  // models take these actions; a line load or an out-of-plumb lowers their capacity
+  it('an equivalent-bow model takes a line load and an out-of-plumb', async () => {
+    const capacity = async (text: string) => {
+      const r = await runCli(['check', '-', '--json'], text);
+      expect(r.status).toBe(0);
+      return (JSON.parse(r.stdout) as { check: { capacity: number } }).check.capacity;
+    };
+    const eqBow = (d: { strength?: string }) => { d.strength = 'first-yield-en1993-b'; };
+    const plain = await capacity(edited(braced, () => ({}), eqBow));
+    expect(await capacity(edited(braced, (n) => (n === 'dead' ? { transverse: '1 kN/m' } : {}), eqBow))).toBeLessThan(plain);
+    const sway = (phi: number) => edited(demoText('sway-canopy-post'), () => ({}), (d) => { eqBow(d); d.column.imperfection = { ...(d.column.imperfection ?? {}), ...(phi ? { out_of_plumb: phi } : {}) }; });
+    expect(await capacity(sway(0.003))).toBeLessThan(await capacity(sway(0)));
+  });
+
   it.each(cases)('%s', async (_label, text, message) => {
     const r = await runCli(['check', '-'], text);
     expect(r.status).toBe(2);

@@ -2,7 +2,8 @@
  * Without survived loads the restraint study is the unconditional one, number for number:
  * test/reference/restraint-braced-base-plate.json is the output of
  * `stanchion restraint scenarios/braced-base-plate.yaml --json` recorded before the study could
- * condition on survived loads (same code path, same seed).
+ * condition on survived loads (same code path, same seed). Check: a regression against recorded output
+ * (common practice); the reference values themselves are checked elsewhere.
  */
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';

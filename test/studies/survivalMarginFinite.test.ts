@@ -2,7 +2,8 @@
  * The survived load's margin h = θ·capacity − max P_i is held finite like g: far out in u-space
  * (FORM on h steps there from a flat region where fy has dropped to 0) a lognormal modulus and a
  * lognormal model factor both reach the largest double, and θ·capacity overflowed to +∞, which
- * ended `assess` (the test plans' β given the survival) with an internal error. Numbers invented.
+ * ended `assess` (the test plans' β given the survival) with an internal error. Numbers invented: a
+ * robustness check (common practice), no outside value.
  */
 import { describe, expect, it } from 'vitest';
 import { loadScenario } from '../../src/scenario/loadScenario.js';

@@ -32,12 +32,18 @@ export interface IsEstimate {
   cov: number;
 }
 
-/** pf and its CoV from N samples with Σ w·1 and Σ w²·1. */
+/**
+ * pf and its CoV from N samples with Σ w·1 and Σ w²·1. The weighted mean is unbiased but not bounded:
+ * where failure is nearly certain (the origin fails, the centre sits in the failure domain) it can
+ * exceed 1, and a probability is reported as at most 1 (closer to the truth than the raw mean; its
+ * standard error is the raw one).
+ */
 export function isEstimate(samples: number, sumW: number, sumW2: number): IsEstimate {
   if (samples === 0 || sumW === 0) return { pf: 0, cov: Infinity };
-  const pf = sumW / samples;
+  const mean = sumW / samples;
+  const pf = Math.min(1, mean);
   if (samples < 2) return { pf, cov: Infinity };
-  const variance = Math.max(0, sumW2 / samples - pf * pf) / (samples - 1);
+  const variance = Math.max(0, sumW2 / samples - mean * mean) / (samples - 1);
   return { pf, cov: Math.sqrt(variance) / pf };
 }
 

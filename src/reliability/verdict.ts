@@ -222,6 +222,10 @@ export function verdict(input: VerdictInput, opts: VerdictOptions = {}): Verdict
   }
   const compared = comparisons.filter((c) => c.method !== ref.method && c.pf > 0);
   if (compared.length === 0) return { ...base, trust: ref.method, reason: `Only ${refText} gave an estimate: there is nothing to compare it with.` };
-  const spread = Math.max(...compared.map((c) => Math.abs(c.deltaBeta ?? 0)));
-  return { ...base, trust: ref.method, reason: `All ${compared.length + 1} estimates agree within their uncertainty (largest Δβ = ${spread.toFixed(2)}); ${refText} has the smallest uncertainty.` };
+  // an estimate at pf = 1 (or 0) has β = ∓∞: within its own uncertainty it can still agree, but Δβ says nothing
+  const finite = compared.filter((c) => Number.isFinite(c.deltaBeta ?? 0));
+  const extremes = compared.filter((c) => !Number.isFinite(c.deltaBeta ?? 0)).map((c) => `${LABEL[c.method]} gives pf = ${c.pf >= 0.5 ? 1 : 0} within its uncertainty`);
+  const spread = finite.length > 0 ? Math.max(...finite.map((c) => Math.abs(c.deltaBeta ?? 0))) : 0;
+  const spreadText = extremes.length === 0 ? `largest Δβ = ${spread.toFixed(2)}` : `${finite.length > 0 ? `largest finite Δβ = ${spread.toFixed(2)}; ` : ''}${extremes.join(', ')}`;
+  return { ...base, trust: ref.method, reason: `All ${compared.length + 1} estimates agree within their uncertainty (${spreadText}); ${refText} has the smallest uncertainty.` };
 }

@@ -357,7 +357,7 @@ const MAX_RAISE_STEP = Math.log(4);
  * Assess at the method's root; while the governing β falls short of the target, raise the factor
  * by the shortfall over the local slope dβ/d ln(factor) of the study curve (at least 1 %).
  */
-async function confirmRequirement(
+export async function confirmRequirement(
   study: RestraintStudyResult,
   edited: (f: number) => Scenario,
   governing: GoverningAssessor,
@@ -375,7 +375,10 @@ async function confirmRequirement(
     // the study curve's: near a cap set by the other axis the governing β rises ever more slowly
     const secant = previous === null ? 0 : (g.beta - previous.beta) / (Math.log(f) - previous.lnF);
     const s = secant > 1e-3 && secant < slope ? secant : slope;
-    const step = s > 1e-3 ? Math.min(Math.max((study.target - g.beta) / s + 0.002 / s, 0.01), MAX_RAISE_STEP) : 0.1;
+    // a β of ±∞ on either side (a survival impossible below some stiffness) makes the slope or the
+    // shortfall infinite: then the plain 10 % raise, never ∞/∞ = NaN
+    const raw = s > 1e-3 ? Math.min(Math.max((study.target - g.beta) / s + 0.002 / s, 0.01), MAX_RAISE_STEP) : 0.1;
+    const step = Number.isFinite(raw) ? raw : 0.1;
     previous = { lnF: Math.log(f), beta: g.beta };
     f *= Math.exp(step);
     g = await governing(edited(f));

@@ -70,7 +70,7 @@ export function restraintSentence(
     }
     case 'reached': {
       const f = facts.reached;
-      if (!f) throw new Error('restraintSentence: a reached requirement needs its facts');
+      if (!f) throw new Error(`restraintSentence: a reached requirement needs its facts (factor ${String(result.requiredFactor)}, outcome ${result.outcome})`);
       const needs = result.ends.map((end) => {
         const q = f.requirement[end];
         const spread = q.cov > 0

@@ -97,6 +97,9 @@ function gridFactors(grid: RestraintGrid | undefined): number[] {
   return logGrid(g.min ?? 0.01, g.max ?? 100, g.points ?? 13);
 }
 
+/** |β − target| beyond this is as far as the root search needs to know (β itself is at most ~38 in doubles). */
+const BETA_SPAN = 100;
+
 export function restraintStudy(input: RestraintStudyInput): RestraintStudyResult {
   const ends = Object.keys(input.baseStiffness);
   if (ends.length === 0) throw new Error('restraintStudy: no studied end');
@@ -158,7 +161,10 @@ export function restraintStudy(input: RestraintStudyInput): RestraintStudyResult
     }
     if (hi !== undefined && lo !== undefined) {
       const tolerance = input.tolerance ?? 1e-6;
-      const root = findRootBracketed((t) => at(Math.exp(t)).beta - target, Math.log(lo), Math.log(hi), { xTolerance: tolerance });
+      // β = ±∞ at a bracket end (a survival impossible at that stiffness, failure certain or impossible)
+      // keeps its sign but not its size: the root search interpolates, and ∞ − ∞ would give NaN
+      const margin = (t: number): number => Math.max(-BETA_SPAN, Math.min(BETA_SPAN, at(Math.exp(t)).beta - target));
+      const root = findRootBracketed(margin, Math.log(lo), Math.log(hi), { xTolerance: tolerance });
       outcome = 'reached';
       requiredFactor = Math.exp(root);
     } else if (fixed.beta >= target) {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { importanceSampling, importanceSamplingAtDesignPoint } from '../../src/reliability/importanceSampling.js';
+import { importanceSampling, importanceSamplingAtDesignPoint, isEstimate } from '../../src/reliability/importanceSampling.js';
 import { form } from '../../src/reliability/form.js';
 import { linearSum, paraboloid, shortColumn, testProblemRecipe } from '../../src/reliability/testProblems.js';
 import { normalSf } from '../../src/probability/normal.js';
@@ -79,3 +79,14 @@ describe('importance sampling at the design point', () => {
     expect(r.warnings.join(' ')).toMatch(/no sample failed/);
   });
 });
+
+describe('the importance-sampling estimate is a probability', () => {
+  // common practice: the weighted mean is unbiased but unbounded; near-certain failure can push it past 1
+  it('is at most 1, with the raw standard error', () => {
+    const e = isEstimate(400, 466.7, 700);
+    expect(e.pf).toBe(1);
+    const mean = 466.7 / 400;
+    expect(e.cov).toBeCloseTo(Math.sqrt((700 / 400 - mean * mean) / 399), 12);
+  });
+});
+

@@ -107,4 +107,15 @@ describe('verdict', () => {
     expect(v.reason).toMatch(/^Only MC/);
     expect(v.reason).not.toMatch(/agree/);
   });
+
+  it('an estimate at pf = 1 within its uncertainty is named, not read as Δβ = ∞ (or NaN)', () => {
+    // common practice: failure nearly certain (a valid generated scenario, bench/validScenarios.ts): IS at the
+    // design point saturates at pf = 1 with a wide CoV, MC gives 0.9775 with a narrow one
+    const mc = { pf: 0.9775, cov: 0.0034, failures: 1955, samples: 2000 } as unknown as Parameters<typeof verdict>[0]['mc'];
+    const is = { pf: 1, cov: 0.29, failures: 400, samples: 400 } as unknown as Parameters<typeof verdict>[0]['is'];
+    const v = verdict({ mc, is });
+    expect(v.reason).not.toMatch(/NaN|Infinity/);
+    expect(v.reason).toMatch(/IS gives pf = 1 within its uncertainty/);
+  });
 });
+

@@ -2,6 +2,8 @@ import { describe, expect, it } from 'vitest';
 import { findRootBracketed } from '../../src/probability/rootBracketed.js';
 import { restraintStudy, type BetaPoint } from '../../src/studies/restraintStudy.js';
 import { restraintSentence } from '../../src/studies/restraintSentence.js';
+import { confirmRequirement } from '../../src/studies/columnRestraint.js';
+import type { Scenario } from '../../src/scenario/types.js';
 
 // A synthetic monotone β(factor) = a + b f/(1 + f): pinned β = a, rigid β = a + b,
 // target t reached at f* = (t − a)/(a + b − t) (own construction, exact).
@@ -121,5 +123,27 @@ describe('which crossing of the target is the requirement', () => {
     expect(b.requiredFactor as number).toBeCloseTo(root(1, 4, 3), 5);
     const high = restraintStudy({ betaAtFactor: (f) => ({ beta: f === 0 ? 4 : 3.5, pf: 1e-4 }), baseStiffness: base, target: 3, crossing: 'last' });
     expect(high.outcome).toBe('pinned-suffices');
+  });
+});
+
+describe('β = ±∞ on either side of the requirement (a survival impossible below some stiffness)', () => {
+  // common practice: given a survived load, a column softer than some stiffness could not have carried it (β = −∞:
+  // no such column is the real one), a stiffer one may be certain to be safe (β = +∞); a valid generated scenario
+  // (bench/validScenarios.ts seed 19 no. 4) had such a jump
+  const jump = 6e-6;
+  const beta = (f: number) => (f <= jump ? -Infinity : f < 1e-3 ? Infinity : 9 + Math.log10(f));
+  it('the root search brackets the jump and lands on it', () => {
+    const s = restraintStudy({ baseStiffness: { bottom: 1e6 }, target: 3.8, betaAtFactor: (f) => ({ beta: beta(f), pf: NaN }), crossing: 'last' });
+    expect(s.outcome).toBe('reached');
+    expect(s.requiredFactor! / jump).toBeGreaterThan(1 - 1e-5);
+    expect(s.requiredFactor! / jump).toBeLessThan(1 + 1e-5);
+  });
+  it('the confirmation raises past it instead of computing ∞/∞', async () => {
+    const s = restraintStudy({ baseStiffness: { bottom: 1e6 }, target: 3.8, betaAtFactor: (f) => ({ beta: beta(f), pf: NaN }), crossing: 'last' });
+    // the assessor sees the factor through the edited scenario: here the scenario is the factor itself
+    const c = await confirmRequirement(s, (f) => f as unknown as Scenario, async (t) => ({ method: 'form', beta: beta(t as unknown as number) }));
+    expect(Number.isFinite(c.raisedBy)).toBe(true);
+    expect(c.confirmed).toBe(true);
+    expect(c.beta).toBe(Infinity);
   });
 });

@@ -5,10 +5,9 @@
  * zone) and mechanics/jointClassification.ts; this file only picks the inputs out of the scenario.
  */
 import { beamColumnResponse } from '../mechanics/beamColumn.js';
-import { steppedResponse } from '../mechanics/steppedBeamColumn.js';
-import { steppedCriticalLoad, steppedMode } from '../mechanics/steppedColumn.js';
+import { steppedBeamColumnOf, steppedResponse } from '../mechanics/steppedBeamColumn.js';
 import type { ColumnState, SoundSection } from '../mechanics/types.js';
-import { endSpringMoments, type EndSpringMoments } from '../mechanics/endSpringMoments.js';
+import { endSpringMoments, unstableResponse, type EndSpringMoments } from '../mechanics/endSpringMoments.js';
 import {
   beamJointBoundaries, classifyJoint, columnBaseBoundaries, pinnedRelativeSlenderness,
   type JointBoundaries, type JointClass,
@@ -65,30 +64,15 @@ export function connectionResponseAt(model: ColumnModel, x: Float64Array): Conne
  * under the bow and any end couples, line load and top force, rather than the zone's section over the whole length.
  */
 function steppedConnectionResponse(st: ColumnState, sound: SoundSection, P: number): ConnectionResponse {
-  const member = { ratio: sound.I / st.I, zone: Math.min(1, Math.max(0, sound.from / st.L)) };
-  const EI1 = st.E * st.I;
-  const { Pcr, phi } = steppedCriticalLoad(EI1, st.L, st.frame, st.r, member);
-  const e = st.eccentricity ?? { bottom: 0, top: 0 };
+  const member = steppedBeamColumnOf(st, sound);
   const t = st.transverse;
   const actions = t === undefined ? undefined : { line: t.line * P, top: st.frame === 'sway' ? t.top * P : 0 };
-  const bow = Math.abs(st.bow);
-  const extra = { ...(st.eccentricity ? { eccentricity: e } : {}), ...(actions ? { transverse: actions } : {}) };
-  const base = { load: P, bow, Pcr };
-  if (!(Pcr > 0) || !(P < Pcr)) {
-    return {
-      stable: false, ...base, amplification: Infinity, rotation: { bottom: Infinity, top: Infinity }, springMoment: { bottom: Infinity, top: Infinity },
-      memberMax: Infinity, memberMaxAt: NaN, drift: Infinity, ...extra,
-    };
-  }
-  const r = steppedResponse(
-    {
-      frame: st.frame, r: st.r, L: st.L, EI1, ratio: member.ratio, zone: member.zone, eB: e.bottom, eT: e.top,
-      q: ((actions?.line ?? 0) / P) * st.L * st.L, h: ((actions?.top ?? 0) / P) * st.L, bow, Pcr, mode: steppedMode(st.frame, st.r, member, phi),
-    },
-    P,
-  );
+  const extra = { ...(st.eccentricity ? { eccentricity: st.eccentricity } : {}), ...(actions ? { transverse: actions } : {}) };
+  const { Pcr, bow } = member;
+  if (!(Pcr > 0) || !(P < Pcr)) return { ...unstableResponse(P, bow, Pcr), ...extra };
+  const r = steppedResponse(member, P);
   return {
-    stable: r.stable, ...base, amplification: 1 / (1 - P / Pcr), rotation: r.rotation, springMoment: r.springMoment,
+    stable: r.stable, load: P, bow, Pcr, amplification: 1 / (1 - P / Pcr), rotation: r.rotation, springMoment: r.springMoment,
     memberMax: r.memberMax, memberMaxAt: r.memberMaxAt, drift: r.drift, ...extra,
   };
 }

@@ -5,7 +5,7 @@
 import { criticalLoad } from '../mechanics/criticalLoad.js';
 import { modeShape } from '../mechanics/modeShape.js';
 import { columnCapacity, usesSteppedSolver } from '../mechanics/columnCapacity.js';
-import { steppedCriticalLoad, steppedMode } from '../mechanics/steppedColumn.js';
+import { steppedMemberOf } from '../mechanics/steppedColumn.js';
 import { fixityFactor } from '../mechanics/restraint.js';
 import type { CapacityResult, ColumnState } from '../mechanics/types.js';
 import type { AxisModel, AxisName, ColumnModel } from './columnModel.js';
@@ -70,10 +70,8 @@ function finiteOrNull(v: number): number | null {
  */
 function summariseSteppedMode(state: ColumnState): ModeSummary | null {
   const sound = state.sound!;
-  const member = { ratio: sound.I / state.I, zone: Math.min(1, sound.from / state.L) };
-  const { Pcr, phi, K } = steppedCriticalLoad(state.E * state.I, state.L, state.frame, state.r, member);
+  const { Pcr, K, mode: shape } = steppedMemberOf(state, sound);
   if (!(Pcr > 0)) return null;
-  const shape = steppedMode(state.frame, state.r, member, phi);
   const inflections: number[] = [];
   const steps = 400;
   let x0 = 0;

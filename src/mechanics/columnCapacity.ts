@@ -8,8 +8,7 @@ import { eccentricFirstYieldCapacity } from './eccentricFirstYield.js';
 import { firstYieldCapacity } from './firstYield.js';
 import { modeShape } from './modeShape.js';
 import { steppedColumnCapacity } from './steppedCapacity.js';
-import { steppedEccentricFirstYieldCapacity } from './steppedBeamColumn.js';
-import { steppedCriticalLoad, steppedMode, type SteppedMember } from './steppedColumn.js';
+import { steppedBeamColumnOf, steppedEccentricFirstYieldCapacity } from './steppedBeamColumn.js';
 import { strengthModelKind } from './strengthModelKind.js';
 import type { CapacityResult, ColumnState, SoundSection, StrengthModel } from './types.js';
 
@@ -19,10 +18,8 @@ import type { CapacityResult, ColumnState, SoundSection, StrengthModel } from '.
  * with no modulus, area or strength anywhere takes no bending (as for the prismatic column).
  */
 function steppedEccentricCapacity(model: StrengthModel, s: ColumnState, sound: SoundSection): CapacityResult {
-  const member: SteppedMember = { ratio: sound.I / s.I, zone: Math.min(1, Math.max(0, sound.from / s.L)) };
-  const EI1 = s.E * s.I;
-  const { Pcr, phi, K } = steppedCriticalLoad(EI1, s.L, s.frame, s.r, member);
-  const mode = steppedMode(s.frame, s.r, member, phi);
+  const member = steppedBeamColumnOf(s, sound);
+  const { Pcr, K, mode } = member;
   const c = Math.max(mode.zoneFactor, mode.upperFactor);
   if (!(s.S > 0 && s.A > 0 && s.fy > 0 && sound.S > 0 && sound.A > 0)) return { capacity: 0, Pcr, K, c };
   // the equivalent bow of EN 1993-1-1 §5.3.2(11) for each segment as the critical cross-section, the larger
@@ -35,16 +32,7 @@ function steppedEccentricCapacity(model: StrengthModel, s: ColumnState, sound: S
           equivalentBowAmplitude(EN_IMPERFECTION[kind.curve!], s.A, s.S, s.fy, Pcr, mode.zoneFactor),
           equivalentBowAmplitude(EN_IMPERFECTION[kind.curve!], sound.A, sound.S, s.fy, Pcr, mode.upperFactor),
         ) + (kind.usesBow ? Math.abs(s.bow) : 0);
-  const e = s.eccentricity ?? { bottom: 0, top: 0 };
-  const t = s.transverse ?? { line: 0, top: 0 };
-  const topRatio = s.frame === 'sway' ? t.top : 0;
-  const capacity = steppedEccentricFirstYieldCapacity(
-    {
-      frame: s.frame, r: s.r, L: s.L, EI1, ratio: member.ratio, zone: member.zone, eB: e.bottom, eT: e.top,
-      q: t.line * s.L * s.L, h: topRatio * s.L, bow, Pcr, mode,
-    },
-    { A1: s.A, S1: s.S, A2: sound.A, S2: sound.S, fy: s.fy },
-  );
+  const capacity = steppedEccentricFirstYieldCapacity({ ...member, bow }, { A1: s.A, S1: s.S, A2: sound.A, S2: sound.S, fy: s.fy });
   return { capacity, Pcr, K, c };
 }
 

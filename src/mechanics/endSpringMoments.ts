@@ -41,7 +41,8 @@ export interface EndSpringMoments {
   drift: number;
 }
 
-function unstable(load: number, bow: number, Pcr: number): EndSpringMoments {
+/** No equilibrium at this load (P ≥ Pcr, a mechanism, a section that is gone): every value unknown. */
+export function unstableResponse(load: number, bow: number, Pcr: number): EndSpringMoments {
   return {
     stable: false,
     load,
@@ -66,9 +67,9 @@ export function endSpringMoments(EI: number, L: number, frame: Frame, r: EndRest
   const e0 = Math.abs(bow);
   // a section that is gone (a corrosion loss through the plates) or overflowed at a far design point
   // has no equilibrium to report: the values are written as unknown, not an error
-  if (!(EI > 0 && Number.isFinite(EI))) return unstable(P, e0, 0);
+  if (!(EI > 0 && Number.isFinite(EI))) return unstableResponse(P, e0, 0);
   const { Pcr, phi } = criticalLoad(EI, L, frame, r);
-  if (!(Pcr > 0) || P >= Pcr) return unstable(P, e0, Pcr);
+  if (!(Pcr > 0) || P >= Pcr) return unstableResponse(P, e0, Pcr);
   const ratio = P / Pcr;
   const a = (e0 * ratio) / (1 - ratio);
   const m = modeShape(frame, r, phi);

@@ -1,8 +1,8 @@
 import { maxAbsTwoSinusoids } from './beamColumn.js';
 import { brentRoot } from './brent.js';
 import { SMALL_LOAD } from './eccentricFirstYield.js';
-import type { SteppedMode } from './steppedColumn.js';
-import type { EndRestraint, Frame } from './types.js';
+import { steppedMemberOf, type SteppedMode } from './steppedColumn.js';
+import type { ColumnState, EndRestraint, Frame, SoundSection } from './types.js';
 
 /**
  * Second-order elastic solution of the stepped, spring-restrained beam-column (docs/beam-column.md,
@@ -134,36 +134,68 @@ export function steppedScratch(): SteppedScratch {
   return { system: new Float64Array(72), coefficients: new Float64Array(8), at: new Float64Array(1) };
 }
 
+/** φ at P, with the coefficients A₁ … D₂ solved into scratch.coefficients. */
+function solveAt(c: SteppedBeamColumn, P: number, scratch: SteppedScratch): number {
+  const phi = c.L * Math.sqrt(P / c.EI1);
+  fillSystem(scratch.system, c, phi);
+  solve8(scratch.system, scratch.coefficients);
+  return phi;
+}
+
+/**
+ * The largest |M| on segment `seg` (0 lower, 1 upper; it must have a length) with the bow's moment
+ * amplitude `bowMoment` (N·m, signed: Pcr·a times the mode's moment per unit), after solveAt; the place,
+ * as a share of the segment, goes to scratch.at[0]. σ = length·t, t ∈ [0, 1]: frequencies κ·length and
+ * κ_cr·length; the line load's constant moment E·I_i w/P = P q e_i/φ².
+ */
+function segmentPeak(c: SteppedBeamColumn, P: number, phi: number, seg: number, bowMoment: number, scratch: SteppedScratch): number {
+  const e = seg === 0 ? 1 : c.ratio;
+  const length = seg === 0 ? c.zone : 1 - c.zone;
+  const mode = c.mode.segments[seg];
+  const k = scratch.coefficients;
+  const offset = (P * c.q * e) / (phi * phi);
+  const Q = mode === undefined ? 0 : bowMoment;
+  return maxAbsTwoSinusoids(P, k[4 * seg], k[4 * seg + 1], (phi / Math.sqrt(e)) * length, Q, mode?.sin ?? 0, mode?.cos ?? 0, (mode?.kappa ?? 0) * length, scratch.at, offset);
+}
+
+/** Pcr·a of the bow amplified at P: a = |e0| (P/Pcr)/(1 − P/Pcr). */
+function bowAmplitude(c: SteppedBeamColumn, P: number): number {
+  const ratio = P / c.Pcr;
+  return (Math.abs(c.bow) * ratio) / (1 - ratio);
+}
+
 /**
  * The largest |M| (N·m) on the lower and the upper segment at the axial load P (0 < P < Pcr), the bow
  * on its unfavourable side for each (the larger of the two sides), into out[0] (lower) and out[1] (upper).
  */
 export function steppedMaxMoments(c: SteppedBeamColumn, P: number, scratch: SteppedScratch, out: Float64Array): void {
-  const phi = c.L * Math.sqrt(P / c.EI1);
-  fillSystem(scratch.system, c, phi);
-  const k = scratch.coefficients;
-  solve8(scratch.system, k);
-  const ratio = P / c.Pcr;
-  const amp = c.Pcr * ((Math.abs(c.bow) * ratio) / (1 - ratio));
+  const phi = solveAt(c, P, scratch);
+  const amp = c.Pcr * bowAmplitude(c, P);
   for (let seg = 0; seg < 2; seg++) {
-    const mode = c.mode.segments[seg];
-    const e = seg === 0 ? 1 : c.ratio;
     const length = seg === 0 ? c.zone : 1 - c.zone;
     if (!(length > 0)) {
       out[seg] = 0;
       continue;
     }
-    const kappa = phi / Math.sqrt(e);
-    // the line load's constant moment E·I_i w/P = P q e_i/φ²
-    const offset = (P * c.q * e) / (phi * phi);
-    const A = k[4 * seg], B = k[4 * seg + 1];
-    // σ = length·t, t ∈ [0, 1]: frequencies κ·length and κ_cr·length
-    const modeAmp = mode === undefined ? 0 : amp;
-    const Am = mode?.sin ?? 0, Bm = mode?.cos ?? 0, psi = (mode?.kappa ?? 0) * length;
-    const up = maxAbsTwoSinusoids(P, A, B, kappa * length, modeAmp, Am, Bm, psi, scratch.at, offset);
-    const down = modeAmp === 0 ? up : maxAbsTwoSinusoids(P, A, B, kappa * length, -modeAmp, Am, Bm, psi, scratch.at, offset);
-    out[seg] = Math.max(up, down);
+    const up = segmentPeak(c, P, phi, seg, amp, scratch);
+    out[seg] = amp === 0 || c.mode.segments[seg] === undefined ? up : Math.max(up, segmentPeak(c, P, phi, seg, -amp, scratch));
   }
+}
+
+/**
+ * The stepped member of a ColumnState with a corroded zone (`sound` the section above it), its stepped
+ * Pcr, K and first mode, and its actions per unit axial load (the top force acts only in a sway frame);
+ * `bow` |s.bow| unless given (the equivalent-bow models put their own). Shared by the capacity
+ * (columnCapacity.ts) and the connection moments (limitState/connectionResponse.ts).
+ */
+export function steppedBeamColumnOf(s: ColumnState, sound: SoundSection, bow = Math.abs(s.bow)): SteppedBeamColumn & { K: number } {
+  const { member, Pcr, K, mode } = steppedMemberOf(s, sound);
+  const e = s.eccentricity ?? { bottom: 0, top: 0 };
+  const t = s.transverse ?? { line: 0, top: 0 };
+  return {
+    frame: s.frame, r: s.r, L: s.L, EI1: s.E * s.I, ratio: member.ratio, zone: member.zone, eB: e.bottom, eT: e.top,
+    q: t.line * s.L * s.L, h: s.frame === 'sway' ? t.top * s.L : 0, bow, Pcr, K, mode,
+  };
 }
 
 /** The two segments' sections for the first-yield check: lower (the zone) and upper (sound). */
@@ -243,12 +275,9 @@ export function steppedResponse(c: SteppedBeamColumn, P: number): SteppedRespons
     return { stable: false, rotation: { bottom: Infinity, top: Infinity }, springMoment: { bottom: Infinity, top: Infinity }, memberMax: Infinity, memberMaxAt: NaN, drift: Infinity, bowSide: 1 };
   }
   const scratch = steppedScratch();
-  const phi = c.L * Math.sqrt(P / c.EI1);
-  fillSystem(scratch.system, c, phi);
+  const phi = solveAt(c, P, scratch);
   const k = scratch.coefficients;
-  solve8(scratch.system, k);
-  const ratio = P / c.Pcr;
-  const a = (Math.abs(c.bow) * ratio) / (1 - ratio);
+  const a = bowAmplitude(c, P);
   const amp = c.Pcr * a;
   const lambda = 1 - c.zone;
   const k1 = phi, k2 = phi / Math.sqrt(c.ratio);
@@ -260,10 +289,7 @@ export function steppedResponse(c: SteppedBeamColumn, P: number): SteppedRespons
       const length = seg === 0 ? c.zone : lambda;
       const mode = c.mode.segments[seg];
       if (!(length > 0) || mode === undefined) continue;
-      const e = seg === 0 ? 1 : c.ratio;
-      const kappa = seg === 0 ? k1 : k2;
-      const offset = (P * c.q * e) / (phi * phi);
-      const v = maxAbsTwoSinusoids(P, k[4 * seg], k[4 * seg + 1], kappa * length, -s * amp, mode.sin, mode.cos, mode.kappa * length, scratch.at, offset);
+      const v = segmentPeak(c, P, phi, seg, -s * amp, scratch);
       if (v > best) { best = v; bestAt = (mode.from + scratch.at[0] * length) * c.L; side = s; }
     }
   }

@@ -2,7 +2,7 @@ import { aiscCapacity } from './aisc360.js';
 import { EN_IMPERFECTION, enCapacity } from './en1993.js';
 import { equivalentBowCapacity } from './equivalentBow.js';
 import { firstYieldCapacity } from './firstYield.js';
-import { steppedCriticalLoad, steppedMode, type SteppedMember } from './steppedColumn.js';
+import { steppedMemberOf } from './steppedColumn.js';
 import { strengthModelKind } from './strengthModelKind.js';
 import type { CapacityResult, ColumnState, SoundSection, StrengthModel } from './types.js';
 
@@ -28,9 +28,7 @@ import type { CapacityResult, ColumnState, SoundSection, StrengthModel } from '.
 export function steppedColumnCapacity(model: StrengthModel, s: ColumnState, sound: SoundSection): CapacityResult {
   const kind = strengthModelKind(model);
   if (!kind) throw new RangeError(`unknown strength model '${String(model)}'`);
-  const member: SteppedMember = { ratio: sound.I / s.I, zone: Math.min(1, Math.max(0, sound.from / s.L)) };
-  const { Pcr, phi, K } = steppedCriticalLoad(s.E * s.I, s.L, s.frame, s.r, member);
-  const mode = steppedMode(s.frame, s.r, member, phi);
+  const { Pcr, K, mode } = steppedMemberOf(s, sound);
   const cZone = mode.zoneFactor;
   const cUpper = mode.upperFactor;
   const c = Math.max(cZone, cUpper);

@@ -1,7 +1,7 @@
 import { brentRoot } from './brent.js';
 import { WEIGHT_LENGTH, weightsInto, W_ALPHA_A, W_ALPHA_B, W_BETA_A, W_BETA_B, W_TAU, W_UPS } from './characteristicEquation.js';
 import { criticalPhi } from './criticalLoad.js';
-import type { EndRestraint, Frame } from './types.js';
+import type { ColumnState, EndRestraint, Frame, SoundSection } from './types.js';
 
 /**
  * Exact buckling of the spring-restrained column made of two prismatic segments (docs/mechanics.md,
@@ -300,4 +300,14 @@ export function steppedMode(frame: Frame, r: EndRestraint, m: SteppedMember, phi
     upperFactor,
     segments: [segment(base, 1, 0, a), segment(atZone, rho, a, 1 - a)],
   };
+}
+
+/**
+ * The stepped member of a column state with a corroded zone (A, I, S of `s` over the lowest sound.from,
+ * `sound` above): ρ and ζ, its critical load, K and first mode, R referred to E·I of the zone.
+ */
+export function steppedMemberOf(s: ColumnState, sound: SoundSection): { member: SteppedMember; Pcr: number; phi: number; K: number; mode: SteppedMode } {
+  const member: SteppedMember = { ratio: sound.I / s.I, zone: Math.min(1, Math.max(0, sound.from / s.L)) };
+  const { Pcr, phi, K } = steppedCriticalLoad(s.E * s.I, s.L, s.frame, s.r, member);
+  return { member, Pcr, phi, K, mode: steppedMode(s.frame, s.r, member, phi) };
 }

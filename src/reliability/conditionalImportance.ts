@@ -21,6 +21,7 @@ import { betaOf, type ConditionalCheck, type ConditionalFormResult, type Conditi
 import { DEFAULT_STEP, finiteDifferenceGradient } from './finiteDifferenceGradient.js';
 import { BETA_TOLERANCE, statisticalInterval } from './formCheck.js';
 import { CONDITIONAL_IS_STREAM_BASE } from './streams.js';
+import { isEstimate } from './importanceSampling.js';
 import { normalCdf } from '../probability/normal.js';
 import { normalStream } from '../probability/rng.js';
 import { throwIfInterrupted } from '../runtime/interruptFlag.js';
@@ -78,13 +79,10 @@ export interface ConditionalImportanceOptions {
   maxSamples?: number;
 }
 
-/** Weighted mean and CoV of n samples with Σ w·1 and Σ w²·1 (w = 1 for crude Monte Carlo). */
+/** Weighted mean (at most 1) and CoV of n samples with Σ w·1 and Σ w²·1 (w = 1 for crude Monte Carlo): importanceSampling.ts's estimator. */
 function weightedEstimate(n: number, sumW: number, sumW2: number): { p: number; cov: number } {
-  if (n === 0 || sumW === 0) return { p: 0, cov: Infinity };
-  const p = sumW / n;
-  if (n < 2) return { p, cov: Infinity };
-  const variance = Math.max(0, sumW2 / n - p * p) / (n - 1);
-  return { p, cov: Math.sqrt(variance) / p };
+  const e = isEstimate(n, sumW, sumW2);
+  return { p: e.pf, cov: e.cov };
 }
 
 const dot = (a: ArrayLike<number>, b: ArrayLike<number>): number => {

@@ -1,7 +1,7 @@
 /**
  * The restraint study about either principal axis: the ends about the governing axis are varied,
  * β is the whole column's (min over both axes), and the other axis alone may cap it.
- * Scenarios are invented; the checks are identities of the method, not outside values.
+ * Scenarios are invented; the checks are identities of the method, not outside values (common practice).
  */
 import { describe, expect, it } from 'vitest';
 import { buildColumnModel } from '../../src/limitState/columnModel.js';

@@ -1,6 +1,7 @@
 // A sweep case's scenario built from the shape-checked base (each varied value checked against its
 // own field's rule) must be the scenario the whole shape check gives, key order included, and a
-// refused value must get the whole check's message. The scenarios are invented for the test.
+// refused value must get the whole check's message. The scenarios are invented for the test; a consistency
+// check of two code paths (common practice), no outside value.
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterEach, describe, expect, it, vi } from 'vitest';
